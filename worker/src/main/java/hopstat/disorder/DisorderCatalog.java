@@ -1,0 +1,29 @@
+package hopstat.disorder;
+
+import java.util.Collection;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.Optional;
+
+/** The built-in disorder kinds, by spec name. */
+public final class DisorderCatalog {
+
+  private static final Map<String, DisorderKind> KINDS = build();
+
+  private DisorderCatalog() {}
+
+  private static Map<String, DisorderKind> build() {
+    Map<String, DisorderKind> m = new LinkedHashMap<>();
+    m.put(OnsiteBoxDisorder.NAME, new OnsiteBoxDisorder());
+    return Collections.unmodifiableMap(m);
+  }
+
+  public static Optional<DisorderKind> find(String name) {
+    return Optional.ofNullable(KINDS.get(name));
+  }
+
+  public static Collection<DisorderKind> all() {
+    return KINDS.values();
+  }
+}

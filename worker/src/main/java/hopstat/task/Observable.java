@@ -1,0 +1,42 @@
+package hopstat.task;
+
+import hopstat.lattice.Boundary;
+import hopstat.model.Model;
+import hopstat.model.SymmetryClass;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * A per-realisation measurement requested by name in the spec's {@code observables}. Implementations
+ * are stateless adapters from a {@link RealisationContext} to kernels; scratch lives in the
+ * context's workspace.
+ */
+public interface Observable {
+
+  /** Name used in the spec. */
+  String name();
+
+  /** Meaning, conventions and sources (shown by the CLI and the README). */
+  String description();
+
+  /** The numbers written per realisation, in order. */
+  List<Quantity> quantities();
+
+  /** True if the observable needs eigenvectors of the occupied states (E &lt; E_F). */
+  boolean needsOccupiedStates();
+
+  /**
+   * Why the observable cannot be used with this model, boundary and effective symmetry class (the
+   * model's class restricted by the disorder), or empty if it can.
+   */
+  Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass);
+
+  /**
+   * Computes the quantities of one realisation.
+   *
+   * @param context read (lazily computes and caches spectra)
+   * @param out receives one entry per quantity
+   */
+  void compute(RealisationContext context, Map<String, Double> out);
+}
