@@ -23,6 +23,14 @@ public interface Observable {
   /** The numbers written per realisation, in order. */
   List<Quantity> quantities();
 
+  /**
+   * Extra parameters this observable reads from the point (e.g. a target error), with defaults.
+   * They join the spec's parameter namespace.
+   */
+  default List<hopstat.model.ParameterInfo> parameters() {
+    return List.of();
+  }
+
   /** True if the observable needs eigenvectors of the occupied states (E &lt; E_F). */
   boolean needsOccupiedStates();
 

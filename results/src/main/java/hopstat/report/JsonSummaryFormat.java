@@ -1,0 +1,130 @@
+package hopstat.report;
+
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonGenerator;
+import hopstat.statistics.IntegerDistribution;
+import hopstat.statistics.MeanEstimate;
+import hopstat.statistics.PointSummary;
+import hopstat.statistics.QuantitySummary;
+import hopstat.statistics.SampleStatisticsOps;
+import hopstat.statistics.Summary;
+import java.io.IOException;
+import java.io.Writer;
+import java.util.Map;
+
+/**
+ * {@code summary.json}: the numbers of {@code summary.csv} plus, for integer-valued invariants, the
+ * distribution of rounded values per point (value → count and fraction), the Wilson interval of the
+ * modal fraction and the largest distance of any sample from its nearest integer. States the
+ * estimator, error measure and confidence level. Contains nothing that depends on when, where or
+ * with how many threads the run happened, so equal journals give byte-identical files.
+ */
+final class JsonSummaryFormat implements ReportFormat {
+
+  /** Layout version of summary.json. */
+  static final int FORMAT_VERSION = 1;
+
+  @Override
+  public String fileName() {
+    return "summary.json";
+  }
+
+  @Override
+  public void write(Summary s, Writer out) throws IOException {
+    JsonGenerator g = new JsonFactory().createGenerator(out);
+    g.useDefaultPrettyPrinter();
+    g.writeStartObject();
+    g.writeNumberField("format", FORMAT_VERSION);
+    g.writeStringField("name", s.name());
+    g.writeStringField("specHash", s.specHash());
+    g.writeObjectFieldStart("statistics");
+    g.writeStringField("estimator", MeanEstimate.ESTIMATOR);
+    g.writeStringField("errorMeasure", MeanEstimate.ERROR_MEASURE);
+    g.writeStringField("interval", MeanEstimate.INTERVAL);
+    g.writeNumberField("confidenceLevel", SampleStatisticsOps.CONFIDENCE);
+    g.writeStringField("modalFractionInterval", "Wilson score");
+    g.writeNumberField("quantisationTolerance", SampleStatisticsOps.QUANTISATION_TOLERANCE);
+    g.writeStringField("excludes", "finite-size and other systematic errors; only disorder-sampling error is included");
+    g.writeEndObject();
+    g.writeArrayFieldStart("grid");
+    for (String name : s.gridNames()) {
+      g.writeString(name);
+    }
+    g.writeEndArray();
+    g.writeNumberField("plannedPerPoint", s.plannedPerPoint());
+    g.writeNumberField("done", s.done());
+    g.writeNumberField("failed", s.failed());
+    g.writeArrayFieldStart("points");
+    for (PointSummary p : s.points()) {
+      g.writeStartObject();
+      g.writeNumberField("index", p.index());
+      g.writeObjectFieldStart("coordinates");
+      for (Map.Entry<String, Double> e : p.coordinates().entrySet()) {
+        g.writeNumberField(e.getKey(), e.getValue());
+      }
+      g.writeEndObject();
+      g.writeNumberField("done", p.done());
+      g.writeNumberField("failed", p.failed());
+      if (!p.failureReasons().isEmpty()) {
+        g.writeObjectFieldStart("failureReasons");
+        for (Map.Entry<String, Integer> e : p.failureReasons().entrySet()) {
+          g.writeNumberField(e.getKey(), e.getValue());
+        }
+        g.writeEndObject();
+      }
+      g.writeObjectFieldStart("quantities");
+      for (QuantitySummary q : p.quantities()) {
+        writeQuantity(g, q);
+      }
+      g.writeEndObject();
+      g.writeEndObject();
+    }
+    g.writeEndArray();
+    g.writeEndObject();
+    g.flush();
+    out.write('\n');
+  }
+
+  private static void writeQuantity(JsonGenerator g, QuantitySummary q) throws IOException {
+    MeanEstimate m = q.mean();
+    g.writeObjectFieldStart(q.name());
+    g.writeNumberField("n", m.n());
+    number(g, "mean", m.mean());
+    number(g, "stderr", m.standardError());
+    number(g, "ci95Low", m.ciLow());
+    number(g, "ci95High", m.ciHigh());
+    number(g, "std", m.standardDeviation());
+    number(g, "median", q.median());
+    number(g, "min", q.min());
+    number(g, "max", q.max());
+    IntegerDistribution d = q.integer();
+    if (d != null) {
+      g.writeObjectFieldStart("integer");
+      g.writeNumberField("modal", d.modalValue());
+      number(g, "modalFraction", d.modalFraction());
+      number(g, "modalFractionWilsonLow", d.modalWilsonLow());
+      number(g, "modalFractionWilsonHigh", d.modalWilsonHigh());
+      number(g, "maxDistanceToInteger", d.maxDistanceToInteger());
+      g.writeNumberField("nonQuantised", d.nonQuantised());
+      g.writeObjectFieldStart("distribution");
+      for (Map.Entry<Long, Integer> e : d.counts().entrySet()) {
+        g.writeObjectFieldStart(Long.toString(e.getKey()));
+        g.writeNumberField("count", e.getValue());
+        number(g, "fraction", (double) e.getValue() / d.n());
+        g.writeEndObject();
+      }
+      g.writeEndObject();
+      g.writeEndObject();
+    }
+    g.writeEndObject();
+  }
+
+  /** JSON has no NaN: undefined numbers are written as null. */
+  private static void number(JsonGenerator g, String field, double x) throws IOException {
+    if (Double.isFinite(x)) {
+      g.writeNumberField(field, x);
+    } else {
+      g.writeNullField(field);
+    }
+  }
+}
