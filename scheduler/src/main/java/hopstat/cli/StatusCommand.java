@@ -1,0 +1,122 @@
+package hopstat.cli;
+
+import hopstat.expand.StudyPlan;
+import hopstat.queue.JournalReader;
+import hopstat.queue.RunDirectory;
+import hopstat.statistics.PointSummary;
+import hopstat.statistics.QuantitySummary;
+import hopstat.statistics.Summary;
+import java.io.IOException;
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Stream;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.ParentCommand;
+
+/** {@code hopstat status DIR}: progress and current estimates, readable while a run is going. */
+@Command(name = "status", description = "Show a run's progress per grid point, failures, current mean ± stderr and an ETA.")
+final class StatusCommand implements Callable<Integer> {
+
+  private static final Pattern SINCE = Pattern.compile("since (\\S+)");
+
+  @ParentCommand HopstatCommand root;
+
+  @Parameters(index = "0", paramLabel = "DIR", description = "Run directory.")
+  Path dirPath;
+
+  @Override
+  public Integer call() throws IOException {
+    RunDirectory dir = RunDirectory.open(dirPath);
+    StudyPlan plan = RunSummaries.plan(dir);
+    Summary s = RunSummaries.summarise(dir, plan);
+    PrintStream out = root.out;
+    long finished = s.done() + s.failed();
+    long planned = plan.plannedTasks();
+    String owner = owner(dir.path());
+    out.printf(Locale.ROOT, "run %s: %d of %s%d realisations journaled (%d failed); %s%n", s.name(), finished,
+        plan.spec().adaptiveSampling().isPresent() ? "at most " : "", planned, s.failed(), owner == null ? "no process is working on it" : "in progress: " + owner);
+    if (owner != null) {
+      eta(dir, owner, planned - finished).ifPresent(out::println);
+    }
+    List<String> header = new ArrayList<>(s.gridNames());
+    header.add("done");
+    header.add("failed");
+    for (String q : s.quantityNames()) {
+      header.add(q + " (mean ± stderr)");
+    }
+    out.println(String.join("  ", header));
+    for (PointSummary p : s.points()) {
+      List<String> row = new ArrayList<>();
+      for (String g : s.gridNames()) {
+        row.add(String.format(Locale.ROOT, "%g", p.coordinates().get(g)));
+      }
+      row.add(Integer.toString(p.done()));
+      row.add(Integer.toString(p.failed()));
+      for (String q : s.quantityNames()) {
+        QuantitySummary qs = p.quantities().stream().filter(x -> x.name().equals(q)).findFirst().orElse(null);
+        row.add(qs == null ? "-" : String.format(Locale.ROOT, "%.5g ± %.2g", qs.mean().mean(), qs.mean().standardError()));
+      }
+      out.println(String.join("  ", row));
+      for (Map.Entry<String, Integer> e : p.failureReasons().entrySet()) {
+        out.printf(Locale.ROOT, "    failed %dx: %s%n", e.getValue(), e.getKey());
+      }
+    }
+    return ExitCode.OK;
+  }
+
+  /** Who holds the directory's lock, or null if nobody does (tested by trying it). */
+  private static String owner(Path dir) throws IOException {
+    Path lockFile = dir.resolve("lock");
+    if (!Files.exists(lockFile)) {
+      return null;
+    }
+    try (var channel = java.nio.channels.FileChannel.open(lockFile, java.nio.file.StandardOpenOption.WRITE)) {
+      var lock = channel.tryLock();
+      if (lock != null) {
+        lock.release();
+        return null;
+      }
+    } catch (java.nio.channels.OverlappingFileLockException e) {
+      // held inside this very JVM: in progress
+    }
+    return new String(Files.readAllBytes(lockFile), StandardCharsets.UTF_8).trim();
+  }
+
+  /** ETA from the rate of the newest journal file since its writer's start. */
+  private static java.util.Optional<String> eta(RunDirectory dir, String owner, long remaining) throws IOException {
+    Matcher m = SINCE.matcher(owner);
+    if (!m.find()) {
+      return java.util.Optional.empty();
+    }
+    Instant since = Instant.parse(m.group(1));
+    Path newest;
+    try (Stream<Path> files = Files.list(dir.journalDir())) {
+      newest = files.filter(p -> p.toString().endsWith(".jsonl")).max(Path::compareTo).orElse(null);
+    }
+    if (newest == null) {
+      return java.util.Optional.empty();
+    }
+    long lines;
+    try (Stream<String> l = Files.lines(newest)) {
+      lines = l.count();
+    }
+    double elapsed = Duration.between(since, Instant.now()).toMillis() / 1000.0;
+    if (lines == 0 || elapsed <= 0) {
+      return java.util.Optional.of("rate: not measurable yet");
+    }
+    double rate = lines / elapsed;
+    return java.util.Optional.of(String.format(Locale.ROOT, "rate %.2f realisations/s this session; ETA %s", rate, CheckCommand.duration(remaining / rate)));
+  }
+}
