@@ -16,9 +16,10 @@ import java.util.Optional;
  * plaquette collects the phase e^{2πi α}. On the torus e^{2πi α x} must be periodic in x, so L
  * must be a multiple of q ({@link #whyNotValid}). For coprime p, q the spectrum has q bands; the
  * Chern number of the r lowest bands (E_F in the r-th gap) solves the Diophantine equation r = q
- * s_r + p t_r, |t_r| ≤ q/2 (Thouless, Kohmoto, Nightingale, den Nijs, PRL 49, 405 (1982)); with
- * this gauge and sign of the phase the Bott index of the r lowest bands equals t_r (fixed by a
- * test; flipping the sign of p flips it).
+ * s_r + p t_r, |t_r| ≤ q/2 (Thouless, Kohmoto, Nightingale, den Nijs, PRL 49, 405 (1982)) up to a
+ * convention-dependent sign; with this sign of the phase the Bott index (and hence C in the
+ * convention of {@link QwzModel}) of the r lowest bands is −t_r, e.g. C = −1 for the lowest band at
+ * flux 1/3 (fixed by a test; flipping the sign of p flips it).
  */
 public final class FluxSquareModel implements Model {
 
@@ -33,8 +34,8 @@ public final class FluxSquareModel implements Model {
   public String description() {
     return "square lattice with flux p/q per plaquette (Harper-Hofstadter), Landau gauge:"
         + " H = -t sum_r [c+_{r+x} c_r + exp(2 pi i (p/q) x) c+_{r+y} c_r + h.c.]; periodic samples need L a multiple of q;"
-        + " Chern number of the r lowest bands = t_r of r = q s_r + p t_r, |t_r| <= q/2 (Thouless, Kohmoto,"
-        + " Nightingale, den Nijs, PRL 49, 405 (1982)).";
+        + " Chern number (bott convention) of the r lowest bands = -t_r with r = q s_r + p t_r, |t_r| <= q/2 (Thouless,"
+        + " Kohmoto, Nightingale, den Nijs, PRL 49, 405 (1982)); e.g. -1 for the lowest band at flux 1/3.";
   }
 
   @Override
