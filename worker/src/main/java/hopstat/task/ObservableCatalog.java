@@ -20,6 +20,7 @@ public final class ObservableCatalog {
     register(m, new ChernMarkerObservable());
     register(m, new ThreeRegionChernObservable());
     register(m, new SpinChernObservable());
+    register(m, new SpinBottObservable());
     register(m, new Z2Observable());
     return Collections.unmodifiableMap(m);
   }

@@ -1,21 +1,16 @@
 package hopstat.task;
 
-import hopstat.invariant.SpinBottKernel;
-import hopstat.invariant.SpinBottResult;
-import hopstat.invariant.SpinBottWorkspace;
 import hopstat.lattice.Boundary;
 import hopstat.model.Model;
-import hopstat.model.SpinZOperator;
 import hopstat.model.SymmetryClass;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
 /**
- * {@code z2}: the Z2 index, dispatching on the effective class and dimension. Implemented here:
- * class AII in d = 2, via the spin Chern number of the P S_z P splitting (Prodan, PRB 80, 125327
- * (2009)) evaluated with Bott indices ({@link SpinBottKernel}); S_z need not be conserved, only
- * declared by the model. Other (class, d) combinations are reported as not applicable.
+ * {@code z2}: the one Z2 invariant name for every (class, dimension), 0 trivial, 1 non-trivial, so
+ * its mean over realisations is the fraction of non-trivial samples. Dispatches on the effective
+ * class and the dimension; implemented on this branch: class AII in d = 2 ({@link Z2ClassAii2d}).
  */
 final class Z2Observable implements Observable {
 
@@ -28,18 +23,12 @@ final class Z2Observable implements Observable {
 
   @Override
   public String description() {
-    return "Z2 index nu in {0, 1} (1 = non-trivial). Class AII, d = 2, periodic sample: nu = (spin Chern number) mod 2,"
-        + " spin Chern number = (B+ - B-)/2 with B+/- the Bott indices of the occupied states with positive/negative"
-        + " eigenvalue of P S_z P (Prodan, PRB 80, 125327 (2009); spin Bott index of Huang & Liu, PRL 121, 126401 (2018));"
-        + " valid while z2-spin-gap (min |eig P S_z P|) stays away from 0; needs a model that declares S_z.";
+    return "Z2 invariant, 0 trivial / 1 non-trivial (mean = fraction non-trivial). " + Z2ClassAii2d.description();
   }
 
   @Override
   public List<Quantity> quantities() {
-    return List.of(
-        new Quantity("z2", true, "1", "Z2 index, 0 trivial, 1 non-trivial"),
-        new Quantity("z2-spin-bott", true, "1", "class AII d = 2: spin Chern number (B+ - B-)/2, unrounded"),
-        new Quantity("z2-spin-gap", false, "1", "class AII d = 2: min |eigenvalue| of P S_z P (1 if S_z conserved)"));
+    return List.of(new Quantity("z2", true, "1", "Z2 invariant: 0 trivial, 1 non-trivial (class AII d = 2: spin Chern number mod 2)"));
   }
 
   @Override
@@ -50,14 +39,7 @@ final class Z2Observable implements Observable {
   @Override
   public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
     if (effectiveClass == SymmetryClass.AII && model.dimension() == 2) {
-      if (model.spinZ().isEmpty()) {
-        return Optional.of("z2 for class AII in d = 2 uses the spin Chern number and needs a model that declares S_z; "
-            + model.name() + " does not");
-      }
-      if (boundary != Boundary.PERIODIC) {
-        return Optional.of("z2 for class AII in d = 2 needs \"boundary\": \"periodic\"");
-      }
-      return Optional.empty();
+      return Z2ClassAii2d.whyNotApplicable(model, boundary);
     }
     return Optional.of("z2 is implemented for class AII in d = 2; the point has class " + effectiveClass + " in d = " + model.dimension());
   }
@@ -67,21 +49,9 @@ final class Z2Observable implements Observable {
     Model model = context.model();
     SymmetryClass effective = SymmetryCheckOps.effectiveClass(model, context.point().disorder());
     if (effective == SymmetryClass.AII && model.dimension() == 2) {
-      computeClassAii2d(context, out);
+      Z2ClassAii2d.compute(context, out);
       return;
     }
     throw new IllegalStateException("z2 is not implemented for class " + effective + " in d = " + model.dimension());
-  }
-
-  private static void computeClassAii2d(RealisationContext context, Map<String, Double> out) {
-    SpinZOperator spin = context.model().spinZ().orElseThrow(() -> new IllegalStateException("no S_z operator"));
-    SpinBottWorkspace ws = context.workspace().scratch(SpinBottWorkspace.class, SpinBottWorkspace::new);
-    SpinBottResult r = SpinBottKernel.compute(context.lattice(), context.occupiedStates(), spin, ws);
-    if (!r.converged()) {
-      throw new ConvergenceFailure("an eigen-solver did not converge in the spin-resolved Bott index");
-    }
-    out.put("z2", r.z2());
-    out.put("z2-spin-bott", r.spinBott());
-    out.put("z2-spin-gap", r.spinGap());
   }
 }

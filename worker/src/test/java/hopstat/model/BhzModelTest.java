@@ -27,15 +27,15 @@ class BhzModelTest {
   @CsvSource({"-1.0, 0, 0", "1.0, 1, 1", "2.0, 1, 1", "6.0, 1, -1", "9.0, 0, 0"})
   void z2AndSpinChernWithoutRashba(double mass, int z2, int spinChern) {
     Map<String, Double> v = aPoint("bhz").with("A", 1.0).with("B", 1.0).with("M", mass).with("rashba", 0.0)
-        .size(L).observing("spin-chern", "z2", "bott", "gap").values(3L);
+        .size(L).observing("spin-chern", "z2", "spin-bott", "bott", "gap").values(3L);
     assertThat(v.get("gap")).isGreaterThan(0.5);
     assertThat(v.get("chern-up")).isCloseTo(spinChern, within(1e-6));
     assertThat(v.get("chern-down")).isCloseTo(-spinChern, within(1e-6));
     assertThat(v.get("spin-chern")).isCloseTo(spinChern, within(1e-6));
-    assertThat(v.get("z2-spin-bott")).isCloseTo(spinChern, within(1e-6));
+    assertThat(v.get("spin-bott")).isCloseTo(spinChern, within(1e-6));
     assertThat(v.get("z2")).isEqualTo(z2);
     // S_z conserved: P S_z P has eigenvalues exactly ±1 (derived)
-    assertThat(v.get("z2-spin-gap")).isCloseTo(1.0, within(1e-9));
+    assertThat(v.get("spin-bott-gap")).isCloseTo(1.0, within(1e-9));
     assertThat(v.get("bott")).isCloseTo(0.0, within(1e-6));
   }
 
@@ -49,15 +49,15 @@ class BhzModelTest {
   @ParameterizedTest
   @CsvSource({"-1.0, 0.3, 0.0, 0", "2.0, 0.3, 0.0, 1", "6.0, 0.6, 0.0, 1", "9.0, 0.6, 0.0, 0", "2.0, 0.3, 1.0, 1", "9.0, 0.3, 1.0, 0"})
   void z2WithRashbaAndWeakDisorder(double mass, double rashba, double w, int z2) {
-    var point = aPoint("bhz").with("A", 1.0).with("B", 1.0).with("M", mass).with("rashba", rashba).size(L).observing("z2", "gap");
+    var point = aPoint("bhz").with("A", 1.0).with("B", 1.0).with("M", mass).with("rashba", rashba).size(L).observing("z2", "spin-bott", "gap");
     if (w > 0) {
       point.boxDisorder(w, Map.of());
     }
     Map<String, Double> v = point.values(5L);
     assertThat(v.get("gap")).isGreaterThan(0.5);
     assertThat(v.get("z2")).isEqualTo(z2);
-    assertThat(Math.abs(v.get("z2-spin-bott"))).isCloseTo(z2, within(1e-3));
-    assertThat(v.get("z2-spin-gap")).isGreaterThan(0.5).isLessThan(1.0);
+    assertThat(Math.abs(v.get("spin-bott"))).isCloseTo(z2, within(1e-3));
+    assertThat(v.get("spin-bott-gap")).isGreaterThan(0.5).isLessThan(1.0);
   }
 
   /** spin-chern needs S_z conservation: with rashba ≠ 0 the realisation must fail with a reason (derived: R mixes spins). */
