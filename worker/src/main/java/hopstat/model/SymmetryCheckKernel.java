@@ -40,8 +40,8 @@ public final class SymmetryCheckKernel {
     if (operator.orbitalsPerSite() != o) {
       throw new IllegalArgumentException("operator acts on " + operator.orbitalsPerSite() + " orbitals per site, lattice has " + o);
     }
-    if (operator.siteSigns().length != 0 && operator.siteSigns().length != lattice.sites()) {
-      throw new IllegalArgumentException("operator has " + operator.siteSigns().length + " site signs, lattice has " + lattice.sites() + " sites");
+    if (operator.siteSignCount() != 0 && operator.siteSignCount() != lattice.sites()) {
+      throw new IllegalArgumentException("operator has " + operator.siteSignCount() + " site signs, lattice has " + lattice.sites() + " sites");
     }
     workspace.ensure(o);
     double conj = operator.isAntiunitary() ? -1.0 : 1.0;

@@ -94,6 +94,11 @@ public record SymmetryOperator(Symmetry symmetry, int orbitalsPerSite, double[] 
     return symmetry == Symmetry.TIME_REVERSAL ? 1.0 : -1.0;
   }
 
+  /** Number of per-site signs given (0 = unstaggered, all +1). */
+  public int siteSignCount() {
+    return siteSigns.length;
+  }
+
   /** The sign of site s (+1 when no staggering was given). */
   public double siteSign(int site) {
     return siteSigns.length == 0 ? 1.0 : siteSigns[site];
