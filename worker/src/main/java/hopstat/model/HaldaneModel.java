@@ -15,8 +15,8 @@ import java.util.List;
  * nearest-neighbour bonds d1, d2 that lead from j to i (Haldane's convention). Geometry as in
  * {@link HoneycombLattices}: with a1 = (1, 0), a2 = (1/2, √3/2), the A → A hops along a1, a2 − a1
  * and −a2 have ν = −1, the B → B hops along the same vectors ν = +1 (derived from the bond
- * geometry). Clean phase diagram: |C| = 1 iff |M| &lt; 3√3 |t2 sin φ|, else C = 0 (Haldane 1988); the
- * sign of C for given φ is fixed by a test. At φ = ±π/2 the spectrum is symmetric about E = 0, so
+ * geometry). Clean phase diagram: |C| = 1 iff |M| &lt; 3√3 |t2 sin φ|, else C = 0 (Haldane 1988); in
+ * this convention C = −1 for t2 sin φ &gt; 0 and +1 for t2 sin φ &lt; 0 (fixed by a test). At φ = ±π/2 the spectrum is symmetric about E = 0, so
  * E_F = 0 lies in the gap; for other φ the gap centre moves by −3 t2 cos φ.
  */
 public final class HaldaneModel implements Model {
@@ -33,7 +33,8 @@ public final class HaldaneModel implements Model {
     return "Haldane honeycomb Chern insulator (Haldane, PRL 61, 2015 (1988)): H = t1 sum_<ij> c+_i c_j"
         + " + t2 sum_<<ij>> exp(i nu_ij phi) c+_i c_j + M sum_i eps_i n_i, eps = +1 (A), -1 (B),"
         + " nu_ij = sign(d1 x d2)_z as in Haldane; L x L cells of 2 sites, positions in oblique cell coordinates;"
-        + " |C| = 1 iff |M| < 3 sqrt(3) |t2 sin phi|.";
+        + " |C| = 1 iff |M| < 3 sqrt(3) |t2 sin phi| (bott/chern-marker C = -1 for t2 sin phi > 0);"
+        + " the gap centre at the Dirac points is E = -3 t2 cos phi (use it as fermiEnergy).";
   }
 
   @Override
