@@ -4,6 +4,7 @@ import hopstat.lattice.Boundary;
 import hopstat.lattice.HamiltonianBuilder;
 import hopstat.lattice.Lattice;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * A lattice model: geometry, clean Hamiltonian and how an onsite potential couples to it.
@@ -53,5 +54,34 @@ public interface Model {
   /** Adds V on one orbital of one site (for independent-per-orbital disorder). */
   default void addOrbitalPotential(Lattice lattice, int site, int orbital, double value, HamiltonianBuilder out) {
     out.addOnsite(site * lattice.orbitalsPerSite() + orbital, value);
+  }
+
+  /**
+   * The T, C, S operators this model declares on its samples, for the numerical symmetry checks
+   * ({@link SymmetryCheckKernel}). Default: none declared, so nothing is checked.
+   */
+  default SymmetryOperators symmetryOperators() {
+    return SymmetryOperators.NONE;
+  }
+
+  /**
+   * The model's S_z operator, if it has a spin degree of freedom with a diagonal S_z in its orbital
+   * basis (used by spin-resolved invariants). Default: none.
+   */
+  default Optional<SpinZOperator> spinZ() {
+    return Optional.empty();
+  }
+
+  /**
+   * Why these parameters cannot be used with this sample size and boundary (e.g. a magnetic unit
+   * cell that does not fit the torus), or empty if they can. Called by spec validation after
+   * defaults are applied; a reason is reported as bad input. Default: always valid.
+   *
+   * @param parameters read: the resolved parameters of one grid point
+   * @param linearSize L
+   * @param boundary boundary condition
+   */
+  default Optional<String> whyNotValid(ParameterValues parameters, int linearSize, Boundary boundary) {
+    return Optional.empty();
   }
 }

@@ -16,6 +16,10 @@ public final class ModelCatalog {
   private static Map<String, Model> build() {
     Map<String, Model> m = new LinkedHashMap<>();
     register(m, new QwzModel());
+    register(m, new HaldaneModel());
+    register(m, new FluxSquareModel());
+    register(m, new PipSquareModel());
+    register(m, new BhzModel());
     return Collections.unmodifiableMap(m);
   }
 

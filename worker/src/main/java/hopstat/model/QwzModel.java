@@ -35,6 +35,12 @@ public final class QwzModel implements Model {
     return SymmetryClass.A;
   }
 
+  /** Class A: no T, C or S to declare, so nothing is checked. */
+  @Override
+  public SymmetryOperators symmetryOperators() {
+    return SymmetryOperators.NONE;
+  }
+
   @Override
   public int dimension() {
     return 2;

@@ -17,6 +17,11 @@ public final class ObservableCatalog {
     Map<String, Observable> m = new LinkedHashMap<>();
     register(m, new GapObservable());
     register(m, new BottObservable());
+    register(m, new ChernMarkerObservable());
+    register(m, new ThreeRegionChernObservable());
+    register(m, new SpinChernObservable());
+    register(m, new SpinBottObservable());
+    register(m, new Z2Observable());
     return Collections.unmodifiableMap(m);
   }
 
