@@ -16,6 +16,10 @@ public final class ModelCatalog {
   private static Map<String, Model> build() {
     Map<String, Model> m = new LinkedHashMap<>();
     register(m, new QwzModel());
+    register(m, new PWaveWireModel());
+    register(m, new IsingChainModel());
+    register(m, new SshModel());
+    register(m, new MajoranaClusterModel());
     return Collections.unmodifiableMap(m);
   }
 

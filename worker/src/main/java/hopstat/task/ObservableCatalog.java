@@ -17,6 +17,8 @@ public final class ObservableCatalog {
     Map<String, Observable> m = new LinkedHashMap<>();
     register(m, new GapObservable());
     register(m, new BottObservable());
+    register(m, new Z2Observable());
+    register(m, new ParityObservable());
     return Collections.unmodifiableMap(m);
   }
 
