@@ -165,7 +165,7 @@ public final class MajoranaOps {
 
   /** Re W_{p m}: W = ½[[1, i], [1, −i]] within a site, zero across sites. */
   private static double wRe(int p, int m) {
-    return p / 2 == m / 2 ? 0.5 : 0.0;
+    return p / 2 == m / 2 && m % 2 == 0 ? 0.5 : 0.0;
   }
 
   /** Im W_{p m}. */
