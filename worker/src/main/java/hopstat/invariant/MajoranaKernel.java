@@ -24,7 +24,18 @@ import hopstat.model.MajoranaForm;
  */
 public final class MajoranaKernel {
 
+  /**
+   * A Pfaffian whose smallest elimination pivot is below this fraction of max|A| is treated as
+   * zero: its sign would be decided by rounding (a zero mode, e.g. the clean wire exactly at |μ| =
+   * 2|t|). Roundoff in the pivots is about n·ε·max|A| ≈ 1e−13 for n = 400; chosen an order above.
+   */
+  public static final double SINGULAR_PIVOT_RATIO = 1e-12;
+
   private MajoranaKernel() {}
+
+  private static int reliableSign(PfaffianResult pf) {
+    return pf.smallestPivotRatio() < SINGULAR_PIVOT_RATIO ? 0 : pf.sign();
+  }
 
   /**
    * Majorana number of a periodic chain.
@@ -42,12 +53,13 @@ public final class MajoranaKernel {
     PfaffianResult periodic = PfaffianKernel.compute(workspace.majorana, workspace.pfaffian);
     form.writeMajoranaMatrix(lattice, terms, -1, workspace.majorana, workspace.imaginary);
     PfaffianResult antiperiodic = PfaffianKernel.compute(workspace.majorana, workspace.pfaffian);
-    return new MajoranaNumberResult(periodic.sign() * antiperiodic.sign(), periodic.logAbs(), antiperiodic.logAbs());
+    return new MajoranaNumberResult(reliableSign(periodic) * reliableSign(antiperiodic), periodic.logAbs(), antiperiodic.logAbs());
   }
 
   /**
    * Pf(A) of the realised Hamiltonian as built (no change of closure); its sign is the
-   * ground-state fermion parity (+1 even, −1 odd, 0 degenerate).
+   * ground-state fermion parity (+1 even, −1 odd, 0 degenerate). The returned sign is 0 also when
+   * the smallest pivot is below {@link #SINGULAR_PIVOT_RATIO} (degenerate up to rounding).
    *
    * @param form read
    * @param lattice read
@@ -56,6 +68,7 @@ public final class MajoranaKernel {
    */
   public static PfaffianResult groundStateParity(MajoranaForm form, Lattice lattice, HamiltonianBuilder terms, MajoranaWorkspace workspace) {
     form.writeMajoranaMatrix(lattice, terms, 1, workspace.majorana, workspace.imaginary);
-    return PfaffianKernel.compute(workspace.majorana, workspace.pfaffian);
+    PfaffianResult pf = PfaffianKernel.compute(workspace.majorana, workspace.pfaffian);
+    return reliableSign(pf) == pf.sign() ? pf : new PfaffianResult(0, Double.NEGATIVE_INFINITY, pf.smallestPivotRatio());
   }
 }

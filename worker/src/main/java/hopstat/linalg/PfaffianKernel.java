@@ -49,18 +49,19 @@ public final class PfaffianKernel {
     if (a.numCols != n) {
       throw new IllegalArgumentException("the Pfaffian needs a square matrix, got " + n + "x" + a.numCols);
     }
-    checkAntisymmetric(a);
+    double maxAbs = checkAntisymmetric(a);
     if (n == 0) {
-      return new PfaffianResult(1, 0.0);
+      return new PfaffianResult(1, 0.0, 1.0);
     }
     if (n % 2 == 1) {
-      return new PfaffianResult(0, Double.NEGATIVE_INFINITY);
+      return new PfaffianResult(0, Double.NEGATIVE_INFINITY, 0.0);
     }
     workspace.ensure(n);
     double[] w = workspace.work;
     System.arraycopy(a.data, 0, w, 0, n * n);
     int sign = 1;
     double logAbs = 0.0;
+    double smallestPivot = Double.POSITIVE_INFINITY;
     for (int k = 0; k < n - 1; k += 2) {
       // Pivot: largest |A[i][k]| for i >= k+1 moves to row/column k+1.
       int pivot = k + 1;
@@ -74,7 +75,7 @@ public final class PfaffianKernel {
       }
       if (best == 0.0) {
         // Column k is zero below the diagonal, hence row k is zero: A is singular, Pf = 0.
-        return new PfaffianResult(0, Double.NEGATIVE_INFINITY);
+        return new PfaffianResult(0, Double.NEGATIVE_INFINITY, 0.0);
       }
       if (pivot != k + 1) {
         swapRowsAndColumns(w, n, k, k + 1, pivot);
@@ -85,6 +86,7 @@ public final class PfaffianKernel {
         sign = -sign;
       }
       logAbs += Math.log(Math.abs(alpha));
+      smallestPivot = Math.min(smallestPivot, Math.abs(alpha));
       // B += (s rᵀ − r sᵀ)/a over the trailing block, r = row k, s = row k+1 (columns k+2..).
       int rowK = k * n;
       int rowK1 = (k + 1) * n;
@@ -97,7 +99,7 @@ public final class PfaffianKernel {
         }
       }
     }
-    return new PfaffianResult(sign, logAbs);
+    return new PfaffianResult(sign, logAbs, smallestPivot / maxAbs);
   }
 
   /**
@@ -117,7 +119,8 @@ public final class PfaffianKernel {
     }
   }
 
-  private static void checkAntisymmetric(DMatrixRMaj a) {
+  /** Checks antisymmetry; returns max |A_ij|. */
+  private static double checkAntisymmetric(DMatrixRMaj a) {
     int n = a.numRows;
     double max = 0.0;
     double defect = 0.0;
@@ -132,5 +135,6 @@ public final class PfaffianKernel {
     if (defect > ANTISYMMETRY_TOLERANCE * max) {
       throw new IllegalArgumentException("matrix is not antisymmetric: max |A + A^T| = " + defect + " for max |A| = " + max);
     }
+    return max;
   }
 }

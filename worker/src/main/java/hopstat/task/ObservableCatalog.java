@@ -19,6 +19,7 @@ public final class ObservableCatalog {
     register(m, new BottObservable());
     register(m, new Z2Observable());
     register(m, new ParityObservable());
+    register(m, new WindingObservable());
     return Collections.unmodifiableMap(m);
   }
 
