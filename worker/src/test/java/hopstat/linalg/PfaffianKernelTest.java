@@ -173,6 +173,36 @@ class PfaffianKernelTest {
   }
 
   @Test
+  void pivotRatioFlagsSingularityUpToRounding() {
+    // Source-free: a congruence B A Bᵀ with a rank-deficient B (two equal rows) is singular in exact
+    // arithmetic; in floating point some pivot is at rounding level while a generic matrix has none.
+    int n = 8;
+    DMatrixRMaj a = randomAntisymmetric(n, 21);
+    assertThat(PfaffianKernel.compute(a, workspace).smallestPivotRatio()).isGreaterThan(1e-6);
+    SplittableRandom random = new SplittableRandom(22);
+    DMatrixRMaj b = new DMatrixRMaj(n, n);
+    for (int i = 0; i < n * n; i++) {
+      b.data[i] = 2 * random.nextDouble() - 1;
+    }
+    for (int j = 0; j < n; j++) {
+      b.set(5, j, b.get(2, j));
+    }
+    DMatrixRMaj ba = new DMatrixRMaj(n, n);
+    DMatrixRMaj bab = new DMatrixRMaj(n, n);
+    CommonOps_DDRM.mult(b, a, ba);
+    CommonOps_DDRM.multTransB(ba, b, bab);
+    for (int i = 0; i < n; i++) {
+      for (int j = i; j < n; j++) {
+        double v = 0.5 * (bab.get(i, j) - bab.get(j, i));
+        bab.set(i, j, v);
+        bab.set(j, i, -v);
+      }
+    }
+    PfaffianResult r = PfaffianKernel.compute(bab, workspace);
+    assertThat(r.sign() == 0 || r.smallestPivotRatio() < 1e-12).isTrue();
+  }
+
+  @Test
   void rejectsNonAntisymmetricInput() {
     DMatrixRMaj a = randomAntisymmetric(4, 1);
     a.set(0, 1, a.get(0, 1) + 0.1);
