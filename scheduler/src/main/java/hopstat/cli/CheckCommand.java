@@ -1,6 +1,7 @@
 package hopstat.cli;
 
 import hopstat.expand.GridExpander;
+import hopstat.expand.PlanValidation;
 import hopstat.expand.GridPoint;
 import hopstat.expand.StudyPlan;
 import hopstat.linalg.Linalg;
@@ -49,6 +50,7 @@ final class CheckCommand implements Callable<Integer> {
   public Integer call() {
     JobSpec spec = SpecFiles.parse(SpecFiles.read(specFile));
     StudyPlan plan = GridExpander.expand(spec);
+    PlanValidation.validate(plan);
     int n = RunCommand.threads(threads);
     LinalgKind kind = LinalgChoice.resolve(linalg);
     PrintStream out = root.out;

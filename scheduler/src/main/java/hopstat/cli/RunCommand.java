@@ -1,6 +1,7 @@
 package hopstat.cli;
 
 import hopstat.expand.GridExpander;
+import hopstat.expand.PlanValidation;
 import hopstat.expand.StudyPlan;
 import hopstat.linalg.LinalgFactory;
 import hopstat.linalg.LinalgKind;
@@ -44,6 +45,7 @@ final class RunCommand implements Callable<Integer> {
     String text = SpecFiles.read(specFile);
     JobSpec spec = SpecFiles.parse(text);
     StudyPlan plan = GridExpander.expand(spec);
+    PlanValidation.validate(plan);
     int n = threads(threads);
     LinalgKind kind = LinalgChoice.resolve(linalg);
     MemoryCheck.require(plan, n);

@@ -124,7 +124,7 @@ public final class SpecParser {
       Boundary boundary = parseBoundary();
       List<Observable> observables = parseObservables();
       List<ParameterSpec> parameters = parseParameters();
-      List<DisorderSpec> disorder = parseDisorder(parameters);
+      List<DisorderSpec> disorder = parseDisorder(parameters, model);
       Integer realisations = null;
       SamplingSpec sampling = null;
       if (root.has("sampling")) {
@@ -343,7 +343,7 @@ public final class SpecParser {
       return d;
     }
 
-    private List<DisorderSpec> parseDisorder(List<ParameterSpec> parameters) {
+    private List<DisorderSpec> parseDisorder(List<ParameterSpec> parameters, Model model) {
       List<DisorderSpec> found = new ArrayList<>();
       JsonNode n = root.get("disorder");
       if (n == null) {
@@ -410,6 +410,10 @@ public final class SpecParser {
           } else {
             options.put(e.getKey(), e.getValue().asText());
           }
+        }
+        if (kind != null && model != null) {
+          DisorderKind k = kind;
+          k.whyNotApplicable(model).ifPresent(reason -> problems.add(path + ".type", k.name(), reason));
         }
         if (kind != null && (parameter != null || !Double.isNaN(value))) {
           found.add(new DisorderSpec(kind.name(), value, parameter, options));

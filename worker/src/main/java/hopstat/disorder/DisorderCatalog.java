@@ -16,6 +16,12 @@ public final class DisorderCatalog {
   private static Map<String, DisorderKind> build() {
     Map<String, DisorderKind> m = new LinkedHashMap<>();
     m.put(OnsiteBoxDisorder.NAME, new OnsiteBoxDisorder());
+    m.put(OnsiteGaussDisorder.NAME, new OnsiteGaussDisorder());
+    m.put(FieldBoxDisorder.NAME, new FieldBoxDisorder());
+    m.put(CouplingBoxDisorder.NAME, new CouplingBoxDisorder());
+    m.put(PairingBoxDisorder.NAME, new PairingBoxDisorder());
+    m.put(BondBoxDisorder.NAME, new BondBoxDisorder());
+    m.put(MajoranaGaussDisorder.NAME, new MajoranaGaussDisorder());
     return Collections.unmodifiableMap(m);
   }
 

@@ -22,6 +22,14 @@ public interface DisorderKind {
    */
   java.util.Set<hopstat.model.Symmetry> keptSymmetries(Model model);
 
+  /**
+   * Why this disorder cannot be applied to {@code model} (e.g. the model lacks the couplings it
+   * randomises), or empty if it can. Default: applicable to every model.
+   */
+  default java.util.Optional<String> whyNotApplicable(Model model) {
+    return java.util.Optional.empty();
+  }
+
   /** Allowed option keys and, for each, the allowed values (empty set = any text). */
   Map<String, java.util.Set<String>> options();
 

@@ -31,9 +31,16 @@ public final class OnsiteBoxDisorder implements DisorderKind {
         + " or per orbital (orbitals=independent)";
   }
 
-  /** A real onsite potential keeps T and (as a chemical-potential shift) C; it breaks S on its own. */
+  /**
+   * A real onsite potential keeps T and (as a chemical-potential shift) C; it breaks S on its own.
+   * On a non-BdG chiral chain (e.g. ssh) the particle–hole symmetry is the sublattice one, so it
+   * keeps only T there.
+   */
   @Override
   public Set<Symmetry> keptSymmetries(Model model) {
+    if (model instanceof hopstat.model.ChiralChain) {
+      return Set.of(Symmetry.TIME_REVERSAL);
+    }
     return Set.of(Symmetry.TIME_REVERSAL, Symmetry.PARTICLE_HOLE);
   }
 

@@ -10,7 +10,7 @@ import java.util.Arrays;
  * {@code extent[d]} is the period of the sample along direction d (used by position unitaries
  * e^{2πi x/extent}); for an open direction it is the span of positions plus one spacing.
  *
- * @param dimension spatial dimension, 1..3
+ * @param dimension spatial dimension, 0..3 (0: a cluster without positions, e.g. a quantum dot)
  * @param linearSize L, the number of unit cells along each direction
  * @param sites number of sites
  * @param orbitalsPerSite orbitals on each site
@@ -28,8 +28,8 @@ public record Lattice(
     Boundary boundary) {
 
   public Lattice {
-    if (dimension < 1 || dimension > 3) {
-      throw new IllegalArgumentException("dimension must be 1..3: " + dimension);
+    if (dimension < 0 || dimension > 3) {
+      throw new IllegalArgumentException("dimension must be 0..3: " + dimension);
     }
     if (sites < 1 || orbitalsPerSite < 1 || linearSize < 1) {
       throw new IllegalArgumentException("sites, orbitals and L must be positive");

@@ -20,6 +20,10 @@ public final class ModelCatalog {
     register(m, new FluxSquareModel());
     register(m, new PipSquareModel());
     register(m, new BhzModel());
+    register(m, new PWaveWireModel());
+    register(m, new IsingChainModel());
+    register(m, new SshModel());
+    register(m, new MajoranaClusterModel());
     return Collections.unmodifiableMap(m);
   }
 

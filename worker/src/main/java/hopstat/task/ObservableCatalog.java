@@ -22,6 +22,8 @@ public final class ObservableCatalog {
     register(m, new SpinChernObservable());
     register(m, new SpinBottObservable());
     register(m, new Z2Observable());
+    register(m, new ParityObservable());
+    register(m, new WindingObservable());
     return Collections.unmodifiableMap(m);
   }
 

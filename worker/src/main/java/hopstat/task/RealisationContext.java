@@ -7,8 +7,9 @@ import org.ejml.data.ZMatrixRMaj;
 
 /**
  * One realisation as the observables see it: the built Hamiltonian and lazily computed, cached
- * spectral data. Eigen-decompositions are done at most once per realisation and only as far as
- * some requested observable needs: eigenvalues only, or eigenvalues plus all eigenvectors.
+ * spectral data. Eigen-decompositions are done once per realisation when the observables declare
+ * their needs ({@link Observable#needsOccupiedStates()}), and only as far as needed: eigenvalues
+ * only, or eigenvalues plus all eigenvectors; an undeclared request for vectors costs a second one.
  */
 public final class RealisationContext {
 
@@ -19,6 +20,7 @@ public final class RealisationContext {
   private final boolean vectorsWanted;
   private boolean denseBuilt;
   private boolean spectrumDone;
+  private boolean vectorsDone;
   private boolean occupiedDone;
   private int occupiedCount;
 
@@ -77,17 +79,36 @@ public final class RealisationContext {
    */
   public double[] spectrum() {
     if (!spectrumDone) {
-      int n = dimension();
-      double[] values = workspace.spectrumOfLength(n);
-      boolean ok = vectorsWanted
-          ? workspace.eigenSolver.eigenpairs(denseHamiltonian(), values, 0, n - 1, workspace.vectors)
-          : workspace.eigenSolver.eigenvalues(denseHamiltonian(), values);
-      if (!ok) {
-        throw new ConvergenceFailure("Hermitian eigensolver did not converge (N = " + n + ")");
-      }
-      spectrumDone = true;
+      decompose(vectorsWanted);
     }
     return workspace.spectrum;
+  }
+
+  /** One eigen-decomposition, with or without all eigenvectors. */
+  private void decompose(boolean withVectors) {
+    int n = dimension();
+    double[] values = workspace.spectrumOfLength(n);
+    boolean ok = withVectors
+        ? workspace.eigenSolver.eigenpairs(denseHamiltonian(), values, 0, n - 1, workspace.vectors)
+        : workspace.eigenSolver.eigenvalues(denseHamiltonian(), values);
+    if (!ok) {
+      throw new ConvergenceFailure("Hermitian eigensolver did not converge (N = " + n + ")");
+    }
+    spectrumDone = true;
+    vectorsDone = withVectors;
+  }
+
+  /**
+   * All eigenvectors as the columns of the N × N matrix, in the order of {@link #spectrum()}. An
+   * observable that declared {@link Observable#needsOccupiedStates()} gets them from the one
+   * decomposition; otherwise they are computed on first request (a second decomposition if the
+   * eigenvalues were already computed alone). Read, not modified, by callers.
+   */
+  public ZMatrixRMaj allEigenvectors() {
+    if (!vectorsDone) {
+      decompose(true);
+    }
+    return workspace.vectors;
   }
 
   /** Number of eigenvalues strictly below E_F. */
@@ -107,14 +128,10 @@ public final class RealisationContext {
    * not modified, by callers.
    */
   public ZMatrixRMaj occupiedStates() {
-    if (!vectorsWanted) {
-      throw new IllegalStateException("an observable asked for eigenvectors without declaring it");
-    }
     if (!occupiedDone) {
-      spectrum();
+      ZMatrixRMaj all = allEigenvectors();
       occupiedCount = occupiedCount();
       int n = dimension();
-      ZMatrixRMaj all = workspace.vectors;
       ZMatrixRMaj occ = workspace.occupied;
       occ.reshape(n, occupiedCount);
       for (int i = 0; i < n; i++) {

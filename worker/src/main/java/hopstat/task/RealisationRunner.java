@@ -6,6 +6,9 @@ import hopstat.disorder.DisorderTerm;
 import hopstat.lattice.Lattice;
 import hopstat.model.Model;
 import hopstat.model.ModelCatalog;
+import hopstat.model.SymmetryCheckKernel;
+import hopstat.model.SymmetryCheckResult;
+import hopstat.model.SymmetryClass;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -22,6 +25,9 @@ import java.util.random.RandomGenerator;
  * run goes on.
  */
 public final class RealisationRunner {
+
+  /** Largest matrix dimension at which every realisation's symmetries are checked densely. */
+  public static final int MAX_SYMMETRY_CHECK_DIMENSION = 6000;
 
   private RealisationRunner() {}
 
@@ -71,8 +77,26 @@ public final class RealisationRunner {
       vectors |= o.needsOccupiedStates();
     }
     RealisationContext context = new RealisationContext(workspace, model, lattice, point, vectors);
+    checkSymmetries(model, lattice, point, context);
     for (Observable o : observables) {
       o.compute(context, values);
+    }
+  }
+
+  /**
+   * Checks the symmetries the point's class claims on the built matrix (O(N²) against the O(N³) of
+   * the observables); a violation fails the realisation. Skipped above {@link
+   * #MAX_SYMMETRY_CHECK_DIMENSION}, where no dense matrix may be built.
+   */
+  private static void checkSymmetries(Model model, Lattice lattice, PointSpec point, RealisationContext context) {
+    if (lattice.orbitals() > MAX_SYMMETRY_CHECK_DIMENSION || model.symmetryOperators().on(lattice).isEmpty()) {
+      return;
+    }
+    SymmetryClass claimed = SymmetryCheckOps.effectiveClass(model, point.disorder());
+    SymmetryCheckReport report = SymmetryCheckOps.checkClaimed(model, lattice, context.denseHamiltonian(), claimed, SymmetryCheckKernel.TOLERANCE);
+    if (!report.violations().isEmpty()) {
+      SymmetryCheckResult v = report.violations().get(0);
+      throw new IllegalStateException("symmetry " + v.symmetry() + " of class " + claimed + " violated: relative violation " + v.relativeViolation());
     }
   }
 

@@ -1,6 +1,10 @@
 package hopstat.task;
 
+import hopstat.invariant.MajoranaKernel;
+import hopstat.invariant.MajoranaNumberResult;
+import hopstat.invariant.MajoranaWorkspace;
 import hopstat.lattice.Boundary;
+import hopstat.model.MajoranaForm;
 import hopstat.model.Model;
 import hopstat.model.SymmetryClass;
 import java.util.List;
@@ -8,9 +12,11 @@ import java.util.Map;
 import java.util.Optional;
 
 /**
- * {@code z2}: the one Z2 invariant name for every (class, dimension), 0 trivial, 1 non-trivial, so
- * its mean over realisations is the fraction of non-trivial samples. Dispatches on the effective
- * class and the dimension; implemented on this branch: class AII in d = 2 ({@link Z2ClassAii2d}).
+ * {@code z2}: the one Z2 invariant name for every class, 0 trivial, 1 non-trivial, so its mean over
+ * realisations is the fraction of non-trivial samples. Dispatches on dimension and effective class:
+ * one-dimensional BdG chains with C² = +1 (classes D, BDI; {@link MajoranaForm} models): the
+ * Majorana number (Kitaev, Phys.-Usp. 44, 131 (2001)); class AII in d = 2: {@link Z2ClassAii2d}.
+ * Eigenvectors are computed only on the AII path (the context computes them on demand).
  */
 final class Z2Observable implements Observable {
 
@@ -23,17 +29,20 @@ final class Z2Observable implements Observable {
 
   @Override
   public String description() {
-    return "Z2 invariant, 0 trivial / 1 non-trivial (mean = fraction non-trivial). " + Z2ClassAii2d.description();
+    return "Z2 invariant, 0 trivial / 1 non-trivial (mean = fraction non-trivial). d = 1 BdG chains (classes D, BDI):"
+        + " Majorana number Q = sign Pf(A_periodic) sign Pf(A_antiperiodic) of the closed ring (Kitaev, Phys.-Usp. 44, 131"
+        + " (2001)), z2 = 1 iff Q = -1; needs boundary periodic and L >= 3. ising-chain: z2 = 1 is the ordered phase."
+        + " A zero Pfaffian (zero mode under one closure) fails the realisation. " + Z2ClassAii2d.description();
   }
 
   @Override
   public List<Quantity> quantities() {
-    return List.of(new Quantity("z2", true, "1", "Z2 invariant: 0 trivial, 1 non-trivial (class AII d = 2: spin Chern number mod 2)"));
+    return List.of(new Quantity("z2", true, "1", "Z2 invariant: 0 trivial, 1 non-trivial (d = 1 BdG chains: Majorana number Q = -1; class AII d = 2: spin Chern number mod 2)"));
   }
 
   @Override
   public boolean needsOccupiedStates() {
-    return true;
+    return false;
   }
 
   @Override
@@ -41,17 +50,35 @@ final class Z2Observable implements Observable {
     if (effectiveClass == SymmetryClass.AII && model.dimension() == 2) {
       return Z2ClassAii2d.whyNotApplicable(model, boundary);
     }
-    return Optional.of("z2 is implemented for class AII in d = 2; the point has class " + effectiveClass + " in d = " + model.dimension());
+    if (!(model instanceof MajoranaForm) || model.dimension() != 1) {
+      return Optional.of("z2 is implemented for one-dimensional BdG chains in Majorana form (pwave-wire, ising-chain); "
+          + model.name() + " is not one");
+    }
+    if (effectiveClass.particleHoleSquare() != 1) {
+      return Optional.of("the Majorana number needs particle-hole symmetry with C^2 = +1 (class D or BDI); the disorder leaves class "
+          + effectiveClass);
+    }
+    if (boundary != Boundary.PERIODIC) {
+      return Optional.of("the Majorana number compares periodic and antiperiodic closures: z2 needs \"boundary\": \"periodic\"");
+    }
+    return Optional.empty();
   }
 
   @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
     Model model = context.model();
-    SymmetryClass effective = SymmetryCheckOps.effectiveClass(model, context.point().disorder());
-    if (effective == SymmetryClass.AII && model.dimension() == 2) {
+    if (model.dimension() == 2 && SymmetryCheckOps.effectiveClass(model, context.point().disorder()) == SymmetryClass.AII) {
       Z2ClassAii2d.compute(context, out);
       return;
     }
-    throw new IllegalStateException("z2 is not implemented for class " + effective + " in d = " + model.dimension());
+    if (context.lattice().linearSize() < 3) {
+      throw new IllegalStateException("z2 needs L >= 3 to tell the closing bond apart");
+    }
+    MajoranaWorkspace ws = context.workspace().scratch(MajoranaWorkspace.class, linalg -> new MajoranaWorkspace());
+    MajoranaNumberResult r = MajoranaKernel.majoranaNumber((MajoranaForm) context.model(), context.lattice(), context.terms(), ws);
+    if (r.q() == 0) {
+      throw new IllegalStateException("a Pfaffian vanishes (zero mode under periodic or antiperiodic closure): Majorana number undefined");
+    }
+    out.put("z2", r.q() == -1 ? 1.0 : 0.0);
   }
 }
