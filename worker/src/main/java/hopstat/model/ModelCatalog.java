@@ -16,6 +16,7 @@ public final class ModelCatalog {
   private static Map<String, Model> build() {
     Map<String, Model> m = new LinkedHashMap<>();
     register(m, new QwzModel());
+    for (int d = 1; d <= 3; d++) register(m, new AndersonModel(d));
     return Collections.unmodifiableMap(m);
   }
 
