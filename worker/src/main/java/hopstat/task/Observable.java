@@ -20,6 +20,14 @@ public interface Observable {
   /** Meaning, conventions and sources (shown by the CLI and the README). */
   String description();
 
+  /**
+   * Spec parameters this observable reads (besides the model's), with defaults; a {@code null}
+   * default means required. Default: none.
+   */
+  default List<hopstat.model.ParameterInfo> parameters() {
+    return List.of();
+  }
+
   /** The numbers written per realisation, in order. */
   List<Quantity> quantities();
 

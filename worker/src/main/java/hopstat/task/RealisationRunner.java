@@ -70,7 +70,7 @@ public final class RealisationRunner {
       observables.add(o);
       vectors |= o.needsOccupiedStates();
     }
-    RealisationContext context = new RealisationContext(workspace, model, lattice, point, vectors);
+    RealisationContext context = new RealisationContext(workspace, model, lattice, point, vectors, random);
     for (Observable o : observables) {
       o.compute(context, values);
     }
