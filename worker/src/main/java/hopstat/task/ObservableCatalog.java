@@ -17,6 +17,9 @@ public final class ObservableCatalog {
     Map<String, Observable> m = new LinkedHashMap<>();
     register(m, new GapObservable());
     register(m, new BottObservable());
+    register(m, new LyapunovObservable());
+    register(m, new LevelRatioObservable());
+    register(m, new IprObservable());
     return Collections.unmodifiableMap(m);
   }
 
