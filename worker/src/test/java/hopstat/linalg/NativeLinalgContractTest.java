@@ -1,0 +1,10 @@
+package hopstat.linalg;
+
+/** The contract on the native OpenBLAS/LAPACK backend. */
+class NativeLinalgContractTest extends LinalgContractTest {
+
+  @Override
+  protected Linalg linalg() {
+    return LinalgFactory.create(LinalgKind.NATIVE);
+  }
+}
