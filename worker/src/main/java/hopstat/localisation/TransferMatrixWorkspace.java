@@ -36,10 +36,12 @@ public final class TransferMatrixWorkspace {
       current = new double[kk];
       previous = new double[kk];
       next = new double[kk];
-      stacked = new double[2 * kk];
       hoppingInverse = new double[kk];
       hoppingRatio = new double[kk];
       scratch = new double[kk];
+    }
+    if (stacked.length < 2 * kk) {
+      stacked = new double[2 * kk];
     }
     if (rDiagonal.length < k) {
       rDiagonal = new double[k];
