@@ -42,7 +42,7 @@ final class LyapunovObservable implements Observable {
 
   static final String NAME = "lyapunov";
   static final double DEFAULT_ERROR = 0.01;
-  static final double DEFAULT_MAX_LENGTH = 1e8;
+  static final double DEFAULT_MAX_LENGTH = 1e7;
 
   @Override
   public String name() {
@@ -55,7 +55,7 @@ final class LyapunovObservable implements Observable {
         + " 1546 (1981)) at energy 'energy': lyapunov = smallest positive exponent gamma (inverse amplitude localisation"
         + " length per lattice spacing, |psi| ~ exp(-gamma x)), lambda = 1/(gamma M) (M = 1 in d = 1), lyapunov-error ="
         + " relative standard error from the variance of the QR-block increments. The bar grows until lyapunov-error <="
-        + " lyapunovError (default 0.01) or lyapunovMaxLength slices (default 1e8, then the realisation fails)."
+        + " lyapunovError (default 0.01) or lyapunovMaxLength slices (default 1e7, then the realisation fails)."
         + " Disorder is drawn slice by slice. Models with a slice form: anderson-1d, anderson-2d, anderson-3d.";
   }
 

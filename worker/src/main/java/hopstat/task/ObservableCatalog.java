@@ -20,6 +20,7 @@ public final class ObservableCatalog {
     register(m, new LyapunovObservable());
     register(m, new LevelRatioObservable());
     register(m, new IprObservable());
+    register(m, new BottVersusFermiEnergyObservable());
     return Collections.unmodifiableMap(m);
   }
 
