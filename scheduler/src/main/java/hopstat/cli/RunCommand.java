@@ -3,16 +3,13 @@ package hopstat.cli;
 import hopstat.expand.GridExpander;
 import hopstat.expand.PlanValidation;
 import hopstat.expand.StudyPlan;
-import hopstat.linalg.LinalgFactory;
 import hopstat.linalg.LinalgKind;
+import hopstat.pool.LocalSession;
 import hopstat.queue.RunDirectory;
 import hopstat.spec.JobSpec;
-import hopstat.task.BuildInfo;
 import hopstat.task.InvalidInputException;
 import java.nio.file.Path;
 import java.time.Instant;
-import java.util.LinkedHashMap;
-import java.util.Map;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -49,16 +46,7 @@ final class RunCommand implements Callable<Integer> {
     int n = threads(threads);
     LinalgKind kind = LinalgChoice.resolve(linalg);
     MemoryCheck.require(plan, n);
-    Map<String, Object> metadata = new LinkedHashMap<>();
-    metadata.put("name", spec.name());
-    metadata.put("specHash", spec.specHash());
-    metadata.put("created", Instant.now().toString());
-    metadata.put("createdBy", BuildInfo.provenance());
-    metadata.put("linalg", LinalgFactory.create(kind).describe());
-    metadata.put("threads", n);
-    metadata.put("gridPoints", plan.points().size());
-    metadata.put("plannedTasks", plan.plannedTasks());
-    RunDirectory dir = RunDirectory.create(out, text, metadata);
+    RunDirectory dir = RunDirectory.create(out, text, LocalSession.runMetadata(plan, n, kind, Instant.now()));
     return RunSession.execute(root, dir, plan, n, kind, quiet);
   }
 
