@@ -185,8 +185,8 @@ public final class BatchService implements AutoCloseable {
         throw new IllegalStateException("the service is stopping");
       }
     }
-    JobRecord job = store.create(specText, plan.spec().name(), priority, source,
-        LocalSession.runMetadata(plan, spec.threads(), spec.linalg(), clock.instant()), consumed);
+    Map<String, Object> metadata = LocalSession.runMetadata(plan, spec.threads(), spec.linalg(), clock.instant());
+    JobRecord job = store.create(specText, plan.spec().name(), priority, source, metadata, consumed);
     LOG.info("queued job {} (priority {}) from {}", job.id(), priority, source);
     wake();
     return job;

@@ -57,13 +57,19 @@ final class JobStatusOps {
     return p;
   }
 
-  /** The summary of the job's journal as it is now. */
-  Summary summary(String id) throws IOException {
-    RunDirectory dir = RunDirectory.open(store.runDir(id));
-    String fingerprint = fingerprint(dir.journalDir());
+  /**
+   * The summary of the job's journal as it is now. Only a RUNNING job's journal grows (the service
+   * holds the root, and a job's run directory is locked while it runs), so other jobs are keyed on
+   * their history length and cost no file access once cached; the running job is keyed on the
+   * journal files' names and sizes.
+   */
+  Summary summary(JobRecord job) throws IOException {
+    String id = job.id();
+    Path journal = store.runDir(id).resolve("journal");
+    String key = job.state() == JobState.RUNNING ? "running:" + fingerprint(journal) : "still:" + job.history().size();
     Cached c = summaries.get(id);
-    if (c == null || !c.fingerprint().equals(fingerprint)) {
-      c = new Cached(fingerprint, RunSummaryOps.summarise(dir, plan(id)));
+    if (c == null || !c.fingerprint().equals(key)) {
+      c = new Cached(key, RunSummaryOps.summarise(RunDirectory.open(store.runDir(id)), plan(id)));
       summaries.put(id, c);
     }
     return c.summary();
@@ -73,7 +79,7 @@ final class JobStatusOps {
   String summaryText(JobRecord job, String format) throws IOException {
     ReportFormats f = ReportFormats.valueOf(format.toUpperCase(Locale.ROOT));
     StringWriter w = new StringWriter();
-    f.format().write(summary(job.id()), w);
+    f.format().write(summary(job), w);
     return w.toString();
   }
 
@@ -102,7 +108,7 @@ final class JobStatusOps {
     }
     o.set("job", j);
     StudyPlan plan = plan(job.id());
-    Summary s = summary(job.id());
+    Summary s = summary(job);
     ObjectNode p = o.putObject("progress");
     long planned = plan.plannedTasks();
     long finished = s.done() + s.failed();
