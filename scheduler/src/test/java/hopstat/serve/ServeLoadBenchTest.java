@@ -39,7 +39,7 @@ import org.junit.jupiter.api.io.TempDir;
  * {@code target/serve-load-bench.json}.
  *
  * <pre>
- * mvn -B -o -pl scheduler test -Dtest=ServeLoadBenchTest -DexcludedGroups= -Dsurefire.failIfNoSpecifiedTests=false
+ * mvn -B -o -pl scheduler surefire:test -Dtest=ServeLoadBenchTest -Dbench.excludedGroups= -Dsurefire.failIfNoSpecifiedTests=false
  * </pre>
  */
 @Tag("bench")

@@ -55,6 +55,8 @@ public final class HttpApi implements AutoCloseable {
   public static final int MAX_BODY_BYTES = 1 << 20;
   /** Cookie the dashboard uses to carry the token after {@code /?token=...}. */
   public static final String TOKEN_COOKIE = "hopstat-token";
+  /** Oversized bodies are drained up to this many bytes before the 413 (see readBody). */
+  static final long MAX_DRAIN_BYTES = 8L << 20;
   /** HTTP worker threads. */
   static final int HTTP_THREADS = 8;
 
@@ -285,34 +287,49 @@ public final class HttpApi implements AutoCloseable {
     send(x, 201, o);
   }
 
-  /** The body, or null after answering 413 when it is larger than {@link #MAX_BODY_BYTES}. */
+  /**
+   * The body, or null after answering 413 when it is larger than {@link #MAX_BODY_BYTES}. An
+   * oversized body is read and discarded up to {@link #MAX_DRAIN_BYTES} first, so the client is not
+   * reset while still sending and gets the 413; beyond that the connection is simply closed.
+   */
   private static byte[] readBody(HttpExchange x) throws IOException {
     String length = x.getRequestHeaders().getFirst("Content-Length");
-    if (length != null) {
-      long n;
-      try {
-        n = Long.parseLong(length.trim());
-      } catch (NumberFormatException e) {
-        n = Long.MAX_VALUE;
-      }
-      if (n > MAX_BODY_BYTES) {
-        send(x, 413, error("too-large", "request bodies are limited to " + MAX_BODY_BYTES + " bytes"));
-        return null;
-      }
-    }
-    ByteArrayOutputStream out = new ByteArrayOutputStream();
-    byte[] buf = new byte[8192];
     try (InputStream in = x.getRequestBody()) {
-      int r;
-      while ((r = in.read(buf)) > 0) {
-        out.write(buf, 0, r);
-        if (out.size() > MAX_BODY_BYTES) {
+      if (length != null) {
+        long n;
+        try {
+          n = Long.parseLong(length.trim());
+        } catch (NumberFormatException e) {
+          n = Long.MAX_VALUE;
+        }
+        if (n > MAX_BODY_BYTES) {
+          discard(in, MAX_DRAIN_BYTES);
           send(x, 413, error("too-large", "request bodies are limited to " + MAX_BODY_BYTES + " bytes"));
           return null;
         }
       }
+      ByteArrayOutputStream out = new ByteArrayOutputStream();
+      byte[] buf = new byte[8192];
+      int r;
+      while ((r = in.read(buf)) > 0) {
+        out.write(buf, 0, r);
+        if (out.size() > MAX_BODY_BYTES) {
+          discard(in, MAX_DRAIN_BYTES - out.size());
+          send(x, 413, error("too-large", "request bodies are limited to " + MAX_BODY_BYTES + " bytes"));
+          return null;
+        }
+      }
+      return out.toByteArray();
     }
-    return out.toByteArray();
+  }
+
+  private static void discard(InputStream in, long max) throws IOException {
+    byte[] buf = new byte[8192];
+    long total = 0;
+    int r;
+    while (total < max && (r = in.read(buf, 0, (int) Math.min(buf.length, max - total))) > 0) {
+      total += r;
+    }
   }
 
   private boolean requireMethod(HttpExchange x, String method) throws IOException {
@@ -383,7 +400,11 @@ public final class HttpApi implements AutoCloseable {
       int eq = kv.indexOf('=');
       String k = eq < 0 ? kv : kv.substring(0, eq);
       if (k.equals(name)) {
-        return Optional.of(java.net.URLDecoder.decode(eq < 0 ? "" : kv.substring(eq + 1), StandardCharsets.UTF_8));
+        try {
+          return Optional.of(java.net.URLDecoder.decode(eq < 0 ? "" : kv.substring(eq + 1), StandardCharsets.UTF_8));
+        } catch (IllegalArgumentException e) {
+          throw new InvalidInputException(name, kv.substring(eq + 1), "malformed query parameter");
+        }
       }
     }
     return Optional.empty();
