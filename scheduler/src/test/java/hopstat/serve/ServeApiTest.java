@@ -196,12 +196,21 @@ class ServeApiTest {
   @Test
   void oversizedBodiesGet413() throws Exception {
     String big = "{\"name\": \"big\", \"description\": \"" + "x".repeat((1 << 20) + 10) + "\"}";
+    ServeFixtures.Client api = new ServeFixtures.Client(service.uri(), ServeFixtures.TOKEN); // own connections
     HttpResponse<String> r = api.post("api/jobs", big);
     assertThat(r.statusCode()).isEqualTo(413);
     assertThat(api.json(r).path("error").asText()).isEqualTo("too-large");
     // a body just under the limit is read and validated (and rejected as a spec, not for its size)
     String under = "{\"name\": \"big\", \"description\": \"" + "x".repeat((1 << 20) - 100) + "\"}";
     assertThat(api.post("api/jobs", under).statusCode()).isEqualTo(400);
+    // far beyond the drain limit the service stops reading: the client sees the 413 or a closed connection, never a job
+    String huge = "x".repeat(12 << 20);
+    try {
+      assertThat(api.post("api/jobs", huge).statusCode()).isEqualTo(413);
+    } catch (java.io.IOException closed) {
+      // the server closed the connection while the client was still sending: also a refusal
+    }
+    assertThat(service.jobs()).noneMatch(j -> j.name().equals("big"));
   }
 
   @Test

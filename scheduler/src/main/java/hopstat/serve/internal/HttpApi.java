@@ -303,7 +303,9 @@ public final class HttpApi implements AutoCloseable {
           n = Long.MAX_VALUE;
         }
         if (n > MAX_BODY_BYTES) {
-          discard(in, MAX_DRAIN_BYTES);
+          if (discard(in, MAX_DRAIN_BYTES) > 0) {
+            x.getResponseHeaders().set("Connection", "close"); // body left unread: the connection cannot be reused
+          }
           send(x, 413, error("too-large", "request bodies are limited to " + MAX_BODY_BYTES + " bytes"));
           return null;
         }
@@ -314,7 +316,9 @@ public final class HttpApi implements AutoCloseable {
       while ((r = in.read(buf)) > 0) {
         out.write(buf, 0, r);
         if (out.size() > MAX_BODY_BYTES) {
-          discard(in, MAX_DRAIN_BYTES - out.size());
+          if (discard(in, MAX_DRAIN_BYTES - out.size()) > 0) {
+            x.getResponseHeaders().set("Connection", "close");
+          }
           send(x, 413, error("too-large", "request bodies are limited to " + MAX_BODY_BYTES + " bytes"));
           return null;
         }
@@ -323,13 +327,15 @@ public final class HttpApi implements AutoCloseable {
     }
   }
 
-  private static void discard(InputStream in, long max) throws IOException {
+  /** Reads and drops up to {@code max} bytes; returns 0 if the body ended, else a positive number (more is left). */
+  private static int discard(InputStream in, long max) throws IOException {
     byte[] buf = new byte[8192];
     long total = 0;
     int r;
     while (total < max && (r = in.read(buf, 0, (int) Math.min(buf.length, max - total))) > 0) {
       total += r;
     }
+    return in.read() < 0 ? 0 : 1;
   }
 
   private boolean requireMethod(HttpExchange x, String method) throws IOException {
@@ -440,9 +446,6 @@ public final class HttpApi implements AutoCloseable {
     r.set("Content-Type", type);
     r.set("Cache-Control", "no-store");
     r.set("X-Content-Type-Options", "nosniff");
-    if (status == 413) {
-      r.set("Connection", "close");
-    }
     x.sendResponseHeaders(status, body.length == 0 ? -1 : body.length);
     if (body.length > 0) {
       try (OutputStream out = x.getResponseBody()) {
