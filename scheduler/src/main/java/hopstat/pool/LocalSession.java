@@ -30,12 +30,22 @@ public final class LocalSession {
    * @param created when the run directory is created (from the caller's clock)
    */
   public static Map<String, Object> runMetadata(StudyPlan plan, int threads, LinalgKind linalg, Instant created) {
+    return runMetadata(plan, threads, LinalgFactory.create(linalg).describe(), created);
+  }
+
+  /**
+   * The members of a new run's {@code run.json}, for callers that create many runs and describe
+   * their linear algebra once.
+   *
+   * @param linalgDescription {@link hopstat.linalg.Linalg#describe()} of the backend the run uses
+   */
+  public static Map<String, Object> runMetadata(StudyPlan plan, int threads, String linalgDescription, Instant created) {
     Map<String, Object> metadata = new LinkedHashMap<>();
     metadata.put("name", plan.spec().name());
     metadata.put("specHash", plan.spec().specHash());
     metadata.put("created", created.toString());
     metadata.put("createdBy", BuildInfo.provenance());
-    metadata.put("linalg", LinalgFactory.create(linalg).describe());
+    metadata.put("linalg", linalgDescription);
     metadata.put("threads", threads);
     metadata.put("gridPoints", plan.points().size());
     metadata.put("plannedTasks", plan.plannedTasks());

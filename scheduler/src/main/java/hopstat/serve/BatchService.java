@@ -6,6 +6,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import hopstat.expand.GridExpander;
 import hopstat.expand.PlanValidation;
 import hopstat.expand.StudyPlan;
+import hopstat.linalg.LinalgFactory;
 import hopstat.pool.LocalPoolBackend;
 import hopstat.pool.LocalSession;
 import hopstat.pool.RunOptions;
@@ -78,6 +79,7 @@ public final class BatchService implements AutoCloseable {
   private final Map<String, JobProgress> progress = new ConcurrentHashMap<>();
   private final CountDownLatch closed = new CountDownLatch(1);
   private final Thread scheduler;
+  private final String linalgDescription;
   private Inbox inbox;
   private HttpApi http;
   // guarded by monitor
@@ -92,6 +94,7 @@ public final class BatchService implements AutoCloseable {
     this.serviceLock = serviceLock;
     this.store = store;
     this.statusOps = new JobStatusOps(store);
+    this.linalgDescription = LinalgFactory.create(spec.linalg()).describe();
     this.scheduler = new Thread(this::schedule, "hopstat-serve-scheduler");
     this.scheduler.setDaemon(true);
   }
@@ -185,7 +188,7 @@ public final class BatchService implements AutoCloseable {
         throw new IllegalStateException("the service is stopping");
       }
     }
-    Map<String, Object> metadata = LocalSession.runMetadata(plan, spec.threads(), spec.linalg(), clock.instant());
+    Map<String, Object> metadata = LocalSession.runMetadata(plan, spec.threads(), linalgDescription, clock.instant());
     JobRecord job = store.create(specText, plan.spec().name(), priority, source, metadata, consumed);
     LOG.info("queued job {} (priority {}) from {}", job.id(), priority, source);
     wake();

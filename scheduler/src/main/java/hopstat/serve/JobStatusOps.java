@@ -25,8 +25,10 @@ import java.util.stream.Stream;
 /**
  * Builds the status documents of the API from a job's record, its journal (through {@link
  * hopstat.statistics.SummaryOps}, the same statistics as summary.csv/json) and the live progress of
- * a running session. Summaries are cached per job and recomputed only when the journal files
- * change size, so many clients polling cost one journal read per new record, not per request.
+ * a running session. Summaries are cached per job: a job that is not running is summarised once
+ * per state change; the running job at most once per {@link #LIVE_REUSE_NANOS} and only when its
+ * journal files changed size. The summary endpoints (summary.csv/json) are therefore up to that
+ * age behind a running job's journal; for a job that is not running they are exact.
  *
  * <p>Non-finite numbers (e.g. the standard error of a single sample) are written as {@code null}.
  */
@@ -37,11 +39,18 @@ final class JobStatusOps {
 
   private static final ObjectMapper JSON = new ObjectMapper();
 
-  private record Cached(String fingerprint, Summary summary) {}
+  /**
+   * A running job's summary is reused for this long before the journal is looked at again: many
+   * clients polling then cost one journal read per interval, and the dashboard polls once a second.
+   */
+  static final long LIVE_REUSE_NANOS = 250_000_000L;
+
+  private record Cached(String fingerprint, Summary summary, long computedNanos) {}
 
   private final JobStore store;
   private final Map<String, StudyPlan> plans = new ConcurrentHashMap<>();
   private final Map<String, Cached> summaries = new ConcurrentHashMap<>();
+  private final Map<String, Object> locks = new ConcurrentHashMap<>();
 
   JobStatusOps(JobStore store) {
     this.store = store;
@@ -65,14 +74,22 @@ final class JobStatusOps {
    */
   Summary summary(JobRecord job) throws IOException {
     String id = job.id();
-    Path journal = store.runDir(id).resolve("journal");
-    String key = job.state() == JobState.RUNNING ? "running:" + fingerprint(journal) : "still:" + job.history().size();
-    Cached c = summaries.get(id);
-    if (c == null || !c.fingerprint().equals(key)) {
-      c = new Cached(key, RunSummaryOps.summarise(RunDirectory.open(store.runDir(id)), plan(id)));
+    Object lock = locks.computeIfAbsent(id, k -> new Object());
+    synchronized (lock) { // one reader per job at a time; the others wait and reuse its result
+      Cached c = summaries.get(id);
+      boolean running = job.state() == JobState.RUNNING;
+      if (running && c != null && c.fingerprint().startsWith("running:") && System.nanoTime() - c.computedNanos() < LIVE_REUSE_NANOS) {
+        return c.summary();
+      }
+      String key = running ? "running:" + fingerprint(store.runDir(id).resolve("journal")) : "still:" + job.history().size();
+      if (c == null || !c.fingerprint().equals(key)) {
+        c = new Cached(key, RunSummaryOps.summarise(RunDirectory.open(store.runDir(id)), plan(id)), System.nanoTime());
+      } else {
+        c = new Cached(key, c.summary(), System.nanoTime());
+      }
       summaries.put(id, c);
+      return c.summary();
     }
-    return c.summary();
   }
 
   /** The summary text ({@code csv} or {@code json}), byte for byte what summary.csv/json would hold now. */
