@@ -138,7 +138,7 @@ public final class FigureOps {
   private static String quantityLabel(Quantity q) {
     String unit = switch (q.unit()) {
       case "1", "" -> "";
-      case "t" -> " (units of t)";
+      case "t", "energy" -> " (units of t)";
       default -> " (" + q.unit() + ")";
     };
     return q.name() + unit;

@@ -71,6 +71,9 @@ public final class HtmlReportWriter {
     distributionTable(h, report);
     failures(h, s);
     h.append("<h2>Spec</h2>\n<pre>").append(esc(report.specText())).append("</pre>\n");
+    // Marks the page with the number of figures the browser decoded (checked by the headless-browser test).
+    h.append("<script>window.addEventListener('load',function(){var n=0;for(var i=0;i<document.images.length;i++){var m=document.images[i];")
+        .append("if(m.complete&&m.naturalWidth>0){n++;}}document.body.setAttribute('data-rendered-images',String(n));});</script>\n");
     h.append("</body>\n</html>\n");
     out.write(h.toString());
   }
@@ -271,7 +274,13 @@ public final class HtmlReportWriter {
     if (x == Math.rint(x) && Math.abs(x) < 1e9) {
       return Long.toString((long) x);
     }
-    return String.format(Locale.ROOT, "%.5g", x);
+    String text = String.format(Locale.ROOT, "%.5g", x);
+    int e = text.indexOf('e');
+    String mantissa = e < 0 ? text : text.substring(0, e);
+    if (mantissa.indexOf('.') >= 0) {
+      mantissa = mantissa.replaceAll("0+$", "").replaceAll("\\.$", "");
+    }
+    return e < 0 ? mantissa : mantissa + text.substring(e);
   }
 
   static String esc(String s) {
