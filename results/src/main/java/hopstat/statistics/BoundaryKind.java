@@ -10,7 +10,9 @@ public enum BoundaryKind {
   /**
    * Where the across-realisation sample variance peaks: the largest interior value, refined by the
    * vertex of the parabola through it and its two neighbours (common practice; at a transition the
-   * invariant fluctuates between realisations).
+   * invariant fluctuates between realisations). Resolution is limited by the grid: when both
+   * neighbours have equal variance (e.g. both fully quantised) the vertex is the grid point itself
+   * in every bootstrap replica, and the interval collapses to that point.
    */
   VARIANCE_PEAK,
   /**

@@ -118,7 +118,9 @@ public final class HtmlReportWriter {
     h.append("<li>Near a transition the gap closes and real-space invariants may come out non-quantised; such samples are counted above and in the tables, ")
         .append("and they are rounded to the nearest integer for P(value = k).</li>\n");
     h.append("<li>Boundary positions between grid points come from linear interpolation (crossings) or a three-point parabola (variance peaks); ")
-        .append("their bootstrap intervals do not include this interpolation error. Several crossings along one cut usually mean noise: ")
+        .append("their bootstrap intervals do not include this interpolation error, so the grid spacing limits the resolution ")
+        .append("(a variance peak whose two neighbours have equal variance, e.g. both fully quantised, sits exactly on a grid point and its interval can shrink to that point). ")
+        .append("Several crossings along one cut usually mean noise: ")
         .append("check the existence fraction and the figures.</li>\n");
     h.append("<li>These are numerical estimates. Judge them against the physics, the figures and other sizes before relying on them.</li>\n");
     h.append("</ul></div>\n");
