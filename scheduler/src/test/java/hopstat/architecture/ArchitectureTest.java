@@ -17,7 +17,7 @@ class ArchitectureTest {
   @BeforeAll
   static void load() {
     // Only our own modules' classes (directories or hopstat-*.jar), not the large native jars.
-    ImportOption ours = location -> location.contains("/target/classes") || location.contains("hopstat-");
+    ImportOption ours = location -> (location.contains("/target/classes") || location.contains("hopstat-")) && !location.contains("-tests.jar");
     classes = new ClassFileImporter().withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS).withImportOption(ours).importPackages("hopstat");
   }
 
