@@ -55,4 +55,13 @@ class CommandsTest {
     assertThat(o.exitCode()).isEqualTo(ExitCode.RUNTIME_FAILURE);
     assertThat(o.err()).contains("is not a hopstat run directory").contains("at hopstat.");
   }
+
+  /** The CLI's logging configuration must parse (a broken one prints a stack trace on every start). */
+  @Test
+  void loggingConfigurationIsWellFormedXml() throws Exception {
+    try (var in = HopstatCommand.class.getResourceAsStream("/logback.xml")) {
+      assertThat(in).isNotNull();
+      javax.xml.parsers.DocumentBuilderFactory.newInstance().newDocumentBuilder().parse(in);
+    }
+  }
 }
