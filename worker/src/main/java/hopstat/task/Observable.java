@@ -20,19 +20,29 @@ public interface Observable {
   /** Meaning, conventions and sources (shown by the CLI and the README). */
   String description();
 
-  /** The numbers written per realisation, in order. */
-  List<Quantity> quantities();
-
   /**
-   * Extra parameters this observable reads from the point (e.g. a target error), with defaults.
-   * They join the spec's parameter namespace.
+   * Spec parameters this observable reads (besides the model's), with defaults; a {@code null}
+   * default means required, a NaN default means optional without a value. They join the spec's
+   * parameter namespace. Default: none.
    */
   default List<hopstat.model.ParameterInfo> parameters() {
     return List.of();
   }
 
+  /** The numbers written per realisation, in order. */
+  List<Quantity> quantities();
+
   /** True if the observable needs eigenvectors of the occupied states (E &lt; E_F). */
   boolean needsOccupiedStates();
+
+  /**
+   * True if the observable uses the dense N × N Hamiltonian or its spectrum (the default). Observables
+   * that work on the sparse term list only return false, so that {@link RealisationCost} sizes their
+   * runs without an N² matrix.
+   */
+  default boolean needsDenseMatrix() {
+    return true;
+  }
 
   /**
    * Why the observable cannot be used with this model, boundary and effective symmetry class (the

@@ -24,6 +24,13 @@ public final class ObservableCatalog {
     register(m, new Z2Observable());
     register(m, new ParityObservable());
     register(m, new WindingObservable());
+    register(m, new LyapunovObservable());
+    register(m, new LevelRatioObservable());
+    register(m, new IprObservable());
+    register(m, new BottVersusFermiEnergyObservable());
+    register(m, new LocalizerChernObservable());
+    register(m, new LocalizerGapObservable());
+    register(m, new InertiaGapObservable());
     return Collections.unmodifiableMap(m);
   }
 
