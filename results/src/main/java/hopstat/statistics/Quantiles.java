@@ -13,7 +13,7 @@ package hopstat.statistics;
 public record Quantiles(double q05, double q25, double q75, double q95) {
 
   /** The levels reported, in component order. */
-  public static final double[] LEVELS = {0.05, 0.25, 0.75, 0.95};
+  public static final java.util.List<Double> LEVELS = java.util.List.of(0.05, 0.25, 0.75, 0.95);
 
   /** Method text written into outputs. */
   public static final String METHOD = "linear interpolation between order statistics (Hyndman-Fan type 7)";
