@@ -22,7 +22,7 @@ import picocli.CommandLine.Option;
     mixinStandardHelpOptions = true,
     versionProvider = HopstatCommand.Version.class,
     description = "Disorder-ensemble statistics of topological invariants, gaps and localisation.",
-    subcommands = {CheckCommand.class, RunCommand.class, ResumeCommand.class, StatusCommand.class, ReportCommand.class, ModelsCommand.class, ServeCommand.class},
+    subcommands = {CheckCommand.class, BenchCommand.class, RunCommand.class, ResumeCommand.class, StatusCommand.class, ReportCommand.class, ModelsCommand.class, ServeCommand.class},
     exitCodeListHeading = "%nExit codes:%n",
     exitCodeList = {
         "0:done", "1:runtime failure (I/O, directory in use, corrupt journal)", "2:bad input (spec or options)",

@@ -42,10 +42,10 @@ final class RunCommand implements Callable<Integer> {
     String text = SpecFiles.read(specFile);
     JobSpec spec = SpecFiles.parse(text);
     StudyPlan plan = GridExpander.expand(spec);
-    PlanValidation.validate(plan);
     int n = threads(threads);
     LinalgKind kind = LinalgChoice.resolve(linalg);
     MemoryCheck.require(plan, n);
+    PlanValidation.validate(plan);
     RunDirectory dir = RunDirectory.create(out, text, LocalSession.runMetadata(plan, n, kind, Instant.now()));
     return RunSession.execute(root, dir, plan, n, kind, quiet);
   }

@@ -348,10 +348,15 @@ public final class SpecParser {
         problems.add(path + ".steps", "1", "a one-step range needs from = to; use steps >= 2");
         return null;
       }
+      // Decimal arithmetic on the numbers as written, so {"from": 0, "to": 0.3, "steps": 4} gives
+      // 0.1 and 0.2 (not 0.09999999999999999); both ends exact.
+      java.math.BigDecimal a = v.get("from").decimalValue();
+      java.math.BigDecimal b = v.get("to").decimalValue();
       List<Double> values = new ArrayList<>();
       for (int i = 0; i < steps; i++) {
-        // Both ends exact; interior points from + (to - from) * i / (steps - 1).
-        values.add(i == steps - 1 ? to : from + (to - from) * i / (steps - 1));
+        double x = i == 0 ? from : i == steps - 1 ? to
+            : a.add(b.subtract(a).multiply(java.math.BigDecimal.valueOf(i)).divide(java.math.BigDecimal.valueOf(steps - 1), java.math.MathContext.DECIMAL64)).doubleValue();
+        values.add(x);
       }
       return new ParameterSpec(name, values, true);
     }
