@@ -17,11 +17,10 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.ParentCommand;
 
 /** {@code hopstat serve --root DIR}: the batch service (queue, inbox, HTTP API, dashboard). */
-@Command(name = "serve", description = {
-    "Run the batch service on a root directory: a durable priority queue of jobs run one at a time on this machine,",
-    "fed by DIR/inbox/ (drop NAME.json or NAME@PRIORITY.json, written elsewhere and renamed in) and a loopback HTTP API,",
-    "with a live dashboard at its address. Survives restarts and kills: queued jobs stay queued, the running one resumes",
-    "from its journal. Stop with Ctrl-C (the running job is re-queued)."})
+@Command(name = "serve", mixinStandardHelpOptions = true, description = "Run the batch service on a root directory: a durable priority queue of jobs run one at a time"
+    + " on this machine, fed by DIR/inbox/ (drop NAME.json or NAME@PRIORITY.json, written elsewhere and renamed in) and a loopback HTTP API,"
+    + " with a live dashboard at its address. Survives restarts and kills: queued jobs stay queued, the running one resumes from its journal."
+    + " Stop with Ctrl-C (the running job is re-queued).")
 final class ServeCommand implements Callable<Integer> {
 
   /** Default TCP port. */
