@@ -1,7 +1,6 @@
 package hopstat.serve;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import java.io.File;
 import java.io.IOException;
 import java.net.URI;
 import java.nio.file.Files;
@@ -75,9 +74,5 @@ final class ServiceProcess implements AutoCloseable {
         kill();
       }
     }
-  }
-
-  static String classpathSeparator() {
-    return File.pathSeparator;
   }
 }
