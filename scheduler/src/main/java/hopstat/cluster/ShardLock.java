@@ -15,7 +15,9 @@ import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.time.Instant;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Locale;
 
 /**
@@ -30,14 +32,30 @@ import java.util.Locale;
  */
 public final class ShardLock implements AutoCloseable {
 
-  private final FileChannel runChannel;
-  private final FileLock runLock;
+  /**
+   * The JVM's shared holds on run-wide lock files, counted per file. Java refuses a second lock
+   * on a file region that the same JVM already locks (even a shared one), so shards running in
+   * one JVM (tests, or a future multi-shard worker) share one hold.
+   */
+  private static final Map<Path, SharedHold> SHARED = new HashMap<>();
+
+  private static final class SharedHold {
+    final FileChannel channel;
+    final FileLock lock;
+    int users;
+
+    SharedHold(FileChannel channel, FileLock lock) {
+      this.channel = channel;
+      this.lock = lock;
+    }
+  }
+
+  private final Path runFile;
   private final FileChannel shardChannel;
   private final FileLock shardLock;
 
-  private ShardLock(FileChannel runChannel, FileLock runLock, FileChannel shardChannel, FileLock shardLock) {
-    this.runChannel = runChannel;
-    this.runLock = runLock;
+  private ShardLock(Path runFile, FileChannel shardChannel, FileLock shardLock) {
+    this.runFile = runFile;
     this.shardChannel = shardChannel;
     this.shardLock = shardLock;
   }
@@ -52,14 +70,7 @@ public final class ShardLock implements AutoCloseable {
    *     works on the same shard
    */
   public static ShardLock acquire(Path dir, Shard shard) throws IOException {
-    FileChannel run = FileChannel.open(dir.resolve("lock"), StandardOpenOption.CREATE, StandardOpenOption.READ, StandardOpenOption.WRITE);
-    FileLock shared = tryLock(run, true);
-    if (shared == null) {
-      String owner = new String(Files.readAllBytes(dir.resolve("lock")), StandardCharsets.UTF_8).trim();
-      run.close();
-      throw new RunDirectoryException(dir + " is in use by a local hopstat session (" + (owner.isEmpty() ? "owner unknown" : owner)
-          + "); shard " + shard.index() + " does not start while it runs");
-    }
+    Path runFile = holdShared(dir, shard);
     Path file = file(dir, shard.index());
     Files.createDirectories(file.getParent());
     FileChannel own = FileChannel.open(file, StandardOpenOption.CREATE, StandardOpenOption.READ, StandardOpenOption.WRITE);
@@ -67,8 +78,7 @@ public final class ShardLock implements AutoCloseable {
     if (exclusive == null) {
       String owner = new String(Files.readAllBytes(file), StandardCharsets.UTF_8).trim();
       own.close();
-      shared.release();
-      run.close();
+      releaseShared(runFile);
       throw new RunDirectoryException("shard " + shard.index() + " of " + dir + " is already being worked on (" + (owner.isEmpty() ? "owner unknown" : owner) + ")");
     }
     String me = "pid " + ProcessHandle.current().pid() + " on " + hostName() + " since " + Instant.ofEpochMilli(ManagementFactory.getRuntimeMXBean().getStartTime())
@@ -76,7 +86,44 @@ public final class ShardLock implements AutoCloseable {
     own.truncate(0);
     own.write(ByteBuffer.wrap(me.getBytes(StandardCharsets.UTF_8)), 0);
     own.force(false);
-    return new ShardLock(run, shared, own, exclusive);
+    return new ShardLock(runFile, own, exclusive);
+  }
+
+  private static Path holdShared(Path dir, Shard shard) throws IOException {
+    Path runFile = dir.resolve("lock").toAbsolutePath().normalize();
+    synchronized (SHARED) {
+      SharedHold hold = SHARED.get(runFile);
+      if (hold == null) {
+        FileChannel run = FileChannel.open(runFile, StandardOpenOption.CREATE, StandardOpenOption.READ, StandardOpenOption.WRITE);
+        FileLock shared = tryLock(run, true);
+        if (shared == null) {
+          String owner = new String(Files.readAllBytes(runFile), StandardCharsets.UTF_8).trim();
+          run.close();
+          throw new RunDirectoryException(dir + " is in use by a local hopstat session (" + (owner.isEmpty() ? "owner unknown" : owner)
+              + "); shard " + shard.index() + " does not start while it runs");
+        }
+        hold = new SharedHold(run, shared);
+        SHARED.put(runFile, hold);
+      }
+      hold.users++;
+    }
+    return runFile;
+  }
+
+  private static void releaseShared(Path runFile) throws IOException {
+    synchronized (SHARED) {
+      SharedHold hold = SHARED.get(runFile);
+      if (hold != null && --hold.users == 0) {
+        SHARED.remove(runFile);
+        try {
+          if (hold.lock.isValid()) {
+            hold.lock.release();
+          }
+        } finally {
+          hold.channel.close();
+        }
+      }
+    }
   }
 
   /**
@@ -139,10 +186,7 @@ public final class ShardLock implements AutoCloseable {
       }
       shardChannel.close();
     } finally {
-      if (runLock.isValid()) {
-        runLock.release();
-      }
-      runChannel.close();
+      releaseShared(runFile);
     }
   }
 }
