@@ -50,7 +50,6 @@ final class CheckCommand implements Callable<Integer> {
   public Integer call() {
     JobSpec spec = SpecFiles.parse(SpecFiles.read(specFile));
     StudyPlan plan = GridExpander.expand(spec);
-    PlanValidation.validate(plan);
     int n = RunCommand.threads(threads);
     LinalgKind kind = LinalgChoice.resolve(linalg);
     PrintStream out = root.out;
@@ -79,6 +78,7 @@ final class CheckCommand implements Callable<Integer> {
           e.getKey(), c.matrixDimension(), MemoryCheck.bytes(c.heapBytes()), MemoryCheck.bytes(c.nativeBytes()));
     }
     MemoryCheck.require(plan, n);
+    PlanValidation.validate(plan);
     out.printf(Locale.ROOT, "memory      fits with %d thread(s) (JVM heap limit %s)%n", n, MemoryCheck.bytes(Runtime.getRuntime().maxMemory()));
     if (!noTiming) {
       Linalg la = LinalgFactory.create(kind);

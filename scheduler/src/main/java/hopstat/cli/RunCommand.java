@@ -45,10 +45,10 @@ final class RunCommand implements Callable<Integer> {
     String text = SpecFiles.read(specFile);
     JobSpec spec = SpecFiles.parse(text);
     StudyPlan plan = GridExpander.expand(spec);
-    PlanValidation.validate(plan);
     int n = threads(threads);
     LinalgKind kind = LinalgChoice.resolve(linalg);
     MemoryCheck.require(plan, n);
+    PlanValidation.validate(plan);
     Map<String, Object> metadata = new LinkedHashMap<>();
     metadata.put("name", spec.name());
     metadata.put("specHash", spec.specHash());

@@ -8,7 +8,6 @@ import hopstat.cluster.SlurmBackend;
 import hopstat.cluster.SlurmClient;
 import hopstat.cluster.SlurmJobState;
 import hopstat.expand.StudyPlan;
-import hopstat.queue.JournalReader;
 import hopstat.queue.RunDirectory;
 import hopstat.statistics.PointSummary;
 import hopstat.statistics.QuantitySummary;
@@ -70,7 +69,7 @@ final class StatusCommand implements Callable<Integer> {
     for (PointSummary p : s.points()) {
       List<String> row = new ArrayList<>();
       for (String g : s.gridNames()) {
-        row.add(String.format(Locale.ROOT, "%g", p.coordinates().get(g)));
+        row.add(java.math.BigDecimal.valueOf(p.coordinates().get(g)).stripTrailingZeros().toPlainString());
       }
       row.add(Integer.toString(p.done()));
       row.add(Integer.toString(p.failed()));

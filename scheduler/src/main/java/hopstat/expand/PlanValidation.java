@@ -21,6 +21,8 @@ public final class PlanValidation {
 
   /** Points whose first realisation is built and symmetry-checked, spread evenly over the grid. */
   public static final int SYMMETRY_CHECKED_POINTS = 12;
+  /** Points whose matrix is larger are not built here (their realisations are still checked as they run). */
+  public static final int SYMMETRY_CHECK_MAX_DIMENSION = 2000;
   /** At most this many distinct problems are listed. */
   static final int MAX_LISTED = 10;
 
@@ -46,6 +48,10 @@ public final class PlanValidation {
     int step = Math.max(1, points / SYMMETRY_CHECKED_POINTS);
     for (int i = 0; i < points; i += step) {
       GridPoint p = plan.points().get(i);
+      hopstat.lattice.Lattice lattice = model.lattice(p.point().linearSize(), p.point().boundary());
+      if (lattice.orbitals() > SYMMETRY_CHECK_MAX_DIMENSION || model.symmetryOperators().on(lattice).isEmpty()) {
+        continue;
+      }
       SymmetryCheckReport report = SymmetryCheckOps.check(p.point(), SeedOps.realisationSeed(plan.spec().seed(), p.index(), 0), SymmetryCheckKernel.TOLERANCE);
       for (SymmetryCheckResult v : report.violations()) {
         String reason = String.format(Locale.ROOT, "model %s with this disorder claims class %s, but a realisation breaks %s (relative violation %.2e > %.0e);"

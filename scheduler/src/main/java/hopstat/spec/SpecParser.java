@@ -43,6 +43,8 @@ public final class SpecParser {
   public static final String SIZE = "L";
   /** Fermi energy parameter (default 0). */
   public static final String FERMI_ENERGY = "fermiEnergy";
+  /** Model name that picks anderson-1d/2d/3d by the parameter {@code dim}. */
+  public static final String ANDERSON = "anderson";
   /** Largest accepted linear size; larger samples need the linear-scaling methods. */
   public static final int MAX_LINEAR_SIZE = 4096;
   /** Largest number of realisations per point. */
@@ -114,6 +116,9 @@ public final class SpecParser {
       String description = root.has("description") ? optionalText("description") : "";
       Long seed = requiredLong("seed");
       String modelName = requiredText("model");
+      if (ANDERSON.equals(modelName)) {
+        modelName = andersonByDimension();
+      }
       Model model = null;
       if (modelName != null) {
         model = ModelCatalog.find(modelName).orElse(null);
@@ -146,6 +151,23 @@ public final class SpecParser {
       problems.throwIfAny();
       return new JobSpec(name, description, seed, modelName, parameters, disorder, boundary,
           observables.stream().map(Observable::name).toList(), realisations, sampling, effective, canonicalHash(root));
+    }
+
+    /**
+     * {@code "model": "anderson"} with the parameter {@code dim} (1, 2 or 3, one value) stands for the
+     * model {@code anderson-<dim>d}; {@code dim} stays a recorded parameter of the point.
+     */
+    private String andersonByDimension() {
+      JsonNode dim = root.path("parameters").get("dim");
+      if (dim == null) {
+        problems.add("parameters.dim", null, "required by model anderson: the dimension, 1, 2 or 3");
+        return null;
+      }
+      if (!dim.isNumber() || dim.asDouble() != Math.rint(dim.asDouble()) || dim.asInt() < 1 || dim.asInt() > 3) {
+        problems.add("parameters.dim", dim.toString(), "must be one number: 1, 2 or 3 (a grid over dimensions needs separate jobs)");
+        return null;
+      }
+      return ANDERSON + "-" + dim.asInt() + "d";
     }
 
     private String requiredText(String key) {
@@ -326,10 +348,15 @@ public final class SpecParser {
         problems.add(path + ".steps", "1", "a one-step range needs from = to; use steps >= 2");
         return null;
       }
+      // Decimal arithmetic on the numbers as written, so {"from": 0, "to": 0.3, "steps": 4} gives
+      // 0.1 and 0.2 (not 0.09999999999999999); both ends exact.
+      java.math.BigDecimal a = v.get("from").decimalValue();
+      java.math.BigDecimal b = v.get("to").decimalValue();
       List<Double> values = new ArrayList<>();
       for (int i = 0; i < steps; i++) {
-        // Both ends exact; interior points from + (to - from) * i / (steps - 1).
-        values.add(i == steps - 1 ? to : from + (to - from) * i / (steps - 1));
+        double x = i == 0 ? from : i == steps - 1 ? to
+            : a.add(b.subtract(a).multiply(java.math.BigDecimal.valueOf(i)).divide(java.math.BigDecimal.valueOf(steps - 1), java.math.MathContext.DECIMAL64)).doubleValue();
+        values.add(x);
       }
       return new ParameterSpec(name, values, true);
     }
@@ -545,6 +572,9 @@ public final class SpecParser {
       }
       known.put(SIZE, new ParameterInfo(SIZE, null, "linear size L in unit cells (integer >= 2)"));
       known.put(FERMI_ENERGY, new ParameterInfo(FERMI_ENERGY, 0.0, "Fermi energy in the model's energy unit"));
+      if (model.name().startsWith(ANDERSON + "-")) {
+        known.put("dim", new ParameterInfo("dim", (double) model.dimension(), "dimension of the anderson model (1, 2 or 3)"));
+      }
       Set<String> strengthNames = new LinkedHashSet<>();
       for (DisorderSpec d : disorder) {
         if (d.strengthParameter() != null) {
@@ -575,7 +605,8 @@ public final class SpecParser {
         }
         if (info.isRequired()) {
           problems.add("parameters." + info.name(), null, "required by " + (info.name().equals(SIZE) ? "every job" : "model " + model.name()) + ": " + info.description());
-        } else {
+        } else if (!Double.isNaN(info.defaultValue())) {
+          // NaN marks an optional parameter with no value: it stays absent from the point.
           all.add(new ParameterSpec(info.name(), List.of(info.defaultValue()), false));
         }
       }

@@ -24,6 +24,7 @@ public final class ModelCatalog {
     register(m, new IsingChainModel());
     register(m, new SshModel());
     register(m, new MajoranaClusterModel());
+    for (int d = 1; d <= 3; d++) register(m, new AndersonModel(d));
     return Collections.unmodifiableMap(m);
   }
 

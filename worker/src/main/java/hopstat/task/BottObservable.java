@@ -44,6 +44,10 @@ final class BottObservable implements Observable {
     if (model.dimension() != 2) {
       return Optional.of("the Bott index is defined for d = 2 models; " + model.name() + " has d = " + model.dimension());
     }
+    Optional<String> noChern = TenfoldOps.whyNoChernNumber("the Bott index", effectiveClass);
+    if (noChern.isPresent()) {
+      return noChern;
+    }
     if (boundary != Boundary.PERIODIC) {
       return Optional.of("the Bott index needs \"boundary\": \"periodic\"");
     }

@@ -44,6 +44,10 @@ final class ChernMarkerObservable implements Observable {
     if (model.dimension() != 2) {
       return Optional.of("the Chern marker is defined for d = 2 models; " + model.name() + " has d = " + model.dimension());
     }
+    Optional<String> noChern = TenfoldOps.whyNoChernNumber("the Chern marker", effectiveClass);
+    if (noChern.isPresent()) {
+      return noChern;
+    }
     if (boundary != Boundary.OPEN) {
       return Optional.of("the Chern marker needs \"boundary\": \"open\" (position operators on a torus are not defined)");
     }

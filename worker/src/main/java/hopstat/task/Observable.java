@@ -20,16 +20,17 @@ public interface Observable {
   /** Meaning, conventions and sources (shown by the CLI and the README). */
   String description();
 
-  /** The numbers written per realisation, in order. */
-  List<Quantity> quantities();
-
   /**
-   * Extra parameters this observable reads from the point (e.g. a target error), with defaults.
-   * They join the spec's parameter namespace.
+   * Spec parameters this observable reads (besides the model's), with defaults; a {@code null}
+   * default means required, a NaN default means optional without a value. They join the spec's
+   * parameter namespace. Default: none.
    */
   default List<hopstat.model.ParameterInfo> parameters() {
     return List.of();
   }
+
+  /** The numbers written per realisation, in order. */
+  List<Quantity> quantities();
 
   /** True if the observable needs eigenvectors of the occupied states (E &lt; E_F). */
   boolean needsOccupiedStates();

@@ -24,6 +24,10 @@ public final class ObservableCatalog {
     register(m, new Z2Observable());
     register(m, new ParityObservable());
     register(m, new WindingObservable());
+    register(m, new LyapunovObservable());
+    register(m, new LevelRatioObservable());
+    register(m, new IprObservable());
+    register(m, new BottVersusFermiEnergyObservable());
     return Collections.unmodifiableMap(m);
   }
 

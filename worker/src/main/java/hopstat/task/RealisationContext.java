@@ -3,6 +3,7 @@ package hopstat.task;
 import hopstat.lattice.HamiltonianBuilder;
 import hopstat.lattice.Lattice;
 import hopstat.model.Model;
+import java.util.random.RandomGenerator;
 import org.ejml.data.ZMatrixRMaj;
 
 /**
@@ -18,6 +19,7 @@ public final class RealisationContext {
   private final Lattice lattice;
   private final PointSpec point;
   private final boolean vectorsWanted;
+  private final RandomGenerator random;
   private boolean denseBuilt;
   private boolean spectrumDone;
   private boolean vectorsDone;
@@ -25,6 +27,11 @@ public final class RealisationContext {
   private int occupiedCount;
 
   RealisationContext(RealisationWorkspace workspace, Model model, Lattice lattice, PointSpec point, boolean vectorsWanted) {
+    this(workspace, model, lattice, point, vectorsWanted, null);
+  }
+
+  RealisationContext(RealisationWorkspace workspace, Model model, Lattice lattice, PointSpec point, boolean vectorsWanted, RandomGenerator random) {
+    this.random = random;
     this.workspace = workspace;
     this.model = model;
     this.lattice = lattice;
@@ -140,5 +147,80 @@ public final class RealisationContext {
       occupiedDone = true;
     }
     return workspace.occupied;
+  }
+
+  /**
+   * The realisation's random generator, positioned after the draws of all disorder terms of the
+   * sample (and of any earlier observable that drew). Observables that generate further random
+   * structure themselves (the transfer-matrix {@code lyapunov}, which draws each slice's
+   * disorder as it goes) continue from it, so the realisation stays a function of its seed and
+   * the spec's observable order.
+   *
+   * @throws IllegalStateException if the context was made without a generator
+   */
+  public RandomGenerator random() {
+    if (random == null) {
+      throw new IllegalStateException("this realisation context carries no random generator");
+    }
+    return random;
+  }
+
+  /**
+   * Index of the first eigenvalue ≥ {@code energy} in {@link #spectrum()} (N if none).
+   */
+  public int firstIndexAtOrAbove(double energy) {
+    double[] e = spectrum();
+    int lo = 0;
+    int hi = dimension();
+    while (lo < hi) {
+      int mid = (lo + hi) >>> 1;
+      if (e[mid] < energy) {
+        lo = mid + 1;
+      } else {
+        hi = mid;
+      }
+    }
+    return lo;
+  }
+
+  /**
+   * The eigenvectors whose eigenvalues lie in [lower, upper), as the columns of an N × n_w
+   * matrix: column j belongs to {@code spectrum()[firstIndexAtOrAbove(lower) + j]}. Only these
+   * vectors are computed (one extra partial eigen-decomposition), unless all eigenvectors were
+   * computed anyway for an observable that declared {@link Observable#needsOccupiedStates()}.
+   * Not cached: each call recomputes. Read, not modified, by callers; overwritten by the next call.
+   *
+   * @throws ConvergenceFailure if the eigensolver did not converge
+   */
+  public ZMatrixRMaj eigenvectorsInWindow(double lower, double upper) {
+    int first = firstIndexAtOrAbove(lower);
+    int end = firstIndexAtOrAbove(upper);
+    int n = dimension();
+    int count = Math.max(0, end - first);
+    WindowVectors window = workspace.scratch(WindowVectors.class, linalg -> new WindowVectors());
+    window.vectors.reshape(n, count);
+    if (count == 0) {
+      return window.vectors;
+    }
+    if (vectorsWanted) {
+      ZMatrixRMaj all = workspace.vectors;
+      for (int i = 0; i < n; i++) {
+        System.arraycopy(all.data, 2 * (i * n + first), window.vectors.data, 2 * i * count, 2 * count);
+      }
+      return window.vectors;
+    }
+    if (window.values.length < n) {
+      window.values = new double[n];
+    }
+    if (!workspace.eigenSolver.eigenpairs(denseHamiltonian(), window.values, first, end - 1, window.vectors)) {
+      throw new ConvergenceFailure("Hermitian eigensolver did not converge for the eigenvectors in [" + lower + ", " + upper + ")");
+    }
+    return window.vectors;
+  }
+
+  /** Per-thread storage of {@link #eigenvectorsInWindow}. */
+  static final class WindowVectors {
+    final ZMatrixRMaj vectors = new ZMatrixRMaj(1, 1);
+    double[] values = new double[1];
   }
 }

@@ -76,7 +76,7 @@ public final class RealisationRunner {
       observables.add(o);
       vectors |= o.needsOccupiedStates();
     }
-    RealisationContext context = new RealisationContext(workspace, model, lattice, point, vectors);
+    RealisationContext context = new RealisationContext(workspace, model, lattice, point, vectors, random);
     checkSymmetries(model, lattice, point, context);
     for (Observable o : observables) {
       o.compute(context, values);

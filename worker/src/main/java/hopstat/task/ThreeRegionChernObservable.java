@@ -46,6 +46,10 @@ final class ThreeRegionChernObservable implements Observable {
     if (model.dimension() != 2) {
       return Optional.of("the three-region formula is defined for d = 2 models; " + model.name() + " has d = " + model.dimension());
     }
+    Optional<String> noChern = TenfoldOps.whyNoChernNumber("the three-region formula", effectiveClass);
+    if (noChern.isPresent()) {
+      return noChern;
+    }
     return Optional.empty();
   }
 
