@@ -9,13 +9,14 @@ stop() {
   local name="$1" pidfile="$STATE/run/$1.pid" pid
   [ -f "$pidfile" ] || return 0
   pid="$(cat "$pidfile")"
-  if kill -0 "$pid" 2>/dev/null; then
+  # Only the program slurm-up.sh started: a stale PID may belong to another process by now.
+  if [ "$(cat "/proc/$pid/comm" 2>/dev/null)" = "$name" ]; then
     kill -TERM "$pid"
     for _ in $(seq 1 50); do
-      kill -0 "$pid" 2>/dev/null || break
+      [ "$(cat "/proc/$pid/comm" 2>/dev/null)" = "$name" ] || break
       sleep 0.1
     done
-    if kill -0 "$pid" 2>/dev/null; then
+    if [ "$(cat "/proc/$pid/comm" 2>/dev/null)" = "$name" ]; then
       echo "slurm-down: $name (pid $pid) ignored SIGTERM; sending SIGKILL" >&2
       kill -KILL "$pid" 2>/dev/null || true
     fi

@@ -27,7 +27,14 @@ fi
 
 mkdir -p "$STATE"/{spool/ctld,spool/d,log,run}
 
-alive() { [ -f "$STATE/run/$1.pid" ] && kill -0 "$(cat "$STATE/run/$1.pid")" 2>/dev/null; }
+# A daemon counts as running only if its recorded PID is alive and is that program (a PID file
+# left from an earlier machine session may name a PID that now belongs to something else).
+alive() {
+  local pidfile="$STATE/run/$1.pid" pid
+  [ -s "$pidfile" ] || return 1
+  pid="$(cat "$pidfile")"
+  [ "$(cat "/proc/$pid/comm" 2>/dev/null)" = "$1" ]
+}
 
 # --- munge -----------------------------------------------------------------------------------
 if [ ! -s /etc/munge/munge.key ]; then
@@ -103,7 +110,7 @@ CONF
 
 # --- daemons --------------------------------------------------------------------------------
 if ! alive slurmctld; then
-  # -i: ignore state that an earlier instance may have saved (fresh cluster for every CI run).
+  # -i: start even if state saved by an earlier instance cannot be read (job ids go on from it).
   slurmctld -i
 fi
 if ! alive slurmd; then
