@@ -32,7 +32,7 @@ import picocli.CommandLine.ParentCommand;
  */
 @Command(name = "resume", description = {
     "Continue a run from its journal: runs only what is not journaled yet, then writes the summary.",
-    "For a run made by `submit`, resubmits only the incomplete shards to Slurm (new array + report job); --local runs them here instead."})
+    "For a run made by `submit`: resubmits only the incomplete shards to Slurm (a new array and report job); --local runs them here."})
 final class ResumeCommand implements Callable<Integer> {
 
   @ParentCommand HopstatCommand root;

@@ -32,9 +32,10 @@ import picocli.CommandLine.ParentCommand;
  * shards plus a report job. The run directory must be on a file system the compute nodes share.
  */
 @Command(name = "submit", description = {
-    "Run a job spec on a Slurm cluster: validates it like `run`, creates the run directory, splits the grid points into shards,",
-    "submits one job array (element k runs shard k) and a report job that writes the summary after the array has ended.",
-    "DIR must be on a file system shared with the compute nodes. Watch with `status DIR`; recover failed shards with `resume DIR`."})
+    "Run a job spec on a Slurm cluster: one job array of shards, then a report job that writes the summary.",
+    "Validates the spec like `run`, creates the run directory, splits the grid points into shards (element k of the array runs shard k)",
+    "and submits the report job with afterany, so it runs however the shards end. DIR must be on a file system shared with the",
+    "compute nodes. Watch with `status DIR`; resubmit failed shards with `resume DIR`."})
 final class SubmitCommand implements Callable<Integer> {
 
   @ParentCommand HopstatCommand root;
