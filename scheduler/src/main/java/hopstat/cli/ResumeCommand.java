@@ -96,7 +96,7 @@ final class ResumeCommand implements Callable<Integer> {
       states = backend.states(cluster);
     } catch (ClusterException e) {
       if (!local) {
-        throw e;
+        throw new ClusterException(e.getMessage() + "; `hopstat resume " + dir.path() + " --local` finishes the run on this machine instead");
       }
       root.err.println("hopstat: cannot ask Slurm about this run's jobs (" + e.getMessage() + "); no shard lock is held, going on locally");
       return;

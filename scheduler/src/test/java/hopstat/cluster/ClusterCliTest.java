@@ -148,6 +148,24 @@ class ClusterCliTest {
   }
 
   @Test
+  void withoutSlurmResumePointsToLocalAndLocalResumeFinishesTheRun() throws Exception {
+    Path dir = tmp.resolve("c");
+    assertThat(hopstat(FakeSlurm.create().otherwise(FakeSlurm.acceptingSbatch(10)), "submit", spec.toString(), "--out", dir.toString(), "--tasks", "2").exit()).isZero();
+    CommandRunner missing = argv -> {
+      throw new ClusterException("cannot run `" + argv.get(0) + "` (error=2, No such file or directory); is this a Slurm login node with the Slurm commands on PATH?");
+    };
+    Result r = hopstat(missing, "resume", dir.toString());
+    assertThat(r.exit()).isEqualTo(1);
+    assertThat(r.err()).contains("cannot run `squeue`", "--local");
+    Result local = hopstat(missing, "resume", dir.toString(), "--local", "--threads", "1", "--quiet");
+    assertThat(local.exit()).as(local.err()).isZero();
+    assertThat(local.err()).contains("going on locally");
+    Path reference = tmp.resolve("reference");
+    assertThat(hopstat(FakeSlurm.create(), "run", spec.toString(), "--out", reference.toString(), "--threads", "2", "--quiet").exit()).isZero();
+    assertThat(Files.readAllBytes(dir.resolve("summary.csv"))).isEqualTo(Files.readAllBytes(reference.resolve("summary.csv")));
+  }
+
+  @Test
   void resumeRefusesWhileAShardWorksOrSlurmStillHasJobs() throws Exception {
     Path dir = tmp.resolve("c");
     assertThat(hopstat(FakeSlurm.create().otherwise(FakeSlurm.acceptingSbatch(10)), "submit", spec.toString(), "--out", dir.toString(), "--tasks", "2").exit()).isZero();
