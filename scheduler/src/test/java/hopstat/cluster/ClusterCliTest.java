@@ -166,6 +166,22 @@ class ClusterCliTest {
   }
 
   @Test
+  void aShardStartsAgainAfterEarlierSessionsOfItself() throws Exception {
+    // A resubmitted shard opens a new journal file next to its own earlier ones (shard-0000-NNNN):
+    // the session number must not be taken from the shard index in the name.
+    Path dir = tmp.resolve("c");
+    assertThat(hopstat(FakeSlurm.create().otherwise(FakeSlurm.acceptingSbatch(10)), "submit", spec.toString(), "--out", dir.toString(), "--tasks", "1").exit()).isZero();
+    for (int session = 0; session < 3; session++) {
+      Result r = hopstat(FakeSlurm.create(), "shard", dir.toString(), "--index", "0", "--count", "1");
+      assertThat(r.exit()).as(r.err()).isZero();
+    }
+    try (var files = Files.list(dir.resolve("journal"))) {
+      assertThat(files.map(p -> p.getFileName().toString()).sorted().toList())
+          .containsExactly("shard-0000-0001.jsonl", "shard-0000-0002.jsonl", "shard-0000-0003.jsonl");
+    }
+  }
+
+  @Test
   void resumeRefusesWhileAShardWorksOrSlurmStillHasJobs() throws Exception {
     Path dir = tmp.resolve("c");
     assertThat(hopstat(FakeSlurm.create().otherwise(FakeSlurm.acceptingSbatch(10)), "submit", spec.toString(), "--out", dir.toString(), "--tasks", "2").exit()).isZero();

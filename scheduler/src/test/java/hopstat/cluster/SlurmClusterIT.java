@@ -188,6 +188,60 @@ class SlurmClusterIT {
     assertThat(nothingLeft.out()).contains("nothing to resubmit");
   }
 
+  /** One point at L = 16 with 40 realisations: several seconds of work, long enough to cancel the shard midway. */
+  static final String SLOW_SPEC = """
+      {
+        "name": "slurm-it-cancel",
+        "seed": 777,
+        "model": "qwz",
+        "parameters": { "m": 1.0, "W": 2.0, "L": 16, "fermiEnergy": 0.0 },
+        "disorder": [ { "type": "onsite-box", "strength": "W" } ],
+        "boundary": "periodic",
+        "observables": ["gap", "bott"],
+        "realisations": 40
+      }
+      """;
+
+  @Test
+  void aShardCancelledMidwayKeepsItsJournalAndResumeRunsOnlyTheRest() throws Exception {
+    Path slowSpec = tmp.resolve("slow.json");
+    Files.writeString(slowSpec, SLOW_SPEC);
+    Path dir = tmp.resolve("cancelled");
+    Result submit = hopstat("submit", slowSpec.toString(), "--out", dir.toString(), "--tasks", "1");
+    assertThat(submit.exit()).as(submit.err()).isZero();
+    JsonNode first = cluster(dir).path("submissions").get(0);
+    String array = first.path("arrayJobId").asText();
+
+    // Cancel once the shard has journaled some realisations (scancel: SIGTERM, then SIGKILL after KillWait).
+    long deadline = System.nanoTime() + JOB_WAIT.toNanos();
+    while (journalLines(dir) < 3) {
+      if (System.nanoTime() > deadline || !isActive(array)) {
+        fail("the shard did not journal 3 realisations while running (state " + state(array) + ")");
+      }
+      Thread.sleep(100);
+    }
+    Result cancel = exec(List.of("scancel", array));
+    assertThat(cancel.exit()).as(cancel.err()).isZero();
+    awaitEnded(first.path("reportJobId").asText(), dir);
+    long kept = journalLines(dir);
+    assertThat(kept).as("realisations journaled before the cancel are kept").isBetween(3L, 39L);
+
+    Result status = hopstat("status", dir.toString());
+    String shard0 = rows(status.out(), 1).get(0);
+    assertThat(shard0).contains("cancelled", "no");
+    Result resume = hopstat("resume", dir.toString());
+    assertThat(resume.exit()).as(resume.err()).isZero();
+    assertThat(resume.out()).contains("shard 0: " + kept + " of 40 realisation(s) journaled; resubmitting");
+    awaitEnded(cluster(dir).path("submissions").get(1).path("reportJobId").asText(), dir);
+
+    Path reference = tmp.resolve("slow-local");
+    Result run = hopstat("run", slowSpec.toString(), "--out", reference.toString(), "--threads", "2", "--quiet");
+    assertThat(run.exit()).as(run.err()).isZero();
+    assertThat(Files.readAllBytes(dir.resolve("summary.csv"))).isEqualTo(Files.readAllBytes(reference.resolve("summary.csv")));
+    assertThat(Files.readAllBytes(dir.resolve("summary.json"))).isEqualTo(Files.readAllBytes(reference.resolve("summary.json")));
+    assertThat(journalLines(dir)).as("nothing ran twice").isEqualTo(40);
+  }
+
   @Test
   void sbatchRefusalIsExitOneWithSbatchsMessageAndOwnValidationIsExitTwo() throws Exception {
     Result badPartition = hopstat("submit", spec.toString(), "--out", tmp.resolve("refused").toString(), "--tasks", "2", "--partition", "no-such-partition");
@@ -225,11 +279,27 @@ class SlurmClusterIT {
     return JSON.readTree(dir.resolve("cluster.json").toFile());
   }
 
-  /** The shard rows of {@code status}'s cluster table. */
+  /** The shard rows of {@code status}'s cluster table (three shards). */
   static List<String> rows(String statusOut) {
+    return rows(statusOut, 3);
+  }
+
+  static List<String> rows(String statusOut, int shards) {
     List<String> lines = statusOut.lines().toList();
     int header = lines.indexOf(lines.stream().filter(l -> l.startsWith("shard  points")).findFirst().orElseThrow());
-    return lines.subList(header + 1, header + 4);
+    return lines.subList(header + 1, header + 1 + shards);
+  }
+
+  /** Complete journal lines in all of the run's journal files. */
+  static long journalLines(Path dir) throws IOException {
+    long n = 0;
+    try (Stream<Path> files = Files.list(dir.resolve("journal"))) {
+      for (Path f : files.filter(p -> p.toString().endsWith(".jsonl")).toList()) {
+        String text = Files.readString(f, StandardCharsets.UTF_8);
+        n += text.chars().filter(c -> c == '\n').count();
+      }
+    }
+    return n;
   }
 
   static String state(String jobId) throws IOException, InterruptedException {
