@@ -4,6 +4,8 @@ import hopstat.statistics.IntegerDistribution;
 import hopstat.statistics.MeanEstimate;
 import hopstat.statistics.PointSummary;
 import hopstat.statistics.QuantitySummary;
+import hopstat.statistics.Quantiles;
+import hopstat.statistics.TypicalValue;
 import hopstat.statistics.Summary;
 import java.io.IOException;
 import java.io.Writer;
@@ -13,13 +15,19 @@ import java.util.List;
 /**
  * {@code summary.csv}: tidy, one row per (grid point, quantity). Columns: the grid axes named as in
  * the spec, then {@code observable, n, mean, stderr, ci95_low, ci95_high, std, median, min, max,
- * failed, modal, modal_fraction, non_quantised, max_int_distance}. The last four are empty for
- * quantities that are not integer-valued. Empty cells mean "not defined" (e.g. stderr for n = 1).
+ * failed, modal, modal_fraction, non_quantised, max_int_distance, q05, q25, q75, q95, boot95_low,
+ * boot95_high, typical, typical_ci95_low, typical_ci95_high}. modal..max_int_distance are empty for
+ * quantities that are not integer-valued; q05..q95 are type-7 sample quantiles; boot95_* is the
+ * percentile-bootstrap interval of the mean; typical* is the geometric mean with its log-scale
+ * Student-t interval, empty unless every sample is positive and the quantity is not
+ * integer-valued. Empty cells mean "not defined" (e.g. stderr for n = 1). Columns are only ever
+ * appended, never renamed or reordered.
  */
 final class CsvSummaryFormat implements ReportFormat {
 
   static final List<String> STAT_COLUMNS = List.of("observable", "n", "mean", "stderr", "ci95_low", "ci95_high", "std", "median", "min", "max",
-      "failed", "modal", "modal_fraction", "non_quantised", "max_int_distance");
+      "failed", "modal", "modal_fraction", "non_quantised", "max_int_distance", "q05", "q25", "q75", "q95", "boot95_low", "boot95_high", "typical",
+      "typical_ci95_low", "typical_ci95_high");
 
   @Override
   public String fileName() {
@@ -54,12 +62,23 @@ final class CsvSummaryFormat implements ReportFormat {
         row.add(d == null ? "" : NumberText.of(d.modalFraction()));
         row.add(d == null ? "" : Integer.toString(d.nonQuantised()));
         row.add(d == null ? "" : NumberText.of(d.maxDistanceToInteger()));
+        Quantiles qs = q.quantiles();
+        row.add(NumberText.of(qs.q05()));
+        row.add(NumberText.of(qs.q25()));
+        row.add(NumberText.of(qs.q75()));
+        row.add(NumberText.of(qs.q95()));
+        row.add(NumberText.of(q.meanBootstrap().low()));
+        row.add(NumberText.of(q.meanBootstrap().high()));
+        TypicalValue tv = q.typical();
+        row.add(tv == null ? "" : NumberText.of(tv.geometricMean()));
+        row.add(tv == null ? "" : NumberText.of(tv.ciLow()));
+        row.add(tv == null ? "" : NumberText.of(tv.ciHigh()));
         line(out, row);
       }
     }
   }
 
-  private static void line(Writer out, List<String> cells) throws IOException {
+  static void line(Writer out, List<String> cells) throws IOException {
     for (int i = 0; i < cells.size(); i++) {
       if (i > 0) {
         out.write(',');

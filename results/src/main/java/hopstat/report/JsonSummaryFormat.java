@@ -2,7 +2,12 @@ package hopstat.report;
 
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
+import hopstat.statistics.BootstrapOps;
+import hopstat.statistics.BoundaryEstimate;
 import hopstat.statistics.IntegerDistribution;
+import hopstat.statistics.Quantiles;
+import hopstat.statistics.TypicalValue;
+import hopstat.statistics.ValueProbability;
 import hopstat.statistics.MeanEstimate;
 import hopstat.statistics.PointSummary;
 import hopstat.statistics.QuantitySummary;
@@ -16,7 +21,10 @@ import java.util.Map;
  * {@code summary.json}: the numbers of {@code summary.csv} plus, for integer-valued invariants, the
  * distribution of rounded values per point (value → count and fraction), the Wilson interval of the
  * modal fraction and the largest distance of any sample from its nearest integer. States the
- * estimator, error measure and confidence level. Contains nothing that depends on when, where or
+ * estimator, error measure and confidence level. Later additions (appended after the original
+ * fields): quantiles, bootstrap interval of the mean, typical value, P(value) with Wilson intervals
+ * per integer value, and the phase-boundary estimates with their bootstrap intervals. Contains
+ * nothing that depends on when, where or
  * with how many threads the run happened, so equal journals give byte-identical files.
  */
 final class JsonSummaryFormat implements ReportFormat {
@@ -45,6 +53,11 @@ final class JsonSummaryFormat implements ReportFormat {
     g.writeStringField("modalFractionInterval", "Wilson score");
     g.writeNumberField("quantisationTolerance", SampleStatisticsOps.QUANTISATION_TOLERANCE);
     g.writeStringField("excludes", "finite-size and other systematic errors; only disorder-sampling error is included");
+    g.writeStringField("quantiles", Quantiles.METHOD);
+    g.writeStringField("bootstrap", BootstrapOps.METHOD);
+    g.writeNumberField("bootstrapResamples", BootstrapOps.RESAMPLES);
+    g.writeStringField("bootstrapSeed", BootstrapOps.SEED_RULE);
+    g.writeStringField("typical", TypicalValue.METHOD);
     g.writeEndObject();
     g.writeArrayFieldStart("grid");
     for (String name : s.gridNames()) {
@@ -80,6 +93,11 @@ final class JsonSummaryFormat implements ReportFormat {
       g.writeEndObject();
     }
     g.writeEndArray();
+    g.writeArrayFieldStart("boundaries");
+    for (BoundaryEstimate b : s.boundaries()) {
+      writeBoundary(g, b);
+    }
+    g.writeEndArray();
     g.writeEndObject();
     g.flush();
     out.write('\n');
@@ -111,11 +129,55 @@ final class JsonSummaryFormat implements ReportFormat {
         g.writeObjectFieldStart(Long.toString(e.getKey()));
         g.writeNumberField("count", e.getValue());
         number(g, "fraction", (double) e.getValue() / d.n());
+        ValueProbability vp = d.probabilities().stream().filter(v -> v.value() == e.getKey()).findFirst().orElseThrow();
+        number(g, "wilsonLow", vp.wilsonLow());
+        number(g, "wilsonHigh", vp.wilsonHigh());
         g.writeEndObject();
       }
       g.writeEndObject();
       g.writeEndObject();
     }
+    Quantiles qs = q.quantiles();
+    g.writeObjectFieldStart("quantiles");
+    number(g, "q05", qs.q05());
+    number(g, "q25", qs.q25());
+    number(g, "q75", qs.q75());
+    number(g, "q95", qs.q95());
+    g.writeEndObject();
+    number(g, "boot95Low", q.meanBootstrap().low());
+    number(g, "boot95High", q.meanBootstrap().high());
+    TypicalValue tv = q.typical();
+    if (tv != null) {
+      g.writeObjectFieldStart("typical");
+      g.writeNumberField("n", tv.n());
+      number(g, "geometricMean", tv.geometricMean());
+      number(g, "logStderr", tv.logStandardError());
+      number(g, "ci95Low", tv.ciLow());
+      number(g, "ci95High", tv.ciHigh());
+      g.writeEndObject();
+    }
+    g.writeEndObject();
+  }
+
+  private static void writeBoundary(JsonGenerator g, BoundaryEstimate b) throws IOException {
+    g.writeStartObject();
+    g.writeStringField("kind", b.kind().name());
+    g.writeStringField("quantity", b.quantity());
+    g.writeStringField("axis", b.axis());
+    g.writeObjectFieldStart("fixed");
+    for (Map.Entry<String, Double> e : b.fixed().entrySet()) {
+      g.writeNumberField(e.getKey(), e.getValue());
+    }
+    g.writeEndObject();
+    number(g, "level", b.level());
+    number(g, "sizeLow", b.sizeLow());
+    number(g, "sizeHigh", b.sizeHigh());
+    number(g, "estimate", b.estimate());
+    number(g, "ci95Low", b.interval().low());
+    number(g, "ci95High", b.interval().high());
+    number(g, "existsFraction", b.existsFraction());
+    g.writeNumberField("resamples", b.resamples());
+    g.writeNumberField("nearestPoint", b.nearestPoint());
     g.writeEndObject();
   }
 

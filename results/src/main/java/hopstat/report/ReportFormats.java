@@ -11,7 +11,8 @@ import java.nio.file.StandardCopyOption;
 /** The machine-readable summary formats, and the one place that writes them to disk. */
 public enum ReportFormats {
   CSV(new CsvSummaryFormat()),
-  JSON(new JsonSummaryFormat());
+  JSON(new JsonSummaryFormat()),
+  BOUNDARIES_CSV(new BoundaryCsvFormat());
 
   private final ReportFormat format;
 

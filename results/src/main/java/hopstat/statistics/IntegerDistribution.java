@@ -1,6 +1,7 @@
 package hopstat.statistics;
 
 import java.util.Collections;
+import java.util.List;
 import java.util.SortedMap;
 import java.util.TreeMap;
 
@@ -17,6 +18,8 @@ import java.util.TreeMap;
  * @param maxDistanceToInteger largest |x − round(x)| over samples
  * @param nonQuantised samples with |x − round(x)| &gt; tolerance
  * @param tolerance the quantisation tolerance used
+ * @param probabilities P(rounded value = k) with 95 % Wilson intervals, ascending in k (one entry per
+ *     value in counts)
  */
 public record IntegerDistribution(
     int n,
@@ -27,9 +30,11 @@ public record IntegerDistribution(
     double modalWilsonHigh,
     double maxDistanceToInteger,
     int nonQuantised,
-    double tolerance) {
+    double tolerance,
+    List<ValueProbability> probabilities) {
 
   public IntegerDistribution {
     counts = Collections.unmodifiableSortedMap(new TreeMap<>(counts));
+    probabilities = List.copyOf(probabilities);
   }
 }

@@ -63,6 +63,54 @@ public final class SampleStatisticsOps {
   }
 
   /**
+   * Type-7 quantile (see {@link Quantiles}) of an ascending array.
+   *
+   * @param sorted ascending, non-empty; read, not modified
+   * @param p level in [0, 1]
+   */
+  public static double quantileOfSorted(double[] sorted, double p) {
+    if (sorted.length == 0) {
+      return Double.NaN;
+    }
+    if (!(p >= 0 && p <= 1)) {
+      throw new IllegalArgumentException("quantile level must lie in [0, 1]: " + p);
+    }
+    double h = (sorted.length - 1) * p;
+    int j = (int) Math.floor(h);
+    if (j >= sorted.length - 1) {
+      return sorted[sorted.length - 1];
+    }
+    return sorted[j] + (h - j) * (sorted[j + 1] - sorted[j]);
+  }
+
+  /** Quantiles at {@link Quantiles#LEVELS}; NaN when empty. */
+  public static Quantiles quantiles(double[] x) {
+    double[] s = x.clone();
+    Arrays.sort(s);
+    return new Quantiles(quantileOfSorted(s, 0.05), quantileOfSorted(s, 0.25), quantileOfSorted(s, 0.75), quantileOfSorted(s, 0.95));
+  }
+
+  /**
+   * Typical value exp⟨ln x⟩ with its log-scale Student-t interval.
+   *
+   * @return null unless every sample is strictly positive and finite (and there is at least one)
+   */
+  public static TypicalValue typical(double[] x) {
+    if (x.length == 0) {
+      return null;
+    }
+    double[] logs = new double[x.length];
+    for (int i = 0; i < x.length; i++) {
+      if (!(x[i] > 0) || !Double.isFinite(x[i])) {
+        return null;
+      }
+      logs[i] = Math.log(x[i]);
+    }
+    MeanEstimate m = mean(logs);
+    return new TypicalValue(m.n(), Math.exp(m.mean()), m.standardError(), Math.exp(m.ciLow()), Math.exp(m.ciHigh()));
+  }
+
+  /**
    * Wilson score interval for a binomial proportion k/n at {@link #CONFIDENCE} (Wilson, J. Am.
    * Stat. Assoc. 22, 209 (1927)).
    *
@@ -104,7 +152,12 @@ public final class SampleStatisticsOps {
     }
     int n = x.length;
     double[] ci = wilson(Math.max(best, 0), n);
+    java.util.List<ValueProbability> probabilities = new java.util.ArrayList<>();
+    for (var e : counts.entrySet()) {
+      double[] w = wilson(e.getValue(), n);
+      probabilities.add(new ValueProbability(e.getKey(), e.getValue(), (double) e.getValue() / n, w[0], w[1]));
+    }
     return new IntegerDistribution(n, counts, modal, n == 0 ? Double.NaN : (double) best / n, ci[0], ci[1],
-        n == 0 ? Double.NaN : maxDistance, nonQuantised, QUANTISATION_TOLERANCE);
+        n == 0 ? Double.NaN : maxDistance, nonQuantised, QUANTISATION_TOLERANCE, probabilities);
   }
 }

@@ -12,13 +12,15 @@ import java.util.List;
  * @param quantityNames quantities in observable order
  * @param integerQuantities the integer-valued ones among them
  * @param points per-point statistics in index order
+ * @param boundaries phase-boundary estimates along grid cuts ({@link BoundaryOps})
  */
-public record Summary(String name, String specHash, List<String> gridNames, int plannedPerPoint, List<String> quantityNames, List<String> integerQuantities, List<PointSummary> points) {
+public record Summary(String name, String specHash, List<String> gridNames, int plannedPerPoint, List<String> quantityNames, List<String> integerQuantities, List<PointSummary> points, List<BoundaryEstimate> boundaries) {
   public Summary {
     gridNames = List.copyOf(gridNames);
     quantityNames = List.copyOf(quantityNames);
     integerQuantities = List.copyOf(integerQuantities);
     points = List.copyOf(points);
+    boundaries = List.copyOf(boundaries);
   }
 
   /** Total DONE realisations. */

@@ -49,13 +49,14 @@ public final class SummaryOps {
     for (StudyLayout.Point point : layout.points()) {
       List<RealisationResult> results = byPoint.get(point.index());
       results.sort(Comparator.comparingInt(RealisationResult::realisationIndex));
-      points.add(summarisePoint(point, results, layout.quantities()));
+      points.add(summarisePoint(layout.specHash(), point, results, layout.quantities()));
     }
     return new Summary(layout.name(), layout.specHash(), layout.gridNames(), layout.plannedPerPoint(),
-        layout.quantities().stream().map(Quantity::name).toList(), integerQuantities, points);
+        layout.quantities().stream().map(Quantity::name).toList(), integerQuantities, points,
+        BoundaryOps.estimate(layout, records));
   }
 
-  private static PointSummary summarisePoint(StudyLayout.Point point, List<RealisationResult> results, List<Quantity> quantities) {
+  private static PointSummary summarisePoint(String specHash, StudyLayout.Point point, List<RealisationResult> results, List<Quantity> quantities) {
     int done = 0;
     int failed = 0;
     Map<String, Integer> reasons = new LinkedHashMap<>();
@@ -83,7 +84,9 @@ public final class SummaryOps {
         max = Math.max(max, v);
       }
       summaries.add(new QuantitySummary(q.name(), SampleStatisticsOps.mean(x), SampleStatisticsOps.median(x), min, max,
-          q.integerValued() ? SampleStatisticsOps.integerDistribution(x) : null));
+          q.integerValued() ? SampleStatisticsOps.integerDistribution(x) : null, SampleStatisticsOps.quantiles(x),
+          BootstrapOps.meanInterval(x, BootstrapOps.seed(specHash, "mean", "point=" + point.index(), q.name())),
+          q.integerValued() ? null : SampleStatisticsOps.typical(x)));
     }
     Map<String, Integer> topReasons = new LinkedHashMap<>();
     reasons.entrySet().stream()

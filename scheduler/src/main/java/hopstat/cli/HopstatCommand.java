@@ -25,7 +25,7 @@ import picocli.CommandLine.Option;
     mixinStandardHelpOptions = true,
     versionProvider = HopstatCommand.Version.class,
     description = "Disorder-ensemble statistics of topological invariants, gaps and localisation.",
-    subcommands = {CheckCommand.class, RunCommand.class, ResumeCommand.class, StatusCommand.class, ReportCommand.class, ModelsCommand.class,
+    subcommands = {CheckCommand.class, BenchCommand.class, RunCommand.class, ResumeCommand.class, StatusCommand.class, ReportCommand.class, ModelsCommand.class,
         SubmitCommand.class, ShardCommand.class},
     exitCodeListHeading = "%nExit codes:%n",
     exitCodeList = {

@@ -3,14 +3,15 @@ package hopstat.cli;
 import hopstat.expand.StudyPlan;
 import hopstat.queue.RunDirectory;
 import java.nio.file.Path;
+import java.time.Instant;
 import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 
-/** {@code hopstat report DIR}: regenerates the summaries from the journal alone. */
-@Command(name = "report", description = "Regenerate summary.csv and summary.json of a run directory from its spec and journal.")
+/** {@code hopstat report DIR}: regenerates every output (summaries, figures, HTML, HDF5) from the journal alone. */
+@Command(name = "report", description = "Write summary.csv, summary.json, boundaries.csv, figures/, report.html and results.h5 of a run directory from its spec and journal.")
 final class ReportCommand implements Callable<Integer> {
 
   @ParentCommand HopstatCommand root;
@@ -20,9 +21,11 @@ final class ReportCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
+    // Figures are drawn off-screen; never try to open a display.
+    System.setProperty("java.awt.headless", "true");
     RunDirectory dir = RunDirectory.open(dirPath);
     StudyPlan plan = RunSummaries.plan(dir);
-    List<Path> written = RunSummaries.write(dir, plan);
+    List<Path> written = RunSummaries.report(dir, plan, Instant.now());
     for (Path p : written) {
       root.out.println("wrote " + p);
     }

@@ -36,6 +36,15 @@ public interface Observable {
   boolean needsOccupiedStates();
 
   /**
+   * True if the observable uses the dense N × N Hamiltonian or its spectrum (the default). Observables
+   * that work on the sparse term list only return false, so that {@link RealisationCost} sizes their
+   * runs without an N² matrix.
+   */
+  default boolean needsDenseMatrix() {
+    return true;
+  }
+
+  /**
    * Why the observable cannot be used with this model, boundary and effective symmetry class (the
    * model's class restricted by the disorder), or empty if it can.
    */

@@ -28,6 +28,9 @@ public final class ObservableCatalog {
     register(m, new LevelRatioObservable());
     register(m, new IprObservable());
     register(m, new BottVersusFermiEnergyObservable());
+    register(m, new LocalizerChernObservable());
+    register(m, new LocalizerGapObservable());
+    register(m, new InertiaGapObservable());
     return Collections.unmodifiableMap(m);
   }
 

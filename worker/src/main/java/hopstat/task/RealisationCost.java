@@ -1,31 +1,55 @@
 package hopstat.task;
 
+import hopstat.lattice.Lattice;
 import hopstat.model.Model;
 import hopstat.model.ModelCatalog;
 
 /**
- * Memory one realisation of a point needs on the dense path, for sizing runs before they start.
+ * Memory one realisation of a point needs, for sizing runs before they start.
+ *
+ * <p>Dense path (any observable with {@link Observable#needsDenseMatrix()}): the N×N Hamiltonian
+ * and, with eigenvectors, the vector matrices. Sparse path (every observable dense-free, e.g.
+ * {@code chern-localizer}, {@code gap-inertia}): the slice sweep's two dense blocks of the largest
+ * slice, n_slice = 2·N/L_x for the doubled localizer (N/L_x orbitals per x-slice of a d-dimensional
+ * sample, doubled again as a margin for merged slices), plus the term list; the dense N×N matrix
+ * is still counted when the per-realisation symmetry check builds it (N ≤ {@link
+ * RealisationRunner#MAX_SYMMETRY_CHECK_DIMENSION} and the model declares symmetry operators).
  *
  * @param matrixDimension N, the Hamiltonian's dimension
- * @param heapBytes Java heap held by one worker's workspace: the dense N×N complex Hamiltonian
- *     (16 N² bytes), plus with eigenvectors the N×N vectors, the occupied block and its phased copy
- *     (≤ 3 × 16 N², bounded by the full-matrix case)
- * @param nativeBytes off-heap memory of the native eigensolver: a copy of the matrix and, with
- *     eigenvectors, the N×N output (16 N² each) plus O(N) work arrays
+ * @param heapBytes Java heap held by one worker's workspace
+ * @param nativeBytes off-heap memory of the native solvers
  */
 public record RealisationCost(long matrixDimension, long heapBytes, long nativeBytes) {
 
-  /** Estimate for one realisation of {@code point} (the dense path of the foundation observables). */
+  /** Bytes per term of the Hamiltonian builder (two ints, two doubles) times a term-count margin per orbital. */
+  private static final long TERM_BYTES_PER_ORBITAL = 24L * 16;
+
+  /** Estimate for one realisation of {@code point}. */
   public static RealisationCost of(PointSpec point) {
     Model model = ModelCatalog.find(point.model()).orElseThrow(() -> new IllegalStateException("unknown model " + point.model()));
-    long n = model.lattice(point.linearSize(), point.boundary()).orbitals();
+    Lattice lattice = model.lattice(point.linearSize(), point.boundary());
+    long n = lattice.orbitals();
     boolean vectors = false;
+    boolean dense = false;
     for (String name : point.observables()) {
-      vectors |= ObservableCatalog.find(name).map(Observable::needsOccupiedStates).orElse(false);
+      Observable o = ObservableCatalog.find(name).orElse(null);
+      vectors |= o != null && o.needsOccupiedStates();
+      dense |= o == null || o.needsDenseMatrix();
     }
     long matrix = 16L * n * n;
-    long heap = matrix * (vectors ? 4 : 1) + 64L * n;
-    long nativeBytes = matrix * (vectors ? 2 : 1) + 256L * n;
+    if (dense) {
+      long heap = matrix * (vectors ? 4 : 1) + 64L * n;
+      long nativeBytes = matrix * (vectors ? 2 : 1) + 256L * n;
+      return new RealisationCost(n, heap, nativeBytes);
+    }
+    long slice = 4L * n / Math.max(1, lattice.linearSize());
+    long block = 16L * slice * slice;
+    long heap = 3 * block + TERM_BYTES_PER_ORBITAL * n + 64L * n;
+    long nativeBytes = 2 * block + 64L * slice;
+    boolean symmetryCheck = n <= RealisationRunner.MAX_SYMMETRY_CHECK_DIMENSION && !model.symmetryOperators().on(lattice).isEmpty();
+    if (symmetryCheck) {
+      heap += matrix;
+    }
     return new RealisationCost(n, heap, nativeBytes);
   }
 }

@@ -72,8 +72,13 @@ public final class SymmetryCheckOps {
       kind.apply(term, model, point.parameters(), lattice, random, builder);
     }
     ZMatrixRMaj h = new ZMatrixRMaj(1, 1);
-    builder.toDense(h);
     SymmetryClass effective = effectiveClass(model, point.disorder());
+    // No declared operator: nothing reads the matrix. Above the runner's dense limit the N x N
+    // matrix would not fit (e.g. N = 80 000 for dense-free localizer runs): not checked there either.
+    if (model.symmetryOperators().on(lattice).isEmpty() || lattice.orbitals() > RealisationRunner.MAX_SYMMETRY_CHECK_DIMENSION) {
+      return checkClaimed(model, lattice, h, effective, tolerance, false);
+    }
+    builder.toDense(h);
     return checkClaimed(model, lattice, h, effective, tolerance);
   }
 
@@ -83,6 +88,12 @@ public final class SymmetryCheckOps {
    * @param hamiltonian read, not modified
    */
   public static SymmetryCheckReport checkClaimed(Model model, Lattice lattice, ZMatrixRMaj hamiltonian, SymmetryClass claimed, double tolerance) {
+    return checkClaimed(model, lattice, hamiltonian, claimed, tolerance, true);
+  }
+
+  /** As above; with {@code withMatrix} false the declared operators are listed but not applied (no dense matrix). */
+  private static SymmetryCheckReport checkClaimed(Model model, Lattice lattice, ZMatrixRMaj hamiltonian, SymmetryClass claimed, double tolerance,
+      boolean withMatrix) {
     Map<Symmetry, SymmetryOperator> declared = new EnumMap<>(Symmetry.class);
     for (SymmetryOperator op : model.symmetryOperators().on(lattice)) {
       if (declared.put(op.symmetry(), op) != null) {
@@ -99,7 +110,7 @@ public final class SymmetryCheckOps {
       SymmetryOperator op = declared.get(s);
       if (op == null) {
         undeclared.add(s);
-      } else {
+      } else if (withMatrix) {
         checks.add(SymmetryCheckKernel.check(hamiltonian, lattice, op, tolerance, workspace));
       }
     }
