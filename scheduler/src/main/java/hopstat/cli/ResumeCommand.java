@@ -30,7 +30,7 @@ import picocli.CommandLine.ParentCommand;
  * out, cancelled, lost with their node) are resubmitted as a new job array plus a new report job;
  * {@code --local} runs the rest on this machine instead.
  */
-@Command(name = "resume", description = {
+@Command(mixinStandardHelpOptions = true, name = "resume", description = {
     "Continue a run from its journal: runs only what is not journaled yet, then writes the summary.",
     "For a run made by `submit`: resubmits only the incomplete shards to Slurm (a new array and report job); --local runs them here."})
 final class ResumeCommand implements Callable<Integer> {

@@ -34,7 +34,7 @@ import picocli.CommandLine.ParentCommand;
  * that it is failing on purpose and exits 1 before touching the journal. The cluster tests use it
  * to stand for a crashed shard; delete the file to let the shard run again.
  */
-@Command(name = "shard", hidden = true, description = "Run one shard of a cluster run (called by the job array script).")
+@Command(mixinStandardHelpOptions = true, name = "shard", hidden = true, description = "Run one shard of a cluster run (called by the job array script).")
 final class ShardCommand implements Callable<Integer> {
 
   @ParentCommand HopstatCommand root;

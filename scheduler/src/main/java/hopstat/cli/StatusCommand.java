@@ -33,7 +33,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 
 /** {@code hopstat status DIR}: progress and current estimates, readable while a run is going. */
-@Command(name = "status", description = "Show a run's progress per grid point, failures, current mean ± stderr and an ETA; for a cluster run also each shard's progress and Slurm job state.")
+@Command(mixinStandardHelpOptions = true, name = "status", description = "Show a run's progress per grid point, failures, current mean ± stderr and an ETA; for a cluster run also each shard's progress and Slurm job state.")
 final class StatusCommand implements Callable<Integer> {
 
   private static final Pattern SINCE = Pattern.compile("since (\\S+)");

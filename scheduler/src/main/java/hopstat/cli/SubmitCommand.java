@@ -31,7 +31,7 @@ import picocli.CommandLine.ParentCommand;
  * {@code hopstat submit SPEC --out DIR}: runs a study on a Slurm cluster as one job array of
  * shards plus a report job. The run directory must be on a file system the compute nodes share.
  */
-@Command(name = "submit", description = {
+@Command(mixinStandardHelpOptions = true, name = "submit", description = {
     "Run a job spec on a Slurm cluster: one job array of shards, then a report job that writes the summary.",
     "Validates the spec like `run`, creates the run directory, splits the grid points into shards (element k of the array runs shard k)",
     "and submits the report job with afterany, so it runs however the shards end. DIR must be on a file system shared with the",
