@@ -35,7 +35,7 @@ import picocli.CommandLine.ParentCommand;
  * chosen thread count. Timing other grid points at the same L is not done: cost is assumed to
  * depend on L and the observables only.
  */
-@Command(name = "bench", description = "Time each observable of a spec at each size, print seconds per realisation and memory per worker, and extrapolate the run's wall time.")
+@Command(mixinStandardHelpOptions = true, name = "bench", description = "Time each observable of a spec at each size, print seconds per realisation and memory per worker, and extrapolate the run's wall time.")
 final class BenchCommand implements Callable<Integer> {
 
   @ParentCommand HopstatCommand root;

@@ -26,7 +26,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 
 /** {@code hopstat check SPEC}: validates a spec and prints the plan, memory and an estimated wall time. */
-@Command(name = "check", description = "Validate a job spec and print the plan: grid, tasks, matrix sizes, memory per worker and estimated wall time.")
+@Command(mixinStandardHelpOptions = true, name = "check", description = "Validate a job spec and print the plan: grid, tasks, matrix sizes, memory per worker and estimated wall time.")
 final class CheckCommand implements Callable<Integer> {
 
   /** Realisations timed per linear size (after one untimed warm-up). */

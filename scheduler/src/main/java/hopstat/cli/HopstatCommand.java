@@ -1,5 +1,8 @@
 package hopstat.cli;
 
+import hopstat.cluster.ClusterException;
+import hopstat.cluster.CommandRunner;
+import hopstat.cluster.SystemCommandRunner;
 import hopstat.queue.JournalCorruptException;
 import hopstat.queue.RunDirectoryException;
 import hopstat.task.BuildInfo;
@@ -22,10 +25,11 @@ import picocli.CommandLine.Option;
     mixinStandardHelpOptions = true,
     versionProvider = HopstatCommand.Version.class,
     description = "Disorder-ensemble statistics of topological invariants, gaps and localisation.",
-    subcommands = {CheckCommand.class, BenchCommand.class, RunCommand.class, ResumeCommand.class, StatusCommand.class, ReportCommand.class, ModelsCommand.class, ServeCommand.class},
+    subcommands = {CheckCommand.class, BenchCommand.class, RunCommand.class, ResumeCommand.class, StatusCommand.class, ReportCommand.class, ModelsCommand.class,
+        SubmitCommand.class, ShardCommand.class, ServeCommand.class},
     exitCodeListHeading = "%nExit codes:%n",
     exitCodeList = {
-        "0:done", "1:runtime failure (I/O, directory in use, corrupt journal)", "2:bad input (spec or options)",
+        "0:done", "1:runtime failure (I/O, directory in use, corrupt journal, batch system refused)", "2:bad input (spec or options)",
         "3:finished, but some realisations FAILED", "4:stopped before complete (resume continues it)"})
 public final class HopstatCommand implements Runnable {
 
@@ -34,15 +38,18 @@ public final class HopstatCommand implements Runnable {
 
   final PrintStream out;
   final PrintStream err;
+  /** Runs the batch system's commands (sbatch, squeue, scontrol); tests pass a stand-in. */
+  final CommandRunner clusterCommands;
 
-  HopstatCommand(PrintStream out, PrintStream err) {
+  HopstatCommand(PrintStream out, PrintStream err, CommandRunner clusterCommands) {
     this.out = out;
     this.err = err;
+    this.clusterCommands = clusterCommands;
   }
 
   @Override
   public void run() {
-    throw new CommandLine.ParameterException(new CommandLine(this), "missing command: check, run, resume, status, report or models");
+    throw new CommandLine.ParameterException(new CommandLine(this), "missing command: check, run, submit, resume, status, report or models");
   }
 
   public static void main(String[] args) {
@@ -56,7 +63,16 @@ public final class HopstatCommand implements Runnable {
 
   /** Runs the command line with the given streams; returns the exit code. */
   public static int execute(String[] args, PrintStream out, PrintStream err) {
-    HopstatCommand root = new HopstatCommand(out, err);
+    return execute(args, out, err, new SystemCommandRunner());
+  }
+
+  /**
+   * Runs the command line with the given streams, running the batch system's commands through
+   * {@code clusterCommands} (for tests of the cluster commands without a cluster); returns the
+   * exit code.
+   */
+  public static int execute(String[] args, PrintStream out, PrintStream err, CommandRunner clusterCommands) {
+    HopstatCommand root = new HopstatCommand(out, err, clusterCommands);
     CommandLine cl = new CommandLine(root);
     cl.setOut(new PrintWriter(out, true, StandardCharsets.UTF_8));
     cl.setErr(new PrintWriter(err, true, StandardCharsets.UTF_8));
@@ -86,7 +102,7 @@ public final class HopstatCommand implements Runnable {
       for (InvalidInputException.Violation v : bad.violations()) {
         err.println("  " + v.describe());
       }
-    } else if (e instanceof RunDirectoryException || e instanceof JournalCorruptException) {
+    } else if (e instanceof RunDirectoryException || e instanceof JournalCorruptException || e instanceof ClusterException) {
       err.println("hopstat: " + e.getMessage());
     } else if (e instanceof IOException) {
       err.println("hopstat: I/O error: " + e);

@@ -17,7 +17,7 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.ParentCommand;
 
 /** {@code hopstat models}: the built-in models, their classes, parameters and applicable observables. */
-@Command(name = "models", description = "List the built-in models (class, dimension, parameters, observables) and disorder types.")
+@Command(mixinStandardHelpOptions = true, name = "models", description = "List the built-in models (class, dimension, parameters, observables) and disorder types.")
 final class ModelsCommand implements Callable<Integer> {
 
   @ParentCommand HopstatCommand root;

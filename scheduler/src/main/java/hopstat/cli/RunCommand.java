@@ -17,7 +17,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 
 /** {@code hopstat run SPEC --out DIR}: runs every realisation on the local worker pool. */
-@Command(name = "run", description = "Run a job spec on this machine's worker pool, journaling every realisation, then write the summary.")
+@Command(mixinStandardHelpOptions = true, name = "run", description = "Run a job spec on this machine's worker pool, journaling every realisation, then write the summary.")
 final class RunCommand implements Callable<Integer> {
 
   @ParentCommand HopstatCommand root;

@@ -1,5 +1,12 @@
 package hopstat.cli;
 
+import hopstat.cluster.ClusterRun;
+import hopstat.cluster.ClusterRunStore;
+import hopstat.cluster.ShardLock;
+import hopstat.cluster.ShardProgressOps;
+import hopstat.cluster.SlurmBackend;
+import hopstat.cluster.SlurmClient;
+import hopstat.cluster.SlurmJobState;
 import hopstat.expand.StudyPlan;
 import hopstat.queue.RunDirectory;
 import hopstat.statistics.PointSummary;
@@ -10,6 +17,7 @@ import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Clock;
 import java.time.Duration;
 import java.time.Instant;
 import java.util.ArrayList;
@@ -25,7 +33,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 
 /** {@code hopstat status DIR}: progress and current estimates, readable while a run is going. */
-@Command(name = "status", description = "Show a run's progress per grid point, failures, current mean ± stderr and an ETA.")
+@Command(mixinStandardHelpOptions = true, name = "status", description = "Show a run's progress per grid point, failures, current mean ± stderr and an ETA; for a cluster run also each shard's progress and Slurm job state.")
 final class StatusCommand implements Callable<Integer> {
 
   private static final Pattern SINCE = Pattern.compile("since (\\S+)");
@@ -36,17 +44,19 @@ final class StatusCommand implements Callable<Integer> {
   Path dirPath;
 
   @Override
-  public Integer call() throws IOException {
+  public Integer call() throws IOException, InterruptedException {
     RunDirectory dir = RunDirectory.open(dirPath);
     StudyPlan plan = RunSummaries.plan(dir);
     Summary s = RunSummaries.summarise(dir, plan);
     PrintStream out = root.out;
     long finished = s.done() + s.failed();
     long planned = plan.plannedTasks();
-    String owner = owner(dir.path());
+    ClusterRun cluster = ClusterRunStore.read(dir).orElse(null);
+    List<Integer> heldShards = cluster == null ? List.of() : ShardLock.held(dir.path(), cluster.shardCount());
+    String owner = heldShards.isEmpty() ? owner(dir.path()) : "cluster shard(s) " + heldShards + " are working on it";
     out.printf(Locale.ROOT, "run %s: %d of %s%d realisations journaled (%d failed); %s%n", s.name(), finished,
         plan.spec().adaptiveSampling().isPresent() ? "at most " : "", planned, s.failed(), owner == null ? "no process is working on it" : "in progress: " + owner);
-    if (owner != null) {
+    if (owner != null && heldShards.isEmpty()) {
       eta(dir, owner, planned - finished).ifPresent(out::println);
     }
     List<String> header = new ArrayList<>(s.gridNames());
@@ -71,6 +81,11 @@ final class StatusCommand implements Callable<Integer> {
       for (Map.Entry<String, Integer> e : p.failureReasons().entrySet()) {
         out.printf(Locale.ROOT, "    failed %dx: %s%n", e.getValue(), e.getKey());
       }
+    }
+    if (cluster != null) {
+      SlurmBackend backend = new SlurmBackend(new SlurmClient(root.clusterCommands), Clock.systemUTC());
+      List<SlurmJobState> states = ClusterView.states(backend, cluster, out);
+      ClusterView.print(out, cluster, ShardProgressOps.progress(plan, dir, cluster.shardCount()), states, heldShards);
     }
     return ExitCode.OK;
   }

@@ -31,7 +31,8 @@ public final class RunDirectory {
   public static final int FORMAT = 1;
 
   private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
-  private static final Pattern PART = Pattern.compile("(?:part|[a-z]+)-(\\d+)(?:-.*)?\\.jsonl");
+  /** The last group of digits in a journal file name: the session number of {@code prefix-NNNN.jsonl}, whatever the prefix holds. */
+  private static final Pattern PART = Pattern.compile("(?:.*\\D)?(\\d+)\\D*\\.jsonl");
 
   private final Path dir;
 

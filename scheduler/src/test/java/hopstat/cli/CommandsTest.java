@@ -43,6 +43,15 @@ class CommandsTest {
   }
 
   @Test
+  void everyCommandHasHelp() {
+    for (String command : new String[] {"check", "run", "resume", "status", "report", "models", "bench", "submit"}) {
+      Cli.Outcome o = Cli.run(command, "--help");
+      assertThat(o.exitCode()).as(command).isEqualTo(ExitCode.OK);
+      assertThat(o.out()).as(command).contains("Usage: hopstat " + command);
+    }
+  }
+
+  @Test
   void versionNamesTheBuild() {
     Cli.Outcome o = Cli.run("--version");
     assertThat(o.exitCode()).isEqualTo(ExitCode.OK);
