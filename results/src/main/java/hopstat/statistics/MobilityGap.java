@@ -16,10 +16,12 @@ import java.util.Map;
  * @param quantity the quantity
  * @param axis the energy axis
  * @param fixed the other grid axes' values, without L
- * @param criterion how the window is bounded: {@code size-crossing}, {@code midpoint},
+ * @param criterion how the window is bounded: {@code size-crossing} (Λ falls with M),
+ *     {@code crossing-value} (larger size's ⟨r⟩ at or below its value at the robust size
+ *     crossings), {@code midpoint} (⟨r⟩ at or below the Poisson–Wigner–Dyson midpoint),
  *     {@code quantised-fraction}
- * @param sizeLow smaller size compared (size-crossing), else the size used or NaN
- * @param sizeHigh larger size compared (size-crossing), else NaN
+ * @param sizeLow smaller size compared (two sizes), else the size used or NaN
+ * @param sizeHigh larger size compared (two sizes), else NaN
  * @param reference the reference energy (a fixed fermiEnergy inside the scan, else the scan centre)
  * @param lower lower end of the window
  * @param upper upper end of the window

@@ -28,7 +28,10 @@ public enum MobilityMethod {
    * Wigner–Dyson value of the study's effective class (extended). With two or more sizes the edge
    * is where the ⟨r⟩(E) curves of the two largest sizes cross (⟨r⟩ moves towards Poisson with size
    * where states are localised, towards Wigner–Dyson where they are extended); with one size it is
-   * where ⟨r⟩ passes the midpoint between the two reference values.
+   * where ⟨r⟩ passes the midpoint between the two reference values. The gap window from two sizes
+   * is where the larger size's ⟨r⟩ stays at or below its value at the robust crossings (not where
+   * the size difference is negative: deep in a localised or extended region both sizes sit at the
+   * same limit and the sign of their difference is noise).
    *
    * <p>Assumptions: windows are narrow enough that the density of states is nearly constant inside
    * and wide enough to hold many levels; symmetry sectors were resolved by the worker. Failure
@@ -38,7 +41,8 @@ public enum MobilityMethod {
    * realisations (use fixed windowMin/windowMax); the midpoint criterion is a convention whose
    * value at a true edge depends on size (the critical ⟨r⟩ lies between the two limits, not at
    * their midpoint); an unknown effective class leaves the Wigner–Dyson value, and so the midpoint
-   * criterion, undefined.
+   * criterion, undefined; where both sizes are saturated at one limit, noise produces spurious
+   * size crossings (reported, with low existence fractions).
    */
   LEVEL_RATIO,
   /**

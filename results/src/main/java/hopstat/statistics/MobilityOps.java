@@ -86,6 +86,13 @@ public final class MobilityOps {
 
   public static final String MIDPOINT = "midpoint";
   public static final String QUANTISED = "quantised-fraction";
+  public static final String CROSSING_VALUE = "crossing-value";
+  /**
+   * A size crossing of ⟨r⟩ fixes the critical value r_c only if it exists in at least this fraction
+   * of bootstrap replicas (our choice: a majority; spurious crossings from noise where both sizes
+   * are saturated at the same limit exist in far fewer).
+   */
+  public static final double ROBUST_EXISTENCE = 0.5;
 
   private static final Pattern PER_ENERGY = Pattern.compile("(.+)@E(\\d+)");
 
@@ -290,13 +297,78 @@ public final class MobilityOps {
         states[p.ib[j]] = i.high() < 0 ? "localised" : i.low() > 0 ? "extended" : "undecided";
       }
       out.curves.add(b.toCurve(method, quantity, axis, fixed, Double.NaN, states));
-      if (p.t.length >= 2) {
-        edges(method, quantity, axis, fixed, SIZE_CROSSING, a.size, b.size, Double.NaN, p.t, p.d, p.rd, out);
-      }
+      List<EdgeReplicas> found = p.t.length >= 2 ? edges(method, quantity, axis, fixed, SIZE_CROSSING, a.size, b.size, Double.NaN, p.t, p.d, p.rd, out)
+          : List.of();
       if (energyAxis && s == curves.size() - 1 && p.t.length >= 1) {
-        gap(method, quantity, axis, fixed, SIZE_CROSSING, a.size, b.size, cx.reference(cx.pointsOf(fixed), p.t), p.t, p.d, p.rd, out);
+        double reference = cx.reference(cx.pointsOf(fixed), p.t);
+        if (method == MobilityMethod.LEVEL_RATIO) {
+          crossingValueGap(quantity, axis, fixed, a, b, p, found, wignerDysonRatio(cx.layout.effectiveClass()), reference, out);
+        } else {
+          gap(method, quantity, axis, fixed, SIZE_CROSSING, a.size, b.size, reference, p.t, p.d, p.rd, out);
+        }
       }
     }
+  }
+
+  /**
+   * Level-ratio gap from two sizes: the window where the larger size's ⟨r⟩ stays at or below r_c,
+   * its value at the robust size crossings (existence fraction ≥ {@link #ROBUST_EXISTENCE};
+   * averaged over them, the two sizes' curves averaged at each crossing); without a robust crossing
+   * r_c is the Poisson–Wigner–Dyson midpoint. Why not the sign of ⟨r⟩_large − ⟨r⟩_small, as for Λ:
+   * deep in the localised (extended) region both sizes sit at the Poisson (Wigner–Dyson) value, the
+   * difference is pure noise and its sign flips at random; the position relative to r_c does not.
+   * Each replica recomputes r_c from its own matched crossings.
+   */
+  private static void crossingValueGap(String quantity, String axis, Map<String, Double> fixed, CurveData a, CurveData b, Paired p,
+      List<EdgeReplicas> found, double wignerDyson, double reference, Output out) {
+    int m = p.t.length;
+    int resamples = p.rd.length;
+    double[] average = new double[m];
+    double[] large = new double[m];
+    for (int j = 0; j < m; j++) {
+      average[j] = 0.5 * (a.mean[p.ia[j]] + b.mean[p.ib[j]]);
+      large[j] = b.mean[p.ib[j]];
+    }
+    double fallback = 0.5 * (POISSON_RATIO + wignerDyson);
+    double sum = 0;
+    int count = 0;
+    for (EdgeReplicas e : found) {
+      if (e.existsFraction() >= ROBUST_EXISTENCE) {
+        sum += interpolate(p.t, average, e.estimate());
+        count++;
+      }
+    }
+    double critical = count > 0 ? sum / count : fallback;
+    if (Double.isNaN(critical)) {
+      return;
+    }
+    double[] d = new double[m];
+    for (int j = 0; j < m; j++) {
+      d[j] = large[j] - critical;
+    }
+    double[][] rd = new double[resamples][m];
+    double[] replicaAverage = new double[m];
+    for (int r = 0; r < resamples; r++) {
+      for (int j = 0; j < m; j++) {
+        replicaAverage[j] = 0.5 * (a.replicas[r][p.ia[j]] + b.replicas[r][p.ib[j]]);
+      }
+      double rs = 0;
+      int rc = 0;
+      for (EdgeReplicas e : found) {
+        if (e.existsFraction() >= ROBUST_EXISTENCE && !Double.isNaN(e.positions()[r])) {
+          double v = interpolate(p.t, replicaAverage, e.positions()[r]);
+          if (!Double.isNaN(v)) {
+            rs += v;
+            rc++;
+          }
+        }
+      }
+      double replicaCritical = rc > 0 ? rs / rc : critical;
+      for (int j = 0; j < m; j++) {
+        rd[r][j] = b.replicas[r][p.ib[j]] - replicaCritical;
+      }
+    }
+    gap(MobilityMethod.LEVEL_RATIO, quantity, axis, fixed, count > 0 ? CROSSING_VALUE : MIDPOINT, a.size, b.size, reference, p.t, d, rd, out);
   }
 
   private static Interval percentileOfFinite(double[] x) {
@@ -310,22 +382,41 @@ public final class MobilityOps {
     return BootstrapOps.percentileInterval(kept, count);
   }
 
-  private static void edges(MobilityMethod method, String quantity, String axis, Map<String, Double> fixed, String criterion, double sizeLow,
-      double sizeHigh, double level, double[] t, double[] d, double[][] rd, Output out) {
+  /** Per replica, the position of one edge's matched crossing (NaN where it does not exist). */
+  private record EdgeReplicas(double estimate, double existsFraction, double[] positions) {}
+
+  private static List<EdgeReplicas> edges(MobilityMethod method, String quantity, String axis, Map<String, Double> fixed, String criterion,
+      double sizeLow, double sizeHigh, double level, double[] t, double[] d, double[][] rd, Output out) {
     double[] all = BoundaryOps.zeroCrossings(t, d);
+    List<EdgeReplicas> found = new ArrayList<>();
     for (double estimate : all) {
       double[] w = BoundaryOps.window(all, estimate);
       double[] replicas = new double[rd.length];
+      double[] positions = new double[rd.length];
       int exists = 0;
-      for (double[] row : rd) {
-        double c = BoundaryOps.nearestWithin(BoundaryOps.zeroCrossings(t, row), estimate, w[0], w[1]);
+      for (int r = 0; r < rd.length; r++) {
+        double c = BoundaryOps.nearestWithin(BoundaryOps.zeroCrossings(t, rd[r]), estimate, w[0], w[1]);
+        positions[r] = c;
         if (!Double.isNaN(c)) {
           replicas[exists++] = c;
         }
       }
+      double fraction = (double) exists / rd.length;
       out.edges.add(new MobilityEdge(method, quantity, axis, fixed, criterion, sizeLow, sizeHigh, level, estimate,
-          BootstrapOps.percentileInterval(replicas, exists), (double) exists / rd.length, rd.length));
+          BootstrapOps.percentileInterval(replicas, exists), fraction, rd.length));
+      found.add(new EdgeReplicas(estimate, fraction, positions));
     }
+    return found;
+  }
+
+  /** Linear interpolation of (t, y) at x inside [t_0, t_last]; NaN outside or where y is NaN. */
+  static double interpolate(double[] t, double[] y, double x) {
+    for (int j = 0; j + 1 < t.length; j++) {
+      if (x >= t[j] && x <= t[j + 1]) {
+        return t[j + 1] == t[j] ? y[j] : y[j] + (y[j + 1] - y[j]) * (x - t[j]) / (t[j + 1] - t[j]);
+      }
+    }
+    return t.length == 1 && x == t[0] ? y[0] : Double.NaN;
   }
 
   private static void gap(MobilityMethod method, String quantity, String axis, Map<String, Double> fixed, String criterion, double sizeLow,
