@@ -33,11 +33,11 @@ class MobilityCoverageTest {
     return i.low() <= truth && truth <= i.high();
   }
 
-  private static double rate(LongFunction<SyntheticStudy> studies, java.util.function.BiPredicate<MobilitySummary, Integer> check, int which) {
+  private static double rate(LongFunction<SyntheticStudy> studies, java.util.function.Predicate<MobilitySummary> check) {
     int hits = 0;
     for (int s = 0; s < STUDIES; s++) {
       SyntheticStudy study = studies.apply(100 + s);
-      if (check.test(MobilityOps.estimate(study.layout(), study.records()), which)) {
+      if (check.test(MobilityOps.estimate(study.layout(), study.records()))) {
         hits++;
       }
     }
@@ -83,7 +83,7 @@ class MobilityCoverageTest {
 
   @Test
   void invariantPlateauIntervalsCoverTheTruth() {
-    double rate = rate(s -> MobilityStudies.plateau(s, 60), (m, w) -> covers(m.gaps().get(0).interval(), MobilityStudies.PLATEAU_EDGE), 0);
+    double rate = rate(s -> MobilityStudies.plateau(s, 60), m -> covers(m.gaps().get(0).interval(), MobilityStudies.PLATEAU_EDGE));
     assertThat(rate).isGreaterThanOrEqualTo(LOW);
   }
 }
