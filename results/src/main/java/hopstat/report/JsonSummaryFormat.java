@@ -9,6 +9,14 @@ import hopstat.statistics.Quantiles;
 import hopstat.statistics.TypicalValue;
 import hopstat.statistics.ValueProbability;
 import hopstat.statistics.MeanEstimate;
+import hopstat.statistics.Interval;
+import hopstat.statistics.MobilityAgreement;
+import hopstat.statistics.MobilityCurve;
+import hopstat.statistics.MobilityEdge;
+import hopstat.statistics.MobilityGap;
+import hopstat.statistics.MobilityMethod;
+import hopstat.statistics.MobilityOps;
+import hopstat.statistics.MobilitySummary;
 import hopstat.statistics.PointSummary;
 import hopstat.statistics.QuantitySummary;
 import hopstat.statistics.SampleStatisticsOps;
@@ -23,7 +31,9 @@ import java.util.Map;
  * modal fraction and the largest distance of any sample from its nearest integer. States the
  * estimator, error measure and confidence level. Later additions (appended after the original
  * fields): quantiles, bootstrap interval of the mean, typical value, P(value) with Wilson intervals
- * per integer value, and the phase-boundary estimates with their bootstrap intervals. Contains
+ * per integer value, the phase-boundary estimates with their bootstrap intervals, and the
+ * {@code mobility} section (mobility edges and gaps by three estimators, see {@link MobilityOps};
+ * always present, with empty lists when the study measured nothing they use). Contains
  * nothing that depends on when, where or
  * with how many threads the run happened, so equal journals give byte-identical files.
  */
@@ -98,6 +108,7 @@ final class JsonSummaryFormat implements ReportFormat {
       writeBoundary(g, b);
     }
     g.writeEndArray();
+    writeMobility(g, s.mobility());
     g.writeEndObject();
     g.flush();
     out.write('\n');
@@ -179,6 +190,125 @@ final class JsonSummaryFormat implements ReportFormat {
     g.writeNumberField("resamples", b.resamples());
     g.writeNumberField("nearestPoint", b.nearestPoint());
     g.writeEndObject();
+  }
+
+  private static void writeMobility(JsonGenerator g, MobilitySummary m) throws IOException {
+    g.writeObjectFieldStart("mobility");
+    g.writeObjectFieldStart("conventions");
+    g.writeStringField("effectiveClass", m.effectiveClass() == null ? "" : m.effectiveClass().name());
+    g.writeStringField("wignerDysonEnsemble", m.wignerDysonEnsemble());
+    number(g, "wignerDysonRatio", m.wignerDysonRatio());
+    number(g, "poissonRatio", MobilityOps.POISSON_RATIO);
+    number(g, "quantisedFraction", MobilityOps.QUANTISED_FRACTION);
+    number(g, "quantisationTolerance", SampleStatisticsOps.QUANTISATION_TOLERANCE);
+    number(g, "minWindowPresence", MobilityOps.MIN_WINDOW_PRESENCE);
+    g.writeStringField("reference", "fixed fermiEnergy when common to the curve and inside the scan, else the centre of the scan");
+    g.writeStringField("halfWidth", "(upper - lower)/2 of the window around the reference classed localised (quantised); 0 when the reference is not inside one");
+    g.writeStringField("agreement", "all pairs of 95 % intervals of the half-width overlap");
+    g.writeStringField("excludes", "finite-size drift of crossings and the resolution of the energy grid; only disorder-sampling error is included");
+    g.writeEndObject();
+    g.writeArrayFieldStart("gaps");
+    for (MobilityGap x : m.gaps()) {
+      g.writeStartObject();
+      g.writeStringField("method", x.method().name());
+      g.writeStringField("quantity", x.quantity());
+      g.writeStringField("axis", x.axis());
+      fixed(g, x.fixed());
+      g.writeStringField("criterion", x.criterion());
+      number(g, "sizeLow", x.sizeLow());
+      number(g, "sizeHigh", x.sizeHigh());
+      number(g, "reference", x.reference());
+      number(g, "lower", x.lower());
+      number(g, "upper", x.upper());
+      g.writeBooleanField("lowerOpen", x.lowerOpen());
+      g.writeBooleanField("upperOpen", x.upperOpen());
+      number(g, "halfWidth", x.halfWidth());
+      interval(g, "halfWidthCi95", x.interval());
+      interval(g, "lowerCi95", x.lowerInterval());
+      interval(g, "upperCi95", x.upperInterval());
+      number(g, "insideFraction", x.insideFraction());
+      g.writeNumberField("resamples", x.resamples());
+      g.writeEndObject();
+    }
+    g.writeEndArray();
+    g.writeArrayFieldStart("agreements");
+    for (MobilityAgreement a : m.agreements()) {
+      g.writeStartObject();
+      fixed(g, a.fixed());
+      g.writeArrayFieldStart("estimates");
+      for (String e : a.estimates()) {
+        g.writeString(e);
+      }
+      g.writeEndArray();
+      g.writeStringField("verdict", a.verdict());
+      g.writeEndObject();
+    }
+    g.writeEndArray();
+    g.writeArrayFieldStart("edges");
+    for (MobilityEdge e : m.edges()) {
+      g.writeStartObject();
+      g.writeStringField("method", e.method().name());
+      g.writeStringField("quantity", e.quantity());
+      g.writeStringField("axis", e.axis());
+      fixed(g, e.fixed());
+      g.writeStringField("criterion", e.criterion());
+      number(g, "sizeLow", e.sizeLow());
+      number(g, "sizeHigh", e.sizeHigh());
+      number(g, "level", e.level());
+      number(g, "estimate", e.estimate());
+      interval(g, "ci95", e.interval());
+      number(g, "existsFraction", e.existsFraction());
+      g.writeNumberField("resamples", e.resamples());
+      g.writeEndObject();
+    }
+    g.writeEndArray();
+    g.writeArrayFieldStart("curves");
+    for (MobilityCurve c : m.curves()) {
+      g.writeStartObject();
+      g.writeStringField("method", c.method().name());
+      g.writeStringField("quantity", c.quantity());
+      g.writeStringField("axis", c.axis());
+      fixed(g, c.fixed());
+      number(g, "size", c.size());
+      if (c.method() == MobilityMethod.INVARIANT_PLATEAU) {
+        number(g, "plateauValue", c.plateauValue());
+      }
+      g.writeArrayFieldStart("points");
+      for (MobilityCurve.Point p : c.points()) {
+        g.writeStartObject();
+        number(g, "position", p.position());
+        g.writeNumberField("n", p.n());
+        number(g, "mean", p.mean());
+        interval(g, "ci95", p.interval());
+        g.writeStringField("interval", p.interval().method());
+        g.writeStringField("state", p.state());
+        g.writeEndObject();
+      }
+      g.writeEndArray();
+      g.writeEndObject();
+    }
+    g.writeEndArray();
+    g.writeEndObject();
+  }
+
+  private static void fixed(JsonGenerator g, Map<String, Double> fixed) throws IOException {
+    g.writeObjectFieldStart("fixed");
+    for (Map.Entry<String, Double> e : fixed.entrySet()) {
+      number(g, e.getKey(), e.getValue());
+    }
+    g.writeEndObject();
+  }
+
+  private static void interval(JsonGenerator g, String field, Interval i) throws IOException {
+    g.writeArrayFieldStart(field);
+    for (double x : new double[] {i.low(), i.high()}) {
+      if (Double.isFinite(x)) {
+        g.writeNumber(x);
+      } else {
+        g.writeNull();
+      }
+    }
+    g.writeEndArray();
   }
 
   /** JSON has no NaN: undefined numbers are written as null. */

@@ -12,7 +12,8 @@ import java.nio.file.StandardCopyOption;
 public enum ReportFormats {
   CSV(new CsvSummaryFormat()),
   JSON(new JsonSummaryFormat()),
-  BOUNDARIES_CSV(new BoundaryCsvFormat());
+  BOUNDARIES_CSV(new BoundaryCsvFormat()),
+  MOBILITY_CSV(new MobilityCsvFormat());
 
   private final ReportFormat format;
 

@@ -227,7 +227,7 @@ public final class BoundaryOps {
     return nearestWithin(candidates, target, Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY);
   }
 
-  private static double nearestWithin(double[] candidates, double target, double low, double high) {
+  static double nearestWithin(double[] candidates, double target, double low, double high) {
     double best = Double.NaN;
     for (double c : candidates) {
       if (c >= low && c <= high && (Double.isNaN(best) || Math.abs(c - target) < Math.abs(best - target))) {
@@ -243,7 +243,7 @@ public final class BoundaryOps {
    * crossing counts as a replica of crossing k only inside this window, so when the original curve
    * crosses several times each crossing gets its own interval and existence fraction.
    */
-  private static double[] window(double[] all, double estimate) {
+  static double[] window(double[] all, double estimate) {
     double low = Double.NEGATIVE_INFINITY;
     double high = Double.POSITIVE_INFINITY;
     for (double c : all) {

@@ -13,14 +13,17 @@ import java.util.List;
  * @param integerQuantities the integer-valued ones among them
  * @param points per-point statistics in index order
  * @param boundaries phase-boundary estimates along grid cuts ({@link BoundaryOps})
+ * @param mobility mobility edges and gaps ({@link MobilityOps})
  */
-public record Summary(String name, String specHash, List<String> gridNames, int plannedPerPoint, List<String> quantityNames, List<String> integerQuantities, List<PointSummary> points, List<BoundaryEstimate> boundaries) {
+public record Summary(String name, String specHash, List<String> gridNames, int plannedPerPoint, List<String> quantityNames, List<String> integerQuantities, List<PointSummary> points, List<BoundaryEstimate> boundaries,
+    MobilitySummary mobility) {
   public Summary {
     gridNames = List.copyOf(gridNames);
     quantityNames = List.copyOf(quantityNames);
     integerQuantities = List.copyOf(integerQuantities);
     points = List.copyOf(points);
     boundaries = List.copyOf(boundaries);
+    java.util.Objects.requireNonNull(mobility, "mobility");
   }
 
   /** Total DONE realisations. */

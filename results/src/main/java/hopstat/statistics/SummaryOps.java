@@ -53,7 +53,7 @@ public final class SummaryOps {
     }
     return new Summary(layout.name(), layout.specHash(), layout.gridNames(), layout.plannedPerPoint(),
         layout.quantities().stream().map(Quantity::name).toList(), integerQuantities, points,
-        BoundaryOps.estimate(layout, records));
+        BoundaryOps.estimate(layout, records), MobilityOps.estimate(layout, records));
   }
 
   private static PointSummary summarisePoint(String specHash, StudyLayout.Point point, List<RealisationResult> results, List<Quantity> quantities) {

@@ -1,5 +1,6 @@
 package hopstat.record;
 
+import hopstat.model.SymmetryClass;
 import hopstat.task.Outcome;
 import hopstat.task.Quantity;
 import hopstat.task.RealisationResult;
@@ -52,6 +53,7 @@ public final class SyntheticStudy {
     private BiFunction<Map<String, Double>, RandomGenerator, Map<String, Double>> values;
     private BiFunction<Integer, Integer, String> failure = (p, r) -> null;
     private String linalg = "java";
+    private SymmetryClass effectiveClass;
 
     private Builder(String specHash) {
       this.specHash = specHash;
@@ -79,6 +81,12 @@ public final class SyntheticStudy {
 
     public Builder seed(long seed) {
       this.seed = seed;
+      return this;
+    }
+
+    /** The effective symmetry class written into the layout (default: unknown). */
+    public Builder effectiveClass(SymmetryClass c) {
+      this.effectiveClass = c;
       return this;
     }
 
@@ -126,7 +134,7 @@ public final class SyntheticStudy {
           records.add(new RealisationRecord(result, coords.get(p), coords.get(p), "0.0-test (abc1234)", linalg));
         }
       }
-      StudyLayout layout = new StudyLayout("synthetic", specHash, new ArrayList<>(axes.keySet()), points, quantities, realisations);
+      StudyLayout layout = new StudyLayout("synthetic", specHash, new ArrayList<>(axes.keySet()), points, quantities, realisations, effectiveClass);
       return new SyntheticStudy(layout, records);
     }
   }

@@ -4,6 +4,12 @@ import hopstat.report.StudyReport;
 import hopstat.record.RealisationRecord;
 import hopstat.statistics.BoundaryEstimate;
 import hopstat.statistics.BoundaryKind;
+import hopstat.statistics.MobilityCurve;
+import hopstat.statistics.MobilityEdge;
+import hopstat.statistics.MobilityGap;
+import hopstat.statistics.MobilityMethod;
+import hopstat.statistics.MobilityOps;
+import hopstat.statistics.MobilitySummary;
 import hopstat.statistics.PointSummary;
 import hopstat.statistics.QuantitySummary;
 import hopstat.task.Outcome;
@@ -30,6 +36,8 @@ import org.jfree.chart.ChartFactory;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.DatasetRenderingOrder;
+import org.jfree.chart.plot.IntervalMarker;
+import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.PlotOrientation;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYBarRenderer;
@@ -60,6 +68,8 @@ public final class FigureOps {
   public static final int HEIGHT = 480;
   /** At most this many curves per line plot (one per L or per combination of the other axes). */
   public static final int MAX_SERIES = 8;
+  /** At most this many mobility figures (one per estimator, quantity, axis and other-axis values). */
+  public static final int MAX_MOBILITY_FIGURES = 8;
   /** Histograms are drawn at most at this many grid points (those nearest the boundaries). */
   public static final int MAX_HISTOGRAM_POINTS = 4;
 
@@ -70,7 +80,9 @@ public final class FigureOps {
   /**
    * All figures, in order: per quantity and per grid axis with at least three values, the mean
    * against that axis; for two-axis grids, heat maps of each mean and of P(modal value) with the
-   * boundary estimates overlaid; histograms at the points nearest the boundary estimates.
+   * boundary estimates overlaid; histograms at the points nearest the boundary estimates; then the
+   * mobility curves (one figure per estimator, quantity, axis and other-axis values, at most
+   * {@link #MAX_MOBILITY_FIGURES}) with the edges and gap windows overlaid.
    */
   public static List<Figure> figures(StudyReport report) {
     List<Figure> figures = new ArrayList<>();
@@ -98,7 +110,93 @@ public final class FigureOps {
         }
       }
     }
+    figures.addAll(mobilityFigures(report));
     return figures;
+  }
+
+  /** One figure per group of mobility curves sharing method, quantity, axis and other-axis values. */
+  static List<Figure> mobilityFigures(StudyReport r) {
+    MobilitySummary m = r.summary().mobility();
+    Map<List<Object>, List<MobilityCurve>> groups = new LinkedHashMap<>();
+    for (MobilityCurve c : m.curves()) {
+      groups.computeIfAbsent(List.of(c.method(), c.quantity(), c.axis(), c.fixed()), k -> new ArrayList<>()).add(c);
+    }
+    List<Figure> out = new ArrayList<>();
+    int index = 0;
+    for (List<MobilityCurve> curves : groups.values()) {
+      if (out.size() >= MAX_MOBILITY_FIGURES) {
+        break;
+      }
+      out.add(mobilityFigure(r, curves, index++));
+    }
+    return out;
+  }
+
+  private static Figure mobilityFigure(StudyReport r, List<MobilityCurve> curves, int index) {
+    MobilityCurve first = curves.get(0);
+    YIntervalSeriesCollection data = new YIntervalSeriesCollection();
+    for (MobilityCurve c : curves) {
+      YIntervalSeries s = new YIntervalSeries(Double.isNaN(c.size()) ? "one size" : "L = " + format(c.size()));
+      for (MobilityCurve.Point p : c.points()) {
+        double low = Double.isNaN(p.interval().low()) ? p.mean() : p.interval().low();
+        double high = Double.isNaN(p.interval().high()) ? p.mean() : p.interval().high();
+        s.add(p.position(), p.mean(), low, high);
+      }
+      data.addSeries(s);
+    }
+    XYErrorRenderer renderer = new XYErrorRenderer();
+    renderer.setDrawXError(false);
+    renderer.setDefaultLinesVisible(true);
+    renderer.setDefaultShapesVisible(true);
+    renderer.setCapLength(6);
+    String xLabel = first.axis().equals(MobilityOps.LEVEL_RATIO_AXIS) ? "window centre E (units of t)" : r.axisLabel(first.axis());
+    NumberAxis x = new NumberAxis(xLabel);
+    x.setAutoRangeIncludesZero(false);
+    String yLabel = switch (first.method()) {
+      case TRANSFER_MATRIX -> "Λ = 1/(γM)";
+      case LEVEL_RATIO -> "⟨r⟩";
+      case INVARIANT_PLATEAU -> "fraction quantised at " + format(first.plateauValue());
+    };
+    NumberAxis y = new NumberAxis(yLabel);
+    y.setAutoRangeIncludesZero(false);
+    XYPlot plot = new XYPlot(data, x, y, renderer);
+    MobilitySummary m = r.summary().mobility();
+    for (MobilityGap g : m.gaps()) {
+      if (g.method() == first.method() && g.quantity().equals(first.quantity()) && g.axis().equals(first.axis()) && g.fixed().equals(first.fixed())
+          && !Double.isNaN(g.lower())) {
+        IntervalMarker band = new IntervalMarker(g.lower(), g.upper(), new Color(120, 170, 230, 50));
+        plot.addDomainMarker(band);
+      }
+    }
+    for (MobilityEdge e : m.edges()) {
+      if (e.method() == first.method() && e.quantity().equals(first.quantity()) && e.axis().equals(first.axis()) && e.fixed().equals(first.fixed())) {
+        ValueMarker v = new ValueMarker(e.estimate(), new Color(200, 60, 60), new BasicStroke(1.5f));
+        plot.addDomainMarker(v);
+        if (!Double.isNaN(e.interval().low())) {
+          plot.addDomainMarker(new IntervalMarker(e.interval().low(), e.interval().high(), new Color(200, 60, 60, 40)));
+        }
+      }
+    }
+    if (first.method() == MobilityMethod.LEVEL_RATIO) {
+      plot.addRangeMarker(new ValueMarker(MobilityOps.POISSON_RATIO, Color.GRAY, new BasicStroke(1f)));
+      if (!Double.isNaN(m.wignerDysonRatio())) {
+        plot.addRangeMarker(new ValueMarker(m.wignerDysonRatio(), Color.GRAY, new BasicStroke(1f)));
+      }
+    } else if (first.method() == MobilityMethod.INVARIANT_PLATEAU) {
+      plot.addRangeMarker(new ValueMarker(MobilityOps.QUANTISED_FRACTION, Color.GRAY, new BasicStroke(1f)));
+    }
+    String at = first.fixed().isEmpty() ? "" : " at " + first.fixed().toString().replaceAll("[{}]", "");
+    JFreeChart chart = new JFreeChart(first.method().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ') + ": " + first.quantity() + at,
+        JFreeChart.DEFAULT_TITLE_FONT, plot, true);
+    style(chart);
+    String bars = first.method() == MobilityMethod.INVARIANT_PLATEAU ? "95 % Wilson interval of the fraction"
+        : "95 % percentile-bootstrap interval of the mean";
+    String caption = "Mobility estimator " + first.method().name() + " (" + first.quantity() + ") against " + xLabel + ", one curve per size. Error bars: "
+        + bars + " (disorder-sampling error only). Red lines: edges (crossings) with shaded bootstrap intervals; blue band: the window around the "
+        + "reference energy classed localised (quantised)" + (first.method() == MobilityMethod.LEVEL_RATIO ? "; grey lines: Poisson and Wigner-Dyson ⟨r⟩"
+        : first.method() == MobilityMethod.INVARIANT_PLATEAU ? "; grey line: the quantised-fraction threshold " + MobilityOps.QUANTISED_FRACTION : "") + ".";
+    return new Figure("mobility-" + index + "-" + first.method().name().toLowerCase(java.util.Locale.ROOT) + "-" + first.quantity().replaceAll("[^A-Za-z0-9_.-]", "_"),
+        caption, chart);
   }
 
   /** PNG bytes of a figure. */

@@ -6,6 +6,11 @@ import hopstat.statistics.BootstrapOps;
 import hopstat.statistics.BoundaryEstimate;
 import hopstat.statistics.BoundaryKind;
 import hopstat.statistics.IntegerDistribution;
+import hopstat.statistics.MobilityAgreement;
+import hopstat.statistics.MobilityEdge;
+import hopstat.statistics.MobilityGap;
+import hopstat.statistics.MobilityOps;
+import hopstat.statistics.MobilitySummary;
 import hopstat.statistics.PointSummary;
 import hopstat.statistics.QuantitySummary;
 import hopstat.statistics.SampleStatisticsOps;
@@ -58,6 +63,7 @@ public final class HtmlReportWriter {
     provenance(h, report);
     caveats(h);
     boundaries(h, report);
+    mobility(h, report);
     h.append("<h2>Figures</h2>\n");
     if (figures.isEmpty()) {
       h.append("<p>No figures: the grid has no axis with three or more values and no boundary.</p>\n");
@@ -149,6 +155,56 @@ public final class HtmlReportWriter {
           .append("]</td><td>").append(num(b.existsFraction())).append("</td><td>").append(b.nearestPoint()).append("</td></tr>\n");
     }
     h.append("</table>\n");
+  }
+
+  private static void mobility(StringBuilder h, StudyReport report) {
+    MobilitySummary m = report.summary().mobility();
+    if (m.isEmpty()) {
+      return;
+    }
+    h.append("<h2 id=\"mobility\">Mobility edges and mobility gap</h2>\n");
+    h.append("<p>Level-statistics references: Poisson ⟨r⟩ = 2 ln 2 − 1 = ").append(num(MobilityOps.POISSON_RATIO)).append("; Wigner–Dyson ")
+        .append(m.wignerDysonEnsemble().isEmpty() ? "unknown (effective class not known)" : esc(m.wignerDysonEnsemble()) + " ⟨r⟩ = " + num(m.wignerDysonRatio())
+            + " (effective class " + m.effectiveClass() + ")")
+        .append(". Invariant quantised where the fraction within ").append(num(SampleStatisticsOps.QUANTISATION_TOLERANCE))
+        .append(" of the plateau integer is ≥ ").append(num(MobilityOps.QUANTISED_FRACTION)).append(" (our threshold). The mobility gap is the half-width of the window ")
+        .append("around the reference energy classed localised (quantised); 0 when the reference is not inside one. Intervals: ").append(esc(BootstrapOps.METHOD))
+        .append(". An open side means the window reached the end of the scan, so the half-width is a lower bound.</p>\n");
+    h.append("<table>\n<tr><th class=\"l\">estimator</th><th class=\"l\">quantity</th><th class=\"l\">at</th><th class=\"l\">criterion</th><th>sizes</th>")
+        .append("<th>reference</th><th>window</th><th>half-width</th><th>95 % interval</th><th>reference inside</th></tr>\n");
+    for (MobilityGap g : m.gaps()) {
+      String sizes = Double.isNaN(g.sizeHigh()) ? num(g.sizeLow()) : num(g.sizeLow()) + " / " + num(g.sizeHigh());
+      String window = Double.isNaN(g.lower()) ? "none" : (g.lowerOpen() ? "≤ " : "") + num(g.lower()) + " … " + (g.upperOpen() ? "≥ " : "") + num(g.upper());
+      h.append("<tr><td class=\"l\">").append(esc(g.method().name())).append("</td><td class=\"l\">").append(esc(g.quantity())).append("</td><td class=\"l\">")
+          .append(esc(fixedText(g.fixed()))).append("</td><td class=\"l\">").append(esc(g.criterion())).append("</td><td>").append(esc(sizes)).append("</td><td>")
+          .append(num(g.reference())).append("</td><td>").append(esc(window)).append("</td><td>").append(num(g.halfWidth())).append("</td><td>")
+          .append(interval(g.interval().low(), g.interval().high())).append("</td><td>").append(num(g.insideFraction())).append("</td></tr>\n");
+    }
+    h.append("</table>\n");
+    if (!m.agreements().isEmpty()) {
+      h.append("<p>Agreement between estimators (all pairs of 95 % intervals of the half-width overlap; a lenient test):</p>\n<ul>\n");
+      for (MobilityAgreement a : m.agreements()) {
+        h.append("<li>").append(esc(fixedText(a.fixed()))).append(": ").append(esc(String.join(", ", a.estimates()))).append(" → <b>").append(esc(a.verdict()))
+            .append("</b></li>\n");
+      }
+      h.append("</ul>\n");
+    }
+    if (!m.edges().isEmpty()) {
+      h.append("<table>\n<tr><th class=\"l\">estimator</th><th class=\"l\">quantity</th><th class=\"l\">along</th><th class=\"l\">at</th>")
+          .append("<th class=\"l\">criterion</th><th>sizes / level</th><th>edge</th><th>95 % interval</th><th>exists</th></tr>\n");
+      for (MobilityEdge e : m.edges()) {
+        String detail = Double.isNaN(e.sizeHigh()) ? "⟨r⟩ = " + num(e.level()) : "L = " + num(e.sizeLow()) + " / " + num(e.sizeHigh());
+        h.append("<tr><td class=\"l\">").append(esc(e.method().name())).append("</td><td class=\"l\">").append(esc(e.quantity())).append("</td><td class=\"l\">")
+            .append(esc(e.axis())).append("</td><td class=\"l\">").append(esc(fixedText(e.fixed()))).append("</td><td class=\"l\">").append(esc(e.criterion()))
+            .append("</td><td>").append(esc(detail)).append("</td><td>").append(num(e.estimate())).append("</td><td>")
+            .append(interval(e.interval().low(), e.interval().high())).append("</td><td>").append(num(e.existsFraction())).append("</td></tr>\n");
+      }
+      h.append("</table>\n");
+    }
+    h.append("<p>Assumptions and failure modes: transfer-matrix crossings drift with the widths (corrections to scaling) and Λ(M) may be non-monotonic ")
+        .append("(such points show as undecided); level-ratio windows with few levels are noisy and are dropped when present in fewer than ")
+        .append(num(MobilityOps.MIN_WINDOW_PRESENCE)).append(" of the realisations, and the one-size midpoint criterion is a convention; the quantisation threshold ")
+        .append("is arbitrary and the invariant window is a finite-size estimate limited by the energy spacing of the scan. Intervals exclude all of these.</p>\n");
   }
 
   private static void statisticsTable(StringBuilder h, StudyReport report) {
