@@ -1,5 +1,7 @@
 package hopstat.cli;
 
+import hopstat.expand.MemoryCheck;
+
 import hopstat.expand.GridExpander;
 import hopstat.expand.PlanValidation;
 import hopstat.expand.GridPoint;

@@ -1,5 +1,7 @@
 package hopstat.cli;
 
+import hopstat.expand.MemoryCheck;
+
 import hopstat.expand.StudyPlan;
 import hopstat.linalg.LinalgKind;
 import hopstat.pool.LocalPoolBackend;

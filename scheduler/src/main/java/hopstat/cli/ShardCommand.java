@@ -1,5 +1,7 @@
 package hopstat.cli;
 
+import hopstat.expand.MemoryCheck;
+
 import hopstat.cluster.ShardLock;
 import hopstat.expand.StudyPlan;
 import hopstat.pool.LocalPoolBackend;

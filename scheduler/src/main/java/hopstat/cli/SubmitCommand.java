@@ -1,5 +1,7 @@
 package hopstat.cli;
 
+import hopstat.expand.MemoryCheck;
+
 import hopstat.cluster.BatchScriptOps;
 import hopstat.cluster.ClusterRun;
 import hopstat.cluster.ClusterRunStore;

@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import hopstat.expand.GridExpander;
+import hopstat.expand.MemoryCheck;
 import hopstat.expand.PlanValidation;
 import hopstat.expand.StudyPlan;
 import hopstat.linalg.LinalgFactory;
@@ -160,13 +161,15 @@ public final class BatchService implements AutoCloseable {
   }
 
   /**
-   * Validates spec text exactly as {@code hopstat run} does: parse, expand, check the plan.
+   * Validates spec text exactly as {@code hopstat run} does: parse, expand, check memory for
+   * {@code threads} workers and the plan.
    *
    * @throws InvalidInputException with every problem and its field path
    */
-  public static StudyPlan validate(String specText) {
+  public static StudyPlan validate(String specText, int threads) {
     JobSpec parsed = SpecParser.parse(specText);
     StudyPlan plan = GridExpander.expand(parsed);
+    MemoryCheck.require(plan, threads);
     PlanValidation.validate(plan);
     return plan;
   }
@@ -182,7 +185,7 @@ public final class BatchService implements AutoCloseable {
     if (Math.abs(priority) > MAX_PRIORITY) {
       throw new InvalidInputException("priority", priority, "must be from -" + MAX_PRIORITY + " to " + MAX_PRIORITY);
     }
-    StudyPlan plan = validate(specText);
+    StudyPlan plan = validate(specText, spec.threads());
     synchronized (monitor) {
       if (closing) {
         throw new IllegalStateException("the service is stopping");

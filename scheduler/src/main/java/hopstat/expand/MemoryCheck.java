@@ -1,22 +1,20 @@
-package hopstat.cli;
+package hopstat.expand;
 
-import hopstat.expand.GridPoint;
-import hopstat.expand.StudyPlan;
 import hopstat.task.InvalidInputException;
 import hopstat.task.RealisationCost;
 import java.lang.management.ManagementFactory;
 import java.util.Locale;
 
 /** Refuses, before anything runs, a study whose realisations cannot fit in memory with the threads asked for. */
-final class MemoryCheck {
+public final class MemoryCheck {
 
   /** Heap kept free for the JVM, the journal and the task list. */
-  static final long HEAP_RESERVE_BYTES = 256L << 20;
+  public static final long HEAP_RESERVE_BYTES = 256L << 20;
 
   private MemoryCheck() {}
 
   /** The largest per-realisation cost over the grid. */
-  static RealisationCost largest(StudyPlan plan) {
+  public static RealisationCost largest(StudyPlan plan) {
     RealisationCost worst = null;
     for (GridPoint p : plan.points()) {
       RealisationCost c = RealisationCost.of(p.point());
@@ -31,7 +29,7 @@ final class MemoryCheck {
    * @throws InvalidInputException (field {@code --threads}) when threads × the largest realisation
    *     does not fit in the JVM's maximum heap or the machine's physical memory
    */
-  static void require(StudyPlan plan, int threads) {
+  public static void require(StudyPlan plan, int threads) {
     RealisationCost c = largest(plan);
     long heapMax = Runtime.getRuntime().maxMemory();
     long physical = physicalMemory();
@@ -48,14 +46,14 @@ final class MemoryCheck {
     }
   }
 
-  static long physicalMemory() {
+  public static long physicalMemory() {
     if (ManagementFactory.getOperatingSystemMXBean() instanceof com.sun.management.OperatingSystemMXBean os) {
       return os.getTotalMemorySize();
     }
     return -1;
   }
 
-  static String bytes(long b) {
+  public static String bytes(long b) {
     if (b >= 1L << 30) {
       return String.format(Locale.ROOT, "%.2f GiB", b / (double) (1L << 30));
     }
