@@ -139,6 +139,11 @@ public final class CsrHermitianMatrix {
     return rowStart[dimension];
   }
 
+  /** Bytes held by the storage arrays (capacity, for memory reports). */
+  public long storageBytes() {
+    return 4L * (rowStart.length + fill.length + columns.length) + 8L * (re.length + im.length);
+  }
+
   /** Index of the first stored entry of row i (0-based); row i holds entries rowStart(i) .. rowStart(i + 1) − 1. */
   public int rowStart(int i) {
     return rowStart[i];

@@ -125,9 +125,10 @@ class KpmKernelTest {
 
   /**
    * Clean chain H = −t Σ (c†_i c_{i+1} + h.c.), E(k) = −2t cos k: ρ(E) = 1/(π√(4t² − E²)) per site
-   * (derived, van Hove). KPM bias from the Jackson broadening σ ≈ πa/M = 0.025 (Weiße et al. 2006,
-   * eq. 72; a = 2.02 here) is ≈ σ²ρ''/2 &lt; 3e−4 for |E| ≤ 1.5 (derived); the stochastic error of ρ is
-   * ≈ 2e−3 per standard deviation at N = 4·10⁴, R = 16 (derived from var μ_n ≈ 1/(2NR) on a ring).
+   * (derived, van Hove). KPM bias from the Jackson broadening σ ≈ πa/M = 0.05 (Weiße et al. 2006,
+   * eq. 72; a = 2.02, M = 128 here) is ≈ σ²ρ''/2 &lt; 1e−3 for |E| ≤ 1.5 (derived, ρ'' ≤ 0.7); the
+   * stochastic error of ρ is ≈ 1.5e−3 per standard deviation at N = 4·10⁴, R = 16 (derived from var
+   * μ_n ≈ 1/(2NR) on a ring).
    * Tolerance 1e−2 ≈ 5 standard deviations.
    */
   @Test
@@ -139,7 +140,7 @@ class KpmKernelTest {
     ChebyshevScale scale = KpmKernel.scale(h);
     assertThat(scale.centre()).isCloseTo(0.0, within(1e-12));
     assertThat(scale.halfWidth()).isCloseTo(2.0 / (1 - KpmKernel.EPSILON), within(1e-12));
-    int moments = 256;
+    int moments = 128;
     double[] mu = new double[moments];
     KpmKernel.stochasticMoments(h, scale, moments, 16, new SplittableRandom(2026), new KpmWorkspace(), mu);
     double[] g = new double[moments];
