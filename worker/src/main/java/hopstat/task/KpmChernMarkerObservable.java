@@ -20,7 +20,7 @@ import java.util.Optional;
  * KpmChernMarkerKernel}); same region and sign as {@code chern-marker}. Random vectors come from the
  * realisation's generator after the disorder and after observables listed earlier in the spec.
  */
-final class KpmChernMarkerObservable implements Observable {
+final class KpmChernMarkerObservable implements KpmObservable {
 
   static final String NAME = "kpm-chern-marker";
 

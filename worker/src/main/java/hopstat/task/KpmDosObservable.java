@@ -30,7 +30,7 @@ import java.util.Optional;
  * index order. Resolution: Jackson broadening ≈ π a/M in energy (a = half-width of the rescaled
  * Gershgorin interval, M = kpmMoments); statistical error of each moment ≤ 1/√(N R).
  */
-final class KpmDosObservable implements Observable {
+final class KpmDosObservable implements KpmObservable {
 
   static final String NAME = "dos";
   static final int MAX_ENERGIES = 64;

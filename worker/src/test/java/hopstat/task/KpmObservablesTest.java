@@ -94,4 +94,23 @@ class KpmObservablesTest {
     assertThat(o.needsDenseMatrix()).isFalse();
     assertThat(ObservableCatalog.find("dos").orElseThrow().needsDenseMatrix()).isFalse();
   }
+
+  /**
+   * RealisationCost of a KPM-only point grows linearly in N (no slice block, no N² matrix): at L = 400
+   * (N = 320 000) below 1.5 kB per orbital, and L = 200 → 400 (N × 4) multiplies it by exactly 4 (derived from the
+   * per-orbital constants); adding chern-localizer brings back the slice blocks.
+   */
+  @Test
+  void costOfKpmRunsIsLinearInTheDimension() {
+    var kpm400 = aPoint("qwz").with("m", 1.0).size(400).open().observing("kpm-chern-marker", "dos").build();
+    var kpm200 = aPoint("qwz").with("m", 1.0).size(200).open().observing("kpm-chern-marker", "dos").build();
+    RealisationCost c400 = RealisationCost.of(kpm400);
+    RealisationCost c200 = RealisationCost.of(kpm200);
+    assertThat(c400.matrixDimension()).isEqualTo(320_000);
+    long total400 = c400.heapBytes() + c400.nativeBytes();
+    assertThat(total400).isLessThan(1500L * 320_000);
+    assertThat(total400).isEqualTo(4 * (c200.heapBytes() + c200.nativeBytes()));
+    var mixed = aPoint("qwz").with("m", 1.0).size(400).open().observing("kpm-chern-marker", "chern-localizer").build();
+    assertThat(RealisationCost.of(mixed).heapBytes()).isGreaterThan(c400.heapBytes() + 3L * 16 * 3200 * 3200 - 1);
+  }
 }
