@@ -245,4 +245,46 @@ public final class CsrHermitianMatrix {
       y[k + 1] = yi;
     }
   }
+
+  /**
+   * One Chebyshev step with accumulation, fused in one pass: y ← α·H x + β·x − y, then acc ← acc +
+   * c·y. With α = 2/a, β = −2b/a, x = T_n, y = T_{n−1} on entry this leaves T_{n+1} in y and adds
+   * c_{n+1}·T_{n+1} to the series (saves one pass over three vectors per step against a separate
+   * update).
+   *
+   * @param x read, not modified
+   * @param y read and overwritten; must not be {@code x} or {@code acc}
+   * @param acc accumulated into; must not be {@code x} or {@code y}
+   */
+  public void chebyshevStep(double alpha, double beta, double[] x, double[] y, double coefficient, double[] acc) {
+    int n = dimension;
+    if (x.length < 2 * n || y.length < 2 * n || acc.length < 2 * n) {
+      throw new IllegalArgumentException("vectors must have length >= " + 2 * n);
+    }
+    if (x == y || x == acc || y == acc) {
+      throw new IllegalArgumentException("x, y and acc must not alias");
+    }
+    int[] rs = rowStart;
+    int[] cs = columns;
+    double[] ar = re;
+    double[] ai = im;
+    for (int i = 0; i < n; i++) {
+      double sr = 0.0;
+      double si = 0.0;
+      for (int p = rs[i]; p < rs[i + 1]; p++) {
+        int j = 2 * cs[p];
+        double xr = x[j];
+        double xi = x[j + 1];
+        sr += ar[p] * xr - ai[p] * xi;
+        si += ar[p] * xi + ai[p] * xr;
+      }
+      int k = 2 * i;
+      double yr = alpha * sr + beta * x[k] - y[k];
+      double yi = alpha * si + beta * x[k + 1] - y[k + 1];
+      y[k] = yr;
+      y[k + 1] = yi;
+      acc[k] += coefficient * yr;
+      acc[k + 1] += coefficient * yi;
+    }
+  }
 }

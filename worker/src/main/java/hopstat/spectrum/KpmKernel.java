@@ -242,14 +242,10 @@ public final class KpmKernel {
       y[i] = c0 * previous[i] + c1 * current[i];
     }
     for (int k = 2; k < moments; k++) {
-      h.multiplyAffine(2.0 * inverse, 2.0 * shift, current, -1.0, previous, previous);
+      h.chebyshevStep(2.0 * inverse, 2.0 * shift, current, previous, coefficients[k], y);
       double[] t = previous;
       previous = current;
       current = t;
-      double ck = coefficients[k];
-      for (int i = 0; i < 2 * n; i++) {
-        y[i] += ck * current[i];
-      }
     }
   }
 

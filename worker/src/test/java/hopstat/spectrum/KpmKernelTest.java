@@ -187,4 +187,39 @@ class KpmKernelTest {
     }
     assertThat(s).isCloseTo(0.5, within(0.05));
   }
+
+  /**
+   * applySeries with c = e_3 gives T_3(H̃)x = 4H̃³x − 3H̃x (derived from T_3(x) = 4x³ − 3x), and with
+   * c = (c_0, c_1) the affine c_0 x + c_1 H̃x; round-off only.
+   */
+  @Test
+  void seriesApplicationMatchesExplicitPolynomials() {
+    CsrHermitianMatrix h = new CsrHermitianMatrix();
+    h.assemble(smallSample());
+    ChebyshevScale scale = KpmKernel.scale(h);
+    int n = h.dimension();
+    double[] x = new double[2 * n];
+    KpmKernel.randomPhases(new SplittableRandom(4), n, x);
+    double[] h1 = rescaledProduct(h, scale, x);
+    double[] h2 = rescaledProduct(h, scale, h1);
+    double[] h3 = rescaledProduct(h, scale, h2);
+    double[] y = new double[2 * n];
+    KpmKernel.applySeries(h, scale, new double[] {0, 0, 0, 1}, 4, x, y, new KpmWorkspace());
+    for (int i = 0; i < 2 * n; i++) {
+      assertThat(y[i]).isCloseTo(4 * h3[i] - 3 * h1[i], within(1e-12));
+    }
+    KpmKernel.applySeries(h, scale, new double[] {0.5, -2}, 2, x, y, new KpmWorkspace());
+    for (int i = 0; i < 2 * n; i++) {
+      assertThat(y[i]).isCloseTo(0.5 * x[i] - 2 * h1[i], within(1e-12));
+    }
+  }
+
+  private static double[] rescaledProduct(CsrHermitianMatrix h, ChebyshevScale scale, double[] x) {
+    double[] y = new double[x.length];
+    h.multiply(x, y);
+    for (int i = 0; i < x.length; i++) {
+      y[i] = (y[i] - scale.centre() * x[i]) / scale.halfWidth();
+    }
+    return y;
+  }
 }
