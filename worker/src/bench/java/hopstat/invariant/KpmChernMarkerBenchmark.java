@@ -81,8 +81,8 @@ public class KpmChernMarkerBenchmark {
   }
 
   /**
-   * Wall time of two realisations per size (the first grows the workspace) after one warm-up
-   * realisation at the smallest size, with the marker, its error, the CSR and vector storage and the
+   * Wall time of two realisations per size (the first grows the workspace) and the CPU time of the
+   * second (this thread; less sensitive to other load) after one warm-up realisation at the smallest size, with the marker, its error, the CSR and vector storage and the
    * heap in use after a GC. Args: comma-separated sizes.
    */
   public static void main(String[] args) {
@@ -90,14 +90,17 @@ public class KpmChernMarkerBenchmark {
     RealisationWorkspace ws = new RealisationWorkspace(LinalgFactory.create(LinalgKind.NATIVE));
     value(RealisationRunner.run(task(Integer.parseInt(sizes[0].trim()), 1L), ws));
     Runtime rt = Runtime.getRuntime();
-    System.out.printf(Locale.ROOT, "%6s %8s %10s %10s %9s %9s %9s %10s %12s%n", "L", "N", "nnz", "seconds", "seconds2",
-        "marker", "error", "csr+vec MB", "heapUsed MB");
+    java.lang.management.ThreadMXBean threads = java.lang.management.ManagementFactory.getThreadMXBean();
+    System.out.printf(Locale.ROOT, "%6s %8s %10s %10s %9s %9s %9s %9s %10s %12s%n", "L", "N", "nnz", "seconds", "seconds2",
+        "cpu2", "marker", "error", "csr+vec MB", "heapUsed MB");
     for (String s : sizes) {
       int size = Integer.parseInt(s.trim());
       long t0 = System.nanoTime();
       RealisationResult r1 = RealisationRunner.run(task(size, 20261202L), ws);
       long t1 = System.nanoTime();
+      long c1 = threads.getCurrentThreadCpuTime();
       RealisationResult r2 = RealisationRunner.run(task(size, 20261203L), ws);
+      long c2 = threads.getCurrentThreadCpuTime();
       long t2 = System.nanoTime();
       value(r1);
       value(r2);
@@ -105,8 +108,8 @@ public class KpmChernMarkerBenchmark {
       KpmChernMarkerWorkspace kw = ws.scratch(KpmChernMarkerWorkspace.class, l -> new KpmChernMarkerWorkspace());
       System.gc();
       long used = rt.totalMemory() - rt.freeMemory();
-      System.out.printf(Locale.ROOT, "%6d %8d %10d %10.2f %9.2f %9.4f %9.4f %10.1f %12.1f  (RealisationCost estimate %.1f MB)%n",
-          size, h.dimension(), h.nonZeros(), (t1 - t0) * 1e-9, (t2 - t1) * 1e-9, r1.values().get("kpm-chern-marker"),
+      System.out.printf(Locale.ROOT, "%6d %8d %10d %10.2f %9.2f %9.2f %9.4f %9.4f %10.1f %12.1f  (RealisationCost estimate %.1f MB)%n",
+          size, h.dimension(), h.nonZeros(), (t1 - t0) * 1e-9, (t2 - t1) * 1e-9, (c2 - c1) * 1e-9, r1.values().get("kpm-chern-marker"),
           r1.values().get("kpm-chern-marker-error"), (h.storageBytes() + kw.vectorBytes()) / 1048576.0, used / 1048576.0,
           (RealisationCost.of(task(size, 1L).point()).heapBytes() + RealisationCost.of(task(size, 1L).point()).nativeBytes()) / 1048576.0);
     }
