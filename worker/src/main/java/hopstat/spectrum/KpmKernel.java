@@ -33,8 +33,8 @@ import java.util.random.RandomGenerator;
  * {@link #stepCoefficients} multiplies it by g_n, so the projector P = θ(E_F − H) is applied as a
  * polynomial of degree M − 1 in H̃ whose step is broadened by ≈ π a/M.
  *
- * <p>Kernels here keep no state, allocate nothing once the workspace is warm, and take their
- * randomness from the caller.
+ * <p>Kernels here keep no state, take their randomness from the caller and, once the workspace is
+ * warm, allocate nothing except {@link #scale}'s small result record and bounds array.
  */
 public final class KpmKernel {
 
