@@ -31,6 +31,8 @@ public final class ObservableCatalog {
     register(m, new LocalizerChernObservable());
     register(m, new LocalizerGapObservable());
     register(m, new InertiaGapObservable());
+    register(m, new KpmDosObservable());
+    register(m, new KpmChernMarkerObservable());
     return Collections.unmodifiableMap(m);
   }
 

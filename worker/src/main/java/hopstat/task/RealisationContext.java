@@ -3,6 +3,7 @@ package hopstat.task;
 import hopstat.lattice.HamiltonianBuilder;
 import hopstat.lattice.Lattice;
 import hopstat.model.Model;
+import hopstat.spectrum.CsrHermitianMatrix;
 import java.util.random.RandomGenerator;
 import org.ejml.data.ZMatrixRMaj;
 
@@ -21,6 +22,7 @@ public final class RealisationContext {
   private final boolean vectorsWanted;
   private final RandomGenerator random;
   private boolean denseBuilt;
+  private boolean sparseBuilt;
   private boolean spectrumDone;
   private boolean vectorsDone;
   private boolean occupiedDone;
@@ -76,6 +78,20 @@ public final class RealisationContext {
       denseBuilt = true;
     }
     return workspace.hamiltonian;
+  }
+
+  /**
+   * The Hamiltonian in CSR storage (both triangles, duplicates summed; {@link
+   * CsrHermitianMatrix}), assembled from {@link #terms()} on first use and cached for the
+   * realisation; no dense matrix is built. Read, not modified, by callers.
+   */
+  public CsrHermitianMatrix sparseHamiltonian() {
+    CsrHermitianMatrix m = workspace.scratch(CsrHermitianMatrix.class, linalg -> new CsrHermitianMatrix());
+    if (!sparseBuilt) {
+      m.assemble(workspace.builder);
+      sparseBuilt = true;
+    }
+    return m;
   }
 
   /**
