@@ -10,7 +10,6 @@ import hopstat.linalg.Linalg;
 import hopstat.linalg.LinalgFactory;
 import hopstat.linalg.LinalgKind;
 import hopstat.model.Model;
-import hopstat.model.ModelCatalog;
 import hopstat.spec.JobSpec;
 import hopstat.task.RealisationCost;
 import hopstat.task.RealisationResult;
@@ -55,7 +54,7 @@ final class CheckCommand implements Callable<Integer> {
     int n = RunCommand.threads(threads);
     LinalgKind kind = LinalgChoice.resolve(linalg);
     PrintStream out = root.out;
-    Model model = ModelCatalog.find(spec.model()).orElseThrow();
+    Model model = spec.resolveModel();
     out.printf(Locale.ROOT, "spec        %s (sha256 %s)%n", spec.name(), spec.specHash().substring(0, 16));
     out.printf(Locale.ROOT, "model       %s: class %s, d = %d; with this disorder: class %s%n", model.name(), model.symmetryClass(), model.dimension(), spec.effectiveClass());
     out.printf(Locale.ROOT, "boundary    %s%n", spec.boundary().specName());

@@ -44,6 +44,9 @@ final class ModelsCommand implements Callable<Integer> {
       }
       out.printf(Locale.ROOT, "  observables: %s%n%n", String.join(", ", applicable));
     }
+    out.printf(Locale.ROOT, "%s  (user-defined, d = 1..3)%n  %s%n%n", hopstat.model.CustomModel.NAME,
+        "the spec's \"lattice\" block: orbitals, onsite, hoppings, optional BdG pairings, the AZ class and its T/C/S operators;"
+            + " amplitudes may name parameters, which join the spec's parameters");
     out.println("disorder types:");
     for (DisorderKind d : DisorderCatalog.all()) {
       out.printf(Locale.ROOT, "  %-14s %s%n", d.name(), d.description());

@@ -71,6 +71,6 @@ public final class GridExpander {
     }
     int size = (int) Math.round(values.get(SpecParser.SIZE));
     return new PointSpec(spec.model(), new ParameterValues(values), size, spec.boundary(),
-        values.get(SpecParser.FERMI_ENERGY), disorder, spec.observables());
+        values.get(SpecParser.FERMI_ENERGY), disorder, spec.observables(), spec.customModel());
   }
 }

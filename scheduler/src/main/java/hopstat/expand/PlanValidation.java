@@ -1,7 +1,6 @@
 package hopstat.expand;
 
 import hopstat.model.Model;
-import hopstat.model.ModelCatalog;
 import hopstat.model.SymmetryCheckResult;
 import hopstat.model.SymmetryCheckKernel;
 import hopstat.task.InvalidInputException;
@@ -34,7 +33,7 @@ public final class PlanValidation {
    */
   public static void validate(StudyPlan plan) {
     InvalidInputException.Collector problems = new InvalidInputException.Collector();
-    Model model = ModelCatalog.find(plan.spec().model()).orElseThrow();
+    Model model = plan.spec().resolveModel();
     Set<String> seen = new LinkedHashSet<>();
     for (GridPoint p : plan.points()) {
       model.whyNotValid(p.point().parameters(), p.point().linearSize(), p.point().boundary()).ifPresent(reason -> {
@@ -56,8 +55,12 @@ public final class PlanValidation {
       for (SymmetryCheckResult v : report.violations()) {
         String reason = String.format(Locale.ROOT, "model %s with this disorder claims class %s, but a realisation breaks %s (relative violation %.2e > %.0e);"
             + " remove the disorder that breaks it or the observables that need it", model.name(), report.effectiveClass(), v.symmetry(), v.relativeViolation(), SymmetryCheckKernel.TOLERANCE);
+        if (plan.spec().customModel() != null && plan.spec().disorder().isEmpty()) {
+          reason = String.format(Locale.ROOT, "the lattice declares class %s, but its Hamiltonian breaks %s (relative violation %.2e > %.0e);"
+              + " a term does not respect the declared operator: fix the term, the operator or the class", report.effectiveClass(), v.symmetry(), v.relativeViolation(), SymmetryCheckKernel.TOLERANCE);
+        }
         if (seen.add(reason)) {
-          problems.add("disorder", describe(p.coordinates()), reason);
+          problems.add(plan.spec().disorder().isEmpty() && plan.spec().customModel() != null ? "lattice.symmetries" : "disorder", describe(p.coordinates()), reason);
         }
       }
     }

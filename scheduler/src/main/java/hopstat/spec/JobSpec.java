@@ -1,6 +1,9 @@
 package hopstat.spec;
 
 import hopstat.lattice.Boundary;
+import hopstat.model.CustomModelDefinition;
+import hopstat.model.Model;
+import hopstat.model.ModelCatalog;
 import hopstat.model.SymmetryClass;
 import java.util.List;
 import java.util.Objects;
@@ -22,6 +25,7 @@ import java.util.Optional;
  * @param sampling adaptive sampling rule, or null for a fixed number of realisations
  * @param effectiveClass the model's class restricted by what the disorder keeps
  * @param specHash SHA-256 (hex) of the spec's canonical JSON (keys sorted, no whitespace)
+ * @param customModel the {@code lattice} block of a {@code custom} model, else null
  */
 public record JobSpec(
     String name,
@@ -35,7 +39,14 @@ public record JobSpec(
     int realisations,
     SamplingSpec sampling,
     SymmetryClass effectiveClass,
-    String specHash) {
+    String specHash,
+    CustomModelDefinition customModel) {
+
+  /** A spec of a built-in model. */
+  public JobSpec(String name, String description, long seed, String model, List<ParameterSpec> parameters, List<DisorderSpec> disorder,
+      Boundary boundary, List<String> observables, int realisations, SamplingSpec sampling, SymmetryClass effectiveClass, String specHash) {
+    this(name, description, seed, model, parameters, disorder, boundary, observables, realisations, sampling, effectiveClass, specHash, null);
+  }
 
   public JobSpec {
     Objects.requireNonNull(name, "name");
@@ -58,6 +69,11 @@ public record JobSpec(
       }
     }
     return Optional.empty();
+  }
+
+  /** The model the spec runs, through {@link ModelCatalog#resolve}. */
+  public Model resolveModel() {
+    return ModelCatalog.resolve(model, customModel);
   }
 
   /** Adaptive sampling, if the spec asks for it. */

@@ -9,6 +9,8 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 import hopstat.disorder.DisorderCatalog;
 import hopstat.disorder.DisorderKind;
 import hopstat.lattice.Boundary;
+import hopstat.model.CustomModel;
+import hopstat.model.CustomModelDefinition;
 import hopstat.model.Model;
 import hopstat.model.ModelCatalog;
 import hopstat.model.ParameterInfo;
@@ -53,7 +55,7 @@ public final class SpecParser {
   public static final int MAX_RANGE_STEPS = 100_000;
 
   private static final Set<String> TOP_LEVEL = Set.of(
-      "name", "description", "seed", "model", "parameters", "disorder", "boundary", "observables", "realisations", "sampling");
+      "name", "description", "seed", "model", "parameters", "disorder", "boundary", "observables", "realisations", "sampling", "lattice");
   private static final Pattern NAME = Pattern.compile("[A-Za-z0-9][A-Za-z0-9._-]{0,79}");
   private static final ObjectMapper STRICT = new ObjectMapper()
       .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
@@ -120,15 +122,32 @@ public final class SpecParser {
         modelName = andersonByDimension();
       }
       Model model = null;
-      if (modelName != null) {
+      boolean custom = CustomModel.NAME.equals(modelName);
+      if (modelName != null && !custom) {
         model = ModelCatalog.find(modelName).orElse(null);
         if (model == null) {
-          problems.add("model", modelName, "unknown model; known: " + String.join(", ", ModelCatalog.all().stream().map(Model::name).toList()));
+          List<String> known = new ArrayList<>(ModelCatalog.all().stream().map(Model::name).toList());
+          known.add(CustomModel.NAME);
+          problems.add("model", modelName, "unknown model; known: " + String.join(", ", known));
         }
+      }
+      if (root.has("lattice") && !custom) {
+        problems.add("lattice", null, "read only with \"model\": \"custom\"");
       }
       Boundary boundary = parseBoundary();
       List<Observable> observables = parseObservables();
       List<ParameterSpec> parameters = parseParameters();
+      CustomModelDefinition customModel = null;
+      if (custom) {
+        if (!root.has("lattice")) {
+          problems.add("lattice", null, "required by model custom: the unit cell, its terms and its class");
+        } else {
+          Set<String> defined = new LinkedHashSet<>();
+          parameters.forEach(p -> defined.add(p.name()));
+          customModel = CustomModelParser.parse(root.get("lattice"), defined, problems);
+          model = customModel == null ? null : new CustomModel(customModel);
+        }
+      }
       List<DisorderSpec> disorder = parseDisorder(parameters, model);
       Integer realisations = null;
       SamplingSpec sampling = null;
@@ -150,7 +169,7 @@ public final class SpecParser {
       }
       problems.throwIfAny();
       return new JobSpec(name, description, seed, modelName, parameters, disorder, boundary,
-          observables.stream().map(Observable::name).toList(), realisations, sampling, effective, canonicalHash(root));
+          observables.stream().map(Observable::name).toList(), realisations, sampling, effective, canonicalHash(root), customModel);
     }
 
     /**

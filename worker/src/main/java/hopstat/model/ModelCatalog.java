@@ -38,6 +38,29 @@ public final class ModelCatalog {
     return Optional.ofNullable(MODELS.get(name));
   }
 
+  /**
+   * The model a point runs: the user's {@link CustomModel} when {@code name} is {@value
+   * CustomModel#NAME}, else the built-in model of that name. The one lookup every worker and
+   * scheduler path uses.
+   *
+   * @param definition the spec's lattice block; required for {@code custom}, must be null otherwise
+   * @throws IllegalStateException for an unknown name or a definition that does not match the name
+   *     (validation runs first)
+   */
+  public static Model resolve(String name, CustomModelDefinition definition) {
+    if (CustomModel.NAME.equals(name)) {
+      if (definition == null) {
+        throw new IllegalStateException("model custom needs its lattice definition");
+      }
+      return new CustomModel(definition);
+    }
+    if (definition != null) {
+      throw new IllegalStateException("a lattice definition is only read by model custom, not " + name);
+    }
+    return find(name).orElseThrow(() -> new IllegalStateException("unknown model " + name));
+  }
+
+  /** The built-in models (without {@code custom}, which needs a definition). */
   public static Collection<Model> all() {
     return MODELS.values();
   }

@@ -2,6 +2,9 @@ package hopstat.task;
 
 import hopstat.disorder.DisorderTerm;
 import hopstat.lattice.Boundary;
+import hopstat.model.CustomModelDefinition;
+import hopstat.model.Model;
+import hopstat.model.ModelCatalog;
 import hopstat.model.ParameterValues;
 import java.util.List;
 import java.util.Objects;
@@ -17,6 +20,7 @@ import java.util.Objects;
  * @param fermiEnergy E_F in the model's energy unit
  * @param disorder disorder terms in spec order (random draws follow this order)
  * @param observables observable names in spec order
+ * @param customModel the user's model definition when {@code model} is {@code custom}, else null
  */
 public record PointSpec(
     String model,
@@ -25,7 +29,14 @@ public record PointSpec(
     Boundary boundary,
     double fermiEnergy,
     List<DisorderTerm> disorder,
-    List<String> observables) {
+    List<String> observables,
+    CustomModelDefinition customModel) {
+
+  /** A point of a built-in model. */
+  public PointSpec(String model, ParameterValues parameters, int linearSize, Boundary boundary, double fermiEnergy,
+      List<DisorderTerm> disorder, List<String> observables) {
+    this(model, parameters, linearSize, boundary, fermiEnergy, disorder, observables, null);
+  }
 
   public PointSpec {
     Objects.requireNonNull(model, "model");
@@ -39,5 +50,10 @@ public record PointSpec(
     }
     disorder = List.copyOf(disorder);
     observables = List.copyOf(observables);
+  }
+
+  /** The model to run, through {@link ModelCatalog#resolve} (the one lookup for every path). */
+  public Model resolveModel() {
+    return ModelCatalog.resolve(model, customModel);
   }
 }

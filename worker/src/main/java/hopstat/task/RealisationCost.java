@@ -2,7 +2,6 @@ package hopstat.task;
 
 import hopstat.lattice.Lattice;
 import hopstat.model.Model;
-import hopstat.model.ModelCatalog;
 
 /**
  * Memory one realisation of a point needs, for sizing runs before they start.
@@ -35,7 +34,7 @@ public record RealisationCost(long matrixDimension, long heapBytes, long nativeB
 
   /** Estimate for one realisation of {@code point}. */
   public static RealisationCost of(PointSpec point) {
-    Model model = ModelCatalog.find(point.model()).orElseThrow(() -> new IllegalStateException("unknown model " + point.model()));
+    Model model = point.resolveModel();
     Lattice lattice = model.lattice(point.linearSize(), point.boundary());
     long n = lattice.orbitals();
     boolean vectors = false;

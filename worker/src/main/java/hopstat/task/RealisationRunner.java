@@ -5,7 +5,6 @@ import hopstat.disorder.DisorderKind;
 import hopstat.disorder.DisorderTerm;
 import hopstat.lattice.Lattice;
 import hopstat.model.Model;
-import hopstat.model.ModelCatalog;
 import hopstat.model.SymmetryCheckKernel;
 import hopstat.model.SymmetryCheckResult;
 import hopstat.model.SymmetryClass;
@@ -58,7 +57,7 @@ public final class RealisationRunner {
 
   private static void compute(RealisationTask task, RealisationWorkspace workspace, Map<String, Double> values) {
     PointSpec point = task.point();
-    Model model = ModelCatalog.find(point.model()).orElseThrow(() -> new IllegalStateException("unknown model " + point.model()));
+    Model model = point.resolveModel();
     Lattice lattice = model.lattice(point.linearSize(), point.boundary());
     workspace.builder.reset(lattice.orbitals());
     model.addClean(point.parameters(), lattice, workspace.builder);

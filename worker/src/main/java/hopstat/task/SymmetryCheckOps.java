@@ -6,7 +6,6 @@ import hopstat.disorder.DisorderTerm;
 import hopstat.lattice.HamiltonianBuilder;
 import hopstat.lattice.Lattice;
 import hopstat.model.Model;
-import hopstat.model.ModelCatalog;
 import hopstat.model.Symmetry;
 import hopstat.model.SymmetryCheckKernel;
 import hopstat.model.SymmetryCheckResult;
@@ -61,7 +60,7 @@ public final class SymmetryCheckOps {
    * @param tolerance threshold on the relative violation, e.g. {@link SymmetryCheckKernel#TOLERANCE}
    */
   public static SymmetryCheckReport check(PointSpec point, long seed, double tolerance) {
-    Model model = ModelCatalog.find(point.model()).orElseThrow(() -> new IllegalStateException("unknown model " + point.model()));
+    Model model = point.resolveModel();
     Lattice lattice = model.lattice(point.linearSize(), point.boundary());
     HamiltonianBuilder builder = new HamiltonianBuilder();
     builder.reset(lattice.orbitals());

@@ -5,6 +5,7 @@ import hopstat.invariant.WindingResult;
 import hopstat.invariant.WindingWorkspace;
 import hopstat.lattice.Boundary;
 import hopstat.model.ChiralChain;
+import hopstat.model.CustomModel;
 import hopstat.model.Model;
 import hopstat.model.SymmetryClass;
 import java.util.List;
@@ -40,8 +41,9 @@ final class WindingObservable implements Observable {
 
   @Override
   public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
-    if (!(model instanceof ChiralChain) || model.dimension() != 1) {
-      return Optional.of("the winding is implemented for one-dimensional chiral chains (ssh); " + model.name() + " is not one");
+    boolean sublatticeChain = model instanceof ChiralChain || (model instanceof CustomModel c && c.isSublatticeChain());
+    if (!sublatticeChain || model.dimension() != 1) {
+      return Optional.of("the winding is implemented for one-dimensional chiral chains (ssh, or a custom chain with two orbitals and S = diag(1, -1)); " + model.name() + " is not one");
     }
     if (!effectiveClass.hasChiral()) {
       return Optional.of("the winding needs chiral symmetry; the disorder leaves class " + effectiveClass);
