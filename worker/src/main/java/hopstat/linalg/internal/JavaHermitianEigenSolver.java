@@ -63,12 +63,13 @@ final class JavaHermitianEigenSolver implements HermitianEigenSolver {
     if (n == 0) {
       return true;
     }
-    if (valuesOnlySize != n) {
-      // EJML 0.43.1's symmetric QR decomposition fails (index out of bounds) when reused at a
-      // smaller size, so it is recreated whenever n changes (found by the contract test).
-      valuesOnly = DecompositionFactory_DDRM.eig(2 * n, false, true);
-      valuesOnlySize = n;
-    }
+    // A new EJML decomposition per call: EJML 0.43.1's symmetric QR fails when reused at a smaller
+    // size (found by the contract test), and its exceptional shifts draw from a random generator
+    // held by the instance, so a reused one gives results that depend on earlier calls (found when
+    // the same realisation gave different last bits in a long run). The allocation is the price of
+    // reproducibility on this fallback path.
+    valuesOnly = DecompositionFactory_DDRM.eig(2 * n, false, true);
+    valuesOnlySize = n;
     if (!decompose(valuesOnly, a, n)) {
       return false;
     }
@@ -90,10 +91,8 @@ final class JavaHermitianEigenSolver implements HermitianEigenSolver {
     if (n == 0) {
       return true;
     }
-    if (withVectorsSize != n) {
-      withVectors = DecompositionFactory_DDRM.eig(2 * n, true, true);
-      withVectorsSize = n;
-    }
+    withVectors = DecompositionFactory_DDRM.eig(2 * n, true, true); // fresh per call: see eigenvalues()
+    withVectorsSize = n;
     if (!decompose(withVectors, a, n)) {
       return false;
     }

@@ -46,7 +46,7 @@ final class NativeGeneralEigenvalueSolver implements GeneralEigenvalueSolver {
     long nn = 2L * n * n;
     matrix = NativeBufferOps.ensure(matrix, nn);
     eigenvalues = NativeBufferOps.ensure(eigenvalues, 2L * n);
-    if (n > sizedFor) {
+    if (n != sizedFor) {
       queryWorkspace(n);
     }
     matrix.put(a.data, 0, (int) nn);
@@ -69,6 +69,12 @@ final class NativeGeneralEigenvalueSolver implements GeneralEigenvalueSolver {
     return true;
   }
 
+  /**
+   * Sizes the workspace for exactly this n. LAPACK picks blocked or unblocked code paths from
+   * lwork, and different paths round differently, so lwork must be a function of n alone (not the
+   * largest n seen): otherwise the same matrix gives results differing in the last bits depending
+   * on which realisations ran before it. Buffers still only grow.
+   */
   private void queryWorkspace(int n) {
     DoublePointer opt = new DoublePointer(2);
     rwork = NativeBufferOps.ensure(rwork, 2L * n);
@@ -79,7 +85,7 @@ final class NativeGeneralEigenvalueSolver implements GeneralEigenvalueSolver {
     if (info != 0) {
       throw new IllegalStateException("zgeev workspace query failed, info = " + info);
     }
-    lwork = Math.max(lwork, Math.max(2 * n, (int) opt.get(0)));
+    lwork = Math.max(2 * n, (int) opt.get(0));
     opt.close();
     work = NativeBufferOps.ensure(work, 2L * lwork);
     sizedFor = n;

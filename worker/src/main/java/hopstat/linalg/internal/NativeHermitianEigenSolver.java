@@ -124,13 +124,15 @@ final class NativeHermitianEigenSolver implements HermitianEigenSolver {
     if (wantVectors) {
       vectorsColumnMajor = NativeBufferOps.ensure(vectorsColumnMajor, nn);
     }
-    if (n > sizedFor) {
+    if (n != sizedFor) {
       queryWorkspace(n);
     }
     matrix.put(a.data, 0, (int) nn);
   }
 
   /** Workspace query (lwork = -1) with vectors wanted, which needs at least as much as without. */
+  // lwork depends on the current size alone: LAPACK chooses blocked or unblocked paths from it,
+  // which round differently (see NativeGeneralEigenvalueSolver#queryWorkspace).
   private void queryWorkspace(int n) {
     DoublePointer optWork = new DoublePointer(2);
     DoublePointer optRwork = new DoublePointer(1);
@@ -145,9 +147,9 @@ final class NativeHermitianEigenSolver implements HermitianEigenSolver {
     if (info != 0) {
       throw new IllegalStateException("zheevr workspace query failed, info = " + info);
     }
-    lwork = Math.max(lwork, Math.max(2 * n, (int) optWork.get(0)));
-    lrwork = Math.max(lrwork, Math.max(24 * n, (int) optRwork.get(0)));
-    liwork = Math.max(liwork, Math.max(10 * n, optIwork.get(0)));
+    lwork = Math.max(2 * n, (int) optWork.get(0));
+    lrwork = Math.max(24 * n, (int) optRwork.get(0));
+    liwork = Math.max(10 * n, optIwork.get(0));
     optWork.close();
     optRwork.close();
     optIwork.close();

@@ -62,7 +62,7 @@ final class NativeHermitianLdltSolver implements HermitianLdltSolver {
     long nn = 2L * size * size;
     matrix = NativeBufferOps.ensure(matrix, nn);
     pivots = NativeBufferOps.ensure(pivots, size);
-    if (size > sizedFor) {
+    if (size != sizedFor) {
       queryWorkspace(size);
     }
     matrix.put(a.data, 0, (int) nn);
@@ -97,13 +97,15 @@ final class NativeHermitianLdltSolver implements HermitianLdltSolver {
     return solvable;
   }
 
+  // lwork depends on the current size alone: LAPACK chooses blocked or unblocked paths from it,
+  // which round differently (see NativeGeneralEigenvalueSolver#queryWorkspace).
   private void queryWorkspace(int size) {
     DoublePointer opt = new DoublePointer(2);
     int info = LAPACKE_zhetrf_work(LAPACK_COL_MAJOR, UPLO_UPPER, size, matrix, size, pivots, opt, -1);
     if (info != 0) {
       throw new IllegalStateException("zhetrf workspace query failed, info = " + info);
     }
-    lwork = Math.max(lwork, Math.max(size, (int) opt.get(0)));
+    lwork = Math.max(size, (int) opt.get(0));
     opt.close();
     work = NativeBufferOps.ensure(work, 2L * lwork);
     solveWork = NativeBufferOps.ensure(solveWork, 2L * size);
