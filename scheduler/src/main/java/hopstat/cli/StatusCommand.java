@@ -59,8 +59,12 @@ final class StatusCommand implements Callable<Integer> {
     if (owner != null && heldShards.isEmpty()) {
       eta(dir, owner, planned - finished).ifPresent(out::println);
     }
+    // Planned per point: the spec's count, or under adaptive sampling what the stopping rule has
+    // scheduled so far given the journal (a point still sampling may get more, up to the maximum).
+    hopstat.expand.SamplingPlanner planner = new hopstat.expand.SamplingPlanner(plan);
+    planner.start(hopstat.queue.JournalReader.read(dir.journalDir()).records().values());
     List<String> header = new ArrayList<>(s.gridNames());
-    header.add("done");
+    header.add("done/planned");
     header.add("failed");
     for (String q : s.quantityNames()) {
       header.add(q + " (mean ± stderr)");
@@ -71,7 +75,8 @@ final class StatusCommand implements Callable<Integer> {
       for (String g : s.gridNames()) {
         row.add(java.math.BigDecimal.valueOf(p.coordinates().get(g)).stripTrailingZeros().toPlainString());
       }
-      row.add(Integer.toString(p.done()));
+      boolean open = plan.spec().adaptiveSampling().isPresent() && !planner.isStopped(p.index());
+      row.add((p.done() + p.failed()) + "/" + planner.scheduled(p.index()) + (open ? "+" : ""));
       row.add(Integer.toString(p.failed()));
       for (String q : s.quantityNames()) {
         QuantitySummary qs = p.quantities().stream().filter(x -> x.name().equals(q)).findFirst().orElse(null);

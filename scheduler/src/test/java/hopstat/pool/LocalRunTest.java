@@ -142,7 +142,7 @@ class LocalRunTest {
     Cli.run("run", spec.toString(), "--out", out.toString(), "--threads", "2", "--quiet");
     Cli.Outcome o = Cli.run("status", out.toString());
     assertThat(o.exitCode()).isEqualTo(ExitCode.OK);
-    assertThat(o.out()).contains("40 of 40 realisations journaled (0 failed); no process is working on it").contains("bott (mean ± stderr)");
+    assertThat(o.out()).contains("40 of 40 realisations journaled (0 failed); no process is working on it").contains("bott (mean ± stderr)").contains("done/planned").contains("  5/5  0  ");
   }
 
   private static void runUntilStopped(StudyPlan plan, RunDirectory dir, int stopAfter) throws Exception {
