@@ -45,16 +45,10 @@ public final class ChernMarkerKernel {
     double[] marker = workspace.siteMarker;
     double[] extent = lattice.extent();
     double density = sites / (extent[0] * extent[1]);
-    double xMin = Double.POSITIVE_INFINITY;
-    double xMax = Double.NEGATIVE_INFINITY;
-    double yMin = Double.POSITIVE_INFINITY;
-    double yMax = Double.NEGATIVE_INFINITY;
-    for (int s = 0; s < sites; s++) {
-      xMin = Math.min(xMin, lattice.position(0, s));
-      xMax = Math.max(xMax, lattice.position(0, s));
-      yMin = Math.min(yMin, lattice.position(1, s));
-      yMax = Math.max(yMax, lattice.position(1, s));
-    }
+    double xMin = lattice.minPosition(0);
+    double xMax = lattice.maxPosition(0);
+    double yMin = lattice.minPosition(1);
+    double yMax = lattice.maxPosition(1);
     double xc = 0.5 * (xMin + xMax);
     double yc = 0.5 * (yMin + yMax);
     if (n == 0 || n == rows) {

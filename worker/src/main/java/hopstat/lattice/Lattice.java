@@ -58,6 +58,24 @@ public record Lattice(
     return positions[d][s];
   }
 
+  /** Smallest site position along direction {@code d}. O(sites), allocates nothing. */
+  public double minPosition(int d) {
+    double min = Double.POSITIVE_INFINITY;
+    for (double x : positions[d]) {
+      min = Math.min(min, x);
+    }
+    return min;
+  }
+
+  /** Largest site position along direction {@code d}. O(sites), allocates nothing. */
+  public double maxPosition(int d) {
+    double max = Double.NEGATIVE_INFINITY;
+    for (double x : positions[d]) {
+      max = Math.max(max, x);
+    }
+    return max;
+  }
+
   @Override
   public double[][] positions() {
     double[][] copy = new double[dimension][];
