@@ -20,9 +20,15 @@ import hopstat.spectrum.SliceInertiaKernel;
  *
  * <p><b>Sign.</b> The returned index is −½ sig(L_κ), chosen so that it equals the {@code winding}
  * observable (ssh: +1 for |v| &lt; |w|). Derived check: for v = 0 the chain decouples into
- * dimers B_j–A_{j+1} (each with one positive and one negative eigenvalue of L_κ, for every κ) plus the
- * two dangling ends A_0 with κ(x_0 − x0) &lt; 0 and B_{L−1} with −κ(x_{L−1} − x0) &lt; 0, so
- * sig = −2; for w = 0 only intracell dimers remain, sig = 0.
+ * dimers B_j–A_{j+1} and the two dangling ends A_0 (κ(x_0 − x0) &lt; 0) and B_{L−1}
+ * (−κ(x_{L−1} − x0) &lt; 0). A dimer has determinant −κ²(x_j − x0)(x_{j+1} − x0) − |w_j|², so it
+ * contributes signature 0 unless it straddles x0 with κ²(x0 − x_j)(x_{j+1} − x0) &gt; |w_j|²
+ * (then +2): for κ &lt; 2|w| (even L, half-integer x0) sig = −2 and the index is 1; for w = 0 only
+ * intracell dimers remain, sig = 0. The straddling dimer is the usual "κ too large" breakdown.
+ *
+ * <p><b>Zero pivots.</b> The sweep eliminates cell after cell without pivoting across cells, so an
+ * exactly singular Schur complement (e.g. v = 0 exactly with a site exactly at x0, odd L) is
+ * reported as undefined even if L_κ itself is invertible; generic disordered chains never hit it.
  *
  * <p>Cost: that of the slice sweep, O(L · n_cell³) with n_cell = 2 for ssh; memory O(N).
  */
@@ -38,8 +44,8 @@ public final class ChiralLocalizerKernel {
    * @param kappa κ &gt; 0 (energy per lattice unit)
    * @param x0 the centre (lattice units)
    * @param workspace scratch
-   * @return the index, or {@link Integer#MIN_VALUE} if L_κ is singular (a zero pivot; index undefined)
-   *     or has odd signature
+   * @return the index, or {@link Integer#MIN_VALUE} if the sweep meets an exactly singular Schur complement
+   *     (L_κ singular or a zero pivot, see class Javadoc) or the signature is odd
    */
   public static int index(HamiltonianBuilder terms, Lattice lattice, double kappa, double x0, ChiralLocalizerWorkspace workspace) {
     if (!(kappa > 0) || !Double.isFinite(kappa)) {

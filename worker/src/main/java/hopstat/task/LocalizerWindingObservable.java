@@ -86,7 +86,7 @@ final class LocalizerWindingObservable implements Observable {
     double x0 = SpectralLocalizerKernel.centre(context.lattice(), 0);
     int nu = ChiralLocalizerKernel.index(context.terms(), context.lattice(), kappa, x0, ws);
     if (nu == Integer.MIN_VALUE) {
-      throw new ConvergenceFailure("the chiral spectral localizer is singular (a zero pivot): index undefined");
+      throw new ConvergenceFailure("the cell-by-cell LDL^H sweep of the chiral localizer met an exactly singular Schur complement: index undefined");
     }
     out.put("winding-localizer", (double) nu);
     out.put("winding-localizer-kappa", kappa);
