@@ -7,7 +7,19 @@ import hopstat.disorder.DisorderTerm;
 import hopstat.lattice.Boundary;
 import hopstat.linalg.LinalgFactory;
 import hopstat.linalg.LinalgKind;
+import hopstat.invariant.ChiralLocalizerKernel;
+import hopstat.invariant.ChiralLocalizerWorkspace;
+import hopstat.invariant.SpectralLocalizerKernel;
+import hopstat.lattice.HamiltonianBuilder;
+import hopstat.lattice.Lattice;
+import hopstat.model.CustomModel;
+import hopstat.model.CustomModelDefinition;
+import hopstat.model.CustomModelDefinition.Amplitude;
+import hopstat.model.CustomModelDefinition.Orbital;
+import hopstat.model.CustomModelDefinition.Term;
 import hopstat.model.Model;
+import hopstat.model.Symmetry;
+import hopstat.model.SymmetryOperator;
 import hopstat.model.ModelCatalog;
 import hopstat.model.ParameterValues;
 import hopstat.model.SymmetryClass;
@@ -123,5 +135,32 @@ class LocalizerWindingObservableTest {
     RealisationResult r = RealisationRunner.run(new RealisationTask(RealisationTask.idOf(0, 0), 0, 0, 1L, point), WORKSPACE);
     assertThat(r.outcome()).isEqualTo(Outcome.FAILED);
     assertThat(r.failure()).contains("fermiEnergy");
+  }
+
+  /**
+   * A custom class-AIII chain with complex hoppings v e^{iα} (A_r → B_r) and w e^{iβ} (B_r → A_{r+1})
+   * and the declared chiral operator diag(1, −1): its Bloch winding is that of |v| + |w| e^{i(k+β−α)}
+   * up to a gauge phase, 1 iff |v| &lt; |w| (derived). The observable accepts the model and the kernel
+   * on its clean Hamiltonian gives that winding.
+   */
+  @ParameterizedTest(name = "v={0} w={1}")
+  @CsvSource({"0.4, 1.0, 1", "-0.7, 0.9, 1", "1.3, 1.0, 0", "0.9, -0.5, 0"})
+  void customAiiiChainWithDeclaredChiralOperator(double v, double w, int nu) {
+    CustomModel chain = new CustomModel(new CustomModelDefinition(1, List.of(List.of(1.0)),
+        List.of(new Orbital("A", List.of(0.0)), new Orbital("B", List.of(0.0))), List.of(),
+        List.of(new Term(List.of(0), 0, 1, new Amplitude("v", 0.6, 0.8)), new Term(List.of(1), 1, 0, new Amplitude("w", 0.28, -0.96))),
+        List.of(), SymmetryClass.AIII,
+        List.of(SymmetryOperator.local(Symmetry.CHIRAL, new double[][] {{1, 0}, {0, -1}}, new double[][] {{0, 0}, {0, 0}}))));
+    assertThat(chain.isSublatticeChain()).isTrue();
+    Observable o = ObservableCatalog.find("winding-localizer").orElseThrow();
+    assertThat(o.whyNotApplicable(chain, Boundary.OPEN, SymmetryClass.AIII)).isEmpty();
+    Lattice lattice = chain.lattice(40, Boundary.OPEN);
+    HamiltonianBuilder h = new HamiltonianBuilder();
+    h.reset(lattice.orbitals());
+    chain.addClean(new ParameterValues(Map.of("v", v, "w", w)), lattice, h);
+    double kappa = (Math.abs(v) + Math.abs(w)) / 40.0;
+    int index = ChiralLocalizerKernel.index(h, lattice, kappa, SpectralLocalizerKernel.centre(lattice, 0),
+        new ChiralLocalizerWorkspace(LinalgFactory.create(LinalgKind.JAVA)));
+    assertThat(index).isEqualTo(nu);
   }
 }
