@@ -30,6 +30,7 @@ public final class ObservableCatalog {
     register(m, new BottVersusFermiEnergyObservable());
     register(m, new LocalizerChernObservable());
     register(m, new LocalizerGapObservable());
+    register(m, new LocalizerWindingObservable());
     register(m, new InertiaGapObservable());
     register(m, new KpmDosObservable());
     register(m, new KpmChernMarkerObservable());
