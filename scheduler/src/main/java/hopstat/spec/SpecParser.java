@@ -31,6 +31,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.TreeSet;
 import java.util.regex.Pattern;
@@ -166,6 +167,7 @@ public final class SpecParser {
         effective = effectiveClass(model, disorder);
         parameters = checkParameters(model, observables, disorder, parameters);
         checkObservables(model, boundary, effective, observables);
+        checkObservablesWithDisorder(observables, disorder, parameters);
       }
       problems.throwIfAny();
       return new JobSpec(name, description, seed, modelName, parameters, disorder, boundary,
@@ -391,6 +393,8 @@ public final class SpecParser {
 
     private List<DisorderSpec> parseDisorder(List<ParameterSpec> parameters, Model model) {
       List<DisorderSpec> found = new ArrayList<>();
+      List<DisorderKind> kinds = new ArrayList<>();
+      List<String> kindPaths = new ArrayList<>();
       JsonNode n = root.get("disorder");
       if (n == null) {
         return found;
@@ -427,6 +431,10 @@ public final class SpecParser {
             problems.add(path + ".strength", s.toString(), "must be >= 0");
           } else if (v != null) {
             value = v;
+            if (kind != null) {
+              String text = s.toString();
+              kind.whyNotValidStrength(v).ifPresent(reason -> problems.add(path + ".strength", text, reason));
+            }
           }
         } else if (s.isTextual()) {
           parameter = s.asText();
@@ -436,6 +444,10 @@ public final class SpecParser {
             parameter = null;
           } else if (p.values().stream().anyMatch(x -> x < 0)) {
             problems.add("parameters." + p.name(), p.values().toString(), "used as a disorder strength, so every value must be >= 0");
+          } else if (kind != null) {
+            DisorderKind k = kind;
+            p.values().stream().map(k::whyNotValidStrength).flatMap(Optional::stream).findFirst()
+                .ifPresent(reason -> problems.add("parameters." + p.name(), p.values().toString(), "used as the strength of " + path + ": " + reason));
           }
         } else {
           problems.add(path + ".strength", s.toString(), "must be a number >= 0 or the name of a parameter");
@@ -463,6 +475,19 @@ public final class SpecParser {
         }
         if (kind != null && (parameter != null || !Double.isNaN(value))) {
           found.add(new DisorderSpec(kind.name(), value, parameter, options));
+        }
+        if (kind != null) {
+          kinds.add(kind);
+          kindPaths.add(path);
+        }
+      }
+      for (int i = 0; i < kinds.size(); i++) {
+        for (int j = i + 1; j < kinds.size(); j++) {
+          Optional<String> reason = kinds.get(i).whyNotBefore(kinds.get(j));
+          if (reason.isPresent()) {
+            problems.add(kindPaths.get(i) + ".type", kinds.get(i).name(), reason.get());
+            break;
+          }
         }
       }
       return found;
@@ -630,6 +655,29 @@ public final class SpecParser {
         }
       }
       return all;
+    }
+
+    /** Each observable against each disorder kind ({@link Observable#whyNotApplicableWith}), e.g. vacancies' far-away levels. */
+    private void checkObservablesWithDisorder(List<Observable> observables, List<DisorderSpec> disorder, List<ParameterSpec> parameters) {
+      Map<String, List<Double>> values = new LinkedHashMap<>();
+      for (ParameterSpec p : parameters) {
+        values.put(p.name(), p.values());
+      }
+      JsonNode list = root.get("observables");
+      for (Observable o : observables) {
+        int index = 0;
+        for (int i = 0; list != null && i < list.size(); i++) {
+          if (o.name().equals(list.get(i).asText())) {
+            index = i;
+          }
+        }
+        String path = "observables[" + index + "]";
+        Set<String> reported = new LinkedHashSet<>();
+        for (DisorderSpec d : disorder) {
+          DisorderKind kind = DisorderCatalog.find(d.type()).orElseThrow();
+          o.whyNotApplicableWith(kind, values).filter(reported::add).ifPresent(reason -> problems.add(path, o.name(), reason));
+        }
+      }
     }
 
     private void checkObservables(Model model, Boundary boundary, SymmetryClass effective, List<Observable> observables) {

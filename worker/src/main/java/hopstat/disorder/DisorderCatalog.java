@@ -22,6 +22,8 @@ public final class DisorderCatalog {
     m.put(PairingBoxDisorder.NAME, new PairingBoxDisorder());
     m.put(BondBoxDisorder.NAME, new BondBoxDisorder());
     m.put(MajoranaGaussDisorder.NAME, new MajoranaGaussDisorder());
+    m.put(VacancyDisorder.NAME, new VacancyDisorder());
+    m.put(BondScaleDisorder.NAME, new BondScaleDisorder());
     return Collections.unmodifiableMap(m);
   }
 

@@ -30,6 +30,43 @@ public interface DisorderKind {
     return java.util.Optional.empty();
   }
 
+  /**
+   * Why {@code strength} is not a valid strength of this kind beyond the general W ≥ 0 (e.g. a
+   * concentration must be below 1), or empty if it is. Called by spec validation for every value a
+   * strength can take. Default: every W ≥ 0 is valid.
+   */
+  default java.util.Optional<String> whyNotValidStrength(double strength) {
+    return java.util.Optional.empty();
+  }
+
+  /**
+   * Why a term of this kind may not be followed by a term of kind {@code later} in the spec's
+   * disorder list (e.g. vacancies cancel the terms present when they are applied, so later terms
+   * would touch removed sites), or empty if it may. Default: any order.
+   */
+  default java.util.Optional<String> whyNotBefore(DisorderKind later) {
+    return java.util.Optional.empty();
+  }
+
+  /**
+   * True if this disorder leaves decoupled levels far outside the band of the rest of the sample
+   * (vacancies at ±U), which upsets observables that scale or bin by the whole spectrum (KPM,
+   * default energy windows, automatic localizer kappa). Default: false.
+   */
+  default boolean hasDecoupledLevels() {
+    return false;
+  }
+
+  /**
+   * True if {@link #apply} on one slice of a sample (a cross-section lattice, as the transfer-matrix
+   * observable uses) gives that slice's part of the full sample's disorder, i.e. the kind only
+   * touches terms inside sites and draws site by site. False for kinds that change bonds between
+   * sites (the inter-slice bonds would be missed) or cancel terms. Default: true.
+   */
+  default boolean isSliceLocal() {
+    return true;
+  }
+
   /** Allowed option keys and, for each, the allowed values (empty set = any text). */
   Map<String, java.util.Set<String>> options();
 

@@ -106,6 +106,39 @@ public final class HamiltonianBuilder {
     }
   }
 
+  /**
+   * Sets to zero every stored term whose row or column is a flagged orbital, i.e. decouples those
+   * orbitals completely (hoppings, pairings and onsite values). The terms stay in the list with
+   * value 0, so term indices, {@link #termCount()} and the sparsity pattern do not change. Used for
+   * vacancies (site dilution) without changing the matrix dimension.
+   *
+   * @param flagged read, not modified: {@code flagged[i]} true for orbital i; length ≥ {@link #dimension()}
+   * @return number of terms set to zero
+   */
+  public int zeroTermsTouching(boolean[] flagged) {
+    if (flagged.length < dimension) {
+      throw new IllegalArgumentException("flags for " + flagged.length + " orbitals, matrix has " + dimension);
+    }
+    int zeroed = 0;
+    for (int k = 0; k < count; k++) {
+      if (flagged[rows[k]] || flagged[cols[k]]) {
+        re[k] = 0.0;
+        im[k] = 0.0;
+        zeroed++;
+      }
+    }
+    return zeroed;
+  }
+
+  /** Multiplies stored term k (and so its Hermitian conjugate) by a real factor. */
+  public void scaleTerm(int k, double factor) {
+    if (k < 0 || k >= count) {
+      throw new IndexOutOfBoundsException("term " + k + " of " + count);
+    }
+    re[k] *= factor;
+    im[k] *= factor;
+  }
+
   private void check(int i, int j) {
     if (i < 0 || j < 0 || i >= dimension || j >= dimension) {
       throw new IndexOutOfBoundsException("term (" + i + ", " + j + ") outside a " + dimension + "-dimensional matrix");

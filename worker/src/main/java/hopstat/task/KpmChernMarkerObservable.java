@@ -68,6 +68,11 @@ final class KpmChernMarkerObservable implements KpmObservable {
   }
 
   @Override
+  public Optional<String> whyNotApplicableWith(hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
+    return KpmSupport.whyNotWith(NAME, kind);
+  }
+
+  @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
     ParameterValues p = context.point().parameters();
     int moments = KpmSupport.integer(p, KpmSupport.MOMENTS_PARAMETER, 2, KpmSupport.MAX_MOMENTS);

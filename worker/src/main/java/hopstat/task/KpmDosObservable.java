@@ -86,6 +86,11 @@ final class KpmDosObservable implements KpmObservable {
   }
 
   @Override
+  public Optional<String> whyNotApplicableWith(hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
+    return KpmSupport.whyNotWith(NAME, kind);
+  }
+
+  @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
     ParameterValues p = context.point().parameters();
     for (String name : List.of("dosEnergyMin", "dosEnergyMax")) {

@@ -28,4 +28,17 @@ final class KpmSupport {
     }
     return (int) v;
   }
+
+  /**
+   * KPM rescales H into [−1, 1] by its Gershgorin bounds: far-away decoupled levels (vacancies at
+   * ±U, U = 10³ R) would stretch the scale by 10³ and divide the energy resolution of a fixed
+   * moment count by as much.
+   */
+  static java.util.Optional<String> whyNotWith(String observable, hopstat.disorder.DisorderKind kind) {
+    if (kind.hasDecoupledLevels()) {
+      return java.util.Optional.of(observable + " rescales the spectrum by its Gershgorin bounds; the far-away levels of " + kind.name()
+          + " would stretch it by ~10^3 and destroy the energy resolution: use dense observables (bott, chern-marker, gap) instead");
+    }
+    return java.util.Optional.empty();
+  }
 }

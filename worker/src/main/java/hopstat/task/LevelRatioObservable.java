@@ -65,6 +65,11 @@ final class LevelRatioObservable implements Observable {
   }
 
   @Override
+  public Optional<String> whyNotApplicableWith(hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
+    return WindowParameters.whyNotWith(NAME, kind, parameters);
+  }
+
+  @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
     double[] spectrum = context.spectrum();
     int n = context.dimension();

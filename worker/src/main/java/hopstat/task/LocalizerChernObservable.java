@@ -57,6 +57,11 @@ final class LocalizerChernObservable implements Observable {
   }
 
   @Override
+  public Optional<String> whyNotApplicableWith(hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
+    return LocalizerSupport.whyNotWith(name(), kind, parameters);
+  }
+
+  @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
     double kappa = LocalizerSupport.kappa(context);
     SliceInertiaWorkspace ws = context.workspace().scratch(SliceInertiaWorkspace.class, SliceInertiaWorkspace::new);

@@ -38,4 +38,21 @@ final class LocalizerSupport {
     }
     return SpectralLocalizerKernel.automaticKappa(context.terms(), context.lattice(), context.fermiEnergy(), new double[2 * context.dimension()]);
   }
+
+  /**
+   * The automatic κ scales with the Gershgorin bound of H, which the far-away decoupled levels of
+   * vacancies inflate by ~10³; a fixed positive κ is unaffected (a decoupled level adds a block of
+   * zero signature to the localizer).
+   */
+  static Optional<String> whyNotWith(String observable, hopstat.disorder.DisorderKind kind, java.util.Map<String, java.util.List<Double>> parameters) {
+    if (!kind.hasDecoupledLevels()) {
+      return Optional.empty();
+    }
+    java.util.List<Double> values = parameters.getOrDefault(KAPPA, java.util.List.of(0.0));
+    if (values.stream().anyMatch(v -> !(v > 0))) {
+      return Optional.of(observable + " with automatic kappa (kappa = 0) scales kappa by the Gershgorin bound, which the far-away levels of "
+          + kind.name() + " inflate ~10^3-fold: give \"kappa\" > 0");
+    }
+    return Optional.empty();
+  }
 }

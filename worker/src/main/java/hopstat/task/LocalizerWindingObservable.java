@@ -77,6 +77,11 @@ final class LocalizerWindingObservable implements Observable {
   }
 
   @Override
+  public Optional<String> whyNotApplicableWith(hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
+    return LocalizerSupport.whyNotWith(name(), kind, parameters);
+  }
+
+  @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
     if (context.fermiEnergy() != 0.0) {
       throw new IllegalStateException("the localizer winding is defined at the chiral point: fermiEnergy must be 0, got " + context.fermiEnergy());

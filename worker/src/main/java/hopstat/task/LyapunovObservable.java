@@ -90,6 +90,13 @@ final class LyapunovObservable implements Observable {
   }
 
   @Override
+  public Optional<String> whyNotApplicableWith(hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
+    return kind.isSliceLocal() ? Optional.empty()
+        : Optional.of("the transfer-matrix observable 'lyapunov' applies the disorder slice by slice; " + kind.name()
+            + " changes bonds between sites or cancels terms, which a slice cannot see");
+  }
+
+  @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
     Model model = context.model();
     if (!(model instanceof SliceHamiltonian sliced)) {

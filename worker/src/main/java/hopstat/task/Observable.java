@@ -51,6 +51,20 @@ public interface Observable {
   Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass);
 
   /**
+   * Why the observable cannot be used together with a disorder term of this kind, given the spec's
+   * parameters (e.g. observables that scale or bin by the whole spectrum cannot cope with the
+   * far-away levels of {@link hopstat.disorder.DisorderKind#hasDecoupledLevels()} unless the spec
+   * fixes their energy range), or empty if it can. Called by spec validation for every pair of
+   * observable and disorder term. Default: compatible with every kind.
+   *
+   * @param kind read
+   * @param parameters read: every parameter of the spec (given or defaulted) with all its values
+   */
+  default Optional<String> whyNotApplicableWith(hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
+    return Optional.empty();
+  }
+
+  /**
    * Computes the quantities of one realisation.
    *
    * @param context read (lazily computes and caches spectra)

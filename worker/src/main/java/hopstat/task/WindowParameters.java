@@ -65,4 +65,23 @@ final class WindowParameters {
     }
     return q;
   }
+
+  /**
+   * Default windows span the lowest to the highest level; far-away decoupled levels (vacancies at
+   * ±U) would stretch them over ±U and the degenerate vacancy levels would enter the statistics,
+   * so such disorder needs explicit {@code windowMin} and {@code windowMax} (inside the band).
+   */
+  static java.util.Optional<String> whyNotWith(String observable, hopstat.disorder.DisorderKind kind, java.util.Map<String, List<Double>> parameters) {
+    if (!kind.hasDecoupledLevels()) {
+      return java.util.Optional.empty();
+    }
+    for (String edge : List.of("windowMin", "windowMax")) {
+      List<Double> values = parameters.get(edge);
+      if (values == null || values.stream().anyMatch(v -> Double.isNaN(v))) {
+        return java.util.Optional.of(observable + " with " + kind.name() + " needs explicit \"windowMin\" and \"windowMax\" inside the band:"
+            + " the default windows would span the removed sites' levels at +-U");
+      }
+    }
+    return java.util.Optional.empty();
+  }
 }
