@@ -1,0 +1,279 @@
+package hopstat.disorder;
+
+import static hopstat.invariant.TestRealisation.aRealisation;
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
+
+import hopstat.invariant.TestRealisation;
+import hopstat.lattice.Boundary;
+import hopstat.lattice.HamiltonianBuilder;
+import hopstat.lattice.Lattice;
+import hopstat.linalg.Linalg;
+import hopstat.linalg.LinalgFactory;
+import hopstat.linalg.LinalgKind;
+import hopstat.model.ModelCatalog;
+import hopstat.model.ParameterValues;
+import hopstat.model.Symmetry;
+import hopstat.model.SymmetryCheckKernel;
+import hopstat.model.SymmetryCheckResult;
+import hopstat.model.SymmetryClass;
+import hopstat.task.InvalidInputException;
+import hopstat.task.Outcome;
+import hopstat.task.PointSpec;
+import hopstat.task.RealisationResult;
+import hopstat.task.RealisationRunner;
+import hopstat.task.RealisationTask;
+import hopstat.task.RealisationWorkspace;
+import hopstat.task.SeedOps;
+import hopstat.task.SymmetryCheckOps;
+import hopstat.task.SymmetryCheckReport;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Map;
+import java.util.random.RandomGenerator;
+import org.ejml.data.ZMatrixRMaj;
+import org.junit.jupiter.api.Test;
+
+/** Site dilution ({@code vacancies}): draw order, exact equivalence with deleting the sites, invariants, symmetry, bad input. */
+class VacancyDisorderTest {
+
+  private static final Linalg LINALG = LinalgFactory.create(LinalgKind.NATIVE);
+  private static final RealisationWorkspace WORKSPACE = new RealisationWorkspace(LINALG);
+
+  /** The sites the documented rule removes: site s iff its draw u_s &lt; c, after {@code skip} earlier draws. */
+  private static boolean[] replayRemoved(long seed, int skip, int sites, double c) {
+    RandomGenerator random = SeedOps.generator(seed);
+    for (int i = 0; i < skip; i++) {
+      random.nextDouble();
+    }
+    boolean[] removed = new boolean[sites];
+    for (int s = 0; s < sites; s++) {
+      removed[s] = random.nextDouble() < c;
+    }
+    return removed;
+  }
+
+  private static int count(boolean[] flags) {
+    int n = 0;
+    for (boolean f : flags) {
+      n += f ? 1 : 0;
+    }
+    return n;
+  }
+
+  private static double[] eigenvalues(ZMatrixRMaj h) {
+    double[] values = new double[h.numRows];
+    assertThat(LINALG.newHermitianEigenSolver().eigenvalues(h, values)).isTrue();
+    return values;
+  }
+
+  private static ZMatrixRMaj dense(HamiltonianBuilder b) {
+    ZMatrixRMaj h = new ZMatrixRMaj(1, 1);
+    b.toDense(h);
+    return h;
+  }
+
+  /** The principal submatrix on the orbitals of the kept sites: the sample with the removed sites deleted by hand. */
+  private static ZMatrixRMaj deleteSites(ZMatrixRMaj h, boolean[] removedSite, int orbitalsPerSite) {
+    int[] keep = new int[h.numRows];
+    int n = 0;
+    for (int i = 0; i < h.numRows; i++) {
+      if (!removedSite[i / orbitalsPerSite]) {
+        keep[n++] = i;
+      }
+    }
+    ZMatrixRMaj out = new ZMatrixRMaj(n, n);
+    for (int a = 0; a < n; a++) {
+      for (int b = 0; b < n; b++) {
+        out.set(a, b, h.getReal(keep[a], keep[b]), h.getImag(keep[a], keep[b]));
+      }
+    }
+    return out;
+  }
+
+  private static RealisationResult run(PointSpec point, long seed) {
+    return RealisationRunner.run(new RealisationTask("t", 0, 0, seed, point), WORKSPACE);
+  }
+
+  /**
+   * (a) Exact: the removed sites are those whose draw is below c, one draw per site in site order;
+   * every term touching them is zero and their diagonal is U. Statistics (common practice): the
+   * number removed among N = 3·1600 sites is binomial(N, c); at c = 0.2 its mean is 960 and its
+   * standard deviation sqrt(N c (1 − c)) = 27.7; we allow 4σ (a fixed seed: deterministic).
+   */
+  @Test
+  void removesEachSiteWithProbabilityCInSiteOrder() {
+    double c = 0.2;
+    int size = 40;
+    int total = 0;
+    int sites = 0;
+    for (long seed = 1; seed <= 3; seed++) {
+      TestRealisation r = aRealisation("qwz").with("m", -1.0).size(size).disorder(VacancyDisorder.NAME, c).seed(seed);
+      HamiltonianBuilder b = r.build();
+      Lattice lattice = r.lattice();
+      boolean[] expected = replayRemoved(seed, 0, lattice.sites(), c);
+      double[] diagonal = new double[b.dimension()];
+      for (int k = 0; k < b.termCount(); k++) {
+        int i = b.row(k);
+        int j = b.column(k);
+        if (i == j) {
+          diagonal[i] += b.realPart(k);
+        } else if (expected[i / 2] || expected[j / 2]) {
+          assertThat(b.realPart(k)).isZero();
+          assertThat(b.imaginaryPart(k)).isZero();
+        }
+      }
+      for (int s = 0; s < lattice.sites(); s++) {
+        // removed: U = 1000 R with R ≥ 1 here; kept: |diagonal| ≤ R ≈ 5
+        assertThat(diagonal[2 * s] > 100 && diagonal[2 * s + 1] > 100).as("site " + s).isEqualTo(expected[s]);
+      }
+      total += count(expected);
+      sites += lattice.sites();
+    }
+    double mean = sites * c;
+    double sigma = Math.sqrt(sites * c * (1 - c));
+    assertThat((double) total).isCloseTo(mean, within(4 * sigma));
+  }
+
+  /** c = 0 removes nothing: the matrix equals the clean one exactly. */
+  @Test
+  void zeroConcentrationChangesNothing() {
+    ZMatrixRMaj diluted = dense(aRealisation("qwz").with("m", -1.0).size(5).disorder(VacancyDisorder.NAME, 0.0).seed(3).build());
+    ZMatrixRMaj clean = dense(aRealisation("qwz").with("m", -1.0).size(5).build());
+    assertThat(diluted.data).containsExactly(clean.data);
+  }
+
+  /**
+   * (b) Derived: a removed site is an exactly decoupled block, so the diluted spectrum without the
+   * levels at ±U equals the spectrum of the same sample with those sites' rows and columns deleted
+   * by hand (dense comparison). The vacancy levels themselves sit at U = 1000 R (R the Gershgorin
+   * radius before removal): U on both orbitals for qwz, ±U on particle/hole for the BdG model.
+   * Tolerance 1e-9: LAPACK eigenvalues are accurate to ~ε‖H‖ ≈ 1e-12 with ‖H‖ ≈ U ≈ 10⁴.
+   */
+  @Test
+  void dilutedSpectrumEqualsTheSpectrumWithTheSitesDeleted() {
+    // qwz, vacancies only
+    checkEquivalence(aRealisation("qwz").with("m", -1.0).size(6), 0.25, 5, 0, false);
+    // pip-square (class D): onsite-box first (one draw per site), then vacancies, whose draws follow
+    checkEquivalence(aRealisation("pip-square").with("mu", 1.0).size(6).disorder(OnsiteBoxDisorder.NAME, 1.5), 0.25, 8, 36, true);
+    // pwave-wire (class BDI), a ring
+    checkEquivalence(aRealisation("pwave-wire").with("mu", 0.5).size(16), 0.25, 2, 0, true);
+  }
+
+  private static void checkEquivalence(TestRealisation reference, double c, long seed, int skip, boolean bdg) {
+    reference.seed(seed);
+    Lattice lattice = reference.lattice();
+    HamiltonianBuilder refTerms = reference.build();
+    double level = VacancyDisorder.LEVEL_FACTOR * VacancyDisorder.gershgorinRadius(refTerms);
+    ZMatrixRMaj refDense = dense(refTerms);
+    boolean[] removed = replayRemoved(seed, skip, lattice.sites(), c);
+    int removedCount = count(removed);
+    assertThat(removedCount).as("the fixture must remove some sites").isBetween(1, lattice.sites() - 2);
+
+    double[] diluted = eigenvalues(dense(reference.disorder(VacancyDisorder.NAME, c).build()));
+    double[] deleted = eigenvalues(deleteSites(refDense, removed, lattice.orbitalsPerSite()));
+
+    int vacancyLevels = removedCount * lattice.orbitalsPerSite();
+    int low = bdg ? vacancyLevels / 2 : 0;
+    int n = diluted.length;
+    for (int i = 0; i < low; i++) {
+      assertThat(diluted[i]).isCloseTo(-level, within(1e-9 * level));
+    }
+    for (int i = n - (vacancyLevels - low); i < n; i++) {
+      assertThat(diluted[i]).isCloseTo(level, within(1e-9 * level));
+    }
+    double[] rest = Arrays.copyOfRange(diluted, low, n - (vacancyLevels - low));
+    assertThat(rest).hasSameSizeAs(deleted);
+    for (int i = 0; i < rest.length; i++) {
+      assertThat(rest[i]).isCloseTo(deleted[i], within(1e-9));
+    }
+  }
+
+  /**
+   * (c) The Bott index is unchanged by weak dilution in the topological phase of QWZ: clean
+   * C = +1 at m = −1 (Qi, Wu, Zhang, PRB 74, 085308 (2006); sign as in REFERENCE.md), Bott index =
+   * C (Loring & Hastings, EPL 92, 67004 (2010)). A vacancy is a decoupled level at +U, above E_F = 0,
+   * so the occupied projector is that of the diluted sample. Tolerance 1e-6 on the unrounded index.
+   */
+  @Test
+  void bottIndexOfWeaklyDilutedQwzStaysAtItsCleanValue() {
+    Map<String, Double> parameters = Map.of("m", -1.0, "t", 1.0);
+    PointSpec clean = new PointSpec("qwz", new ParameterValues(parameters), 12, Boundary.PERIODIC, 0.0, List.of(), List.of("bott"));
+    RealisationResult cleanResult = run(clean, 1);
+    assertThat(cleanResult.outcome()).isEqualTo(Outcome.DONE);
+    assertThat(cleanResult.values().get("bott")).isCloseTo(1.0, within(1e-6));
+    PointSpec diluted = new PointSpec("qwz", new ParameterValues(parameters), 12, Boundary.PERIODIC, 0.0,
+        List.of(new DisorderTerm(VacancyDisorder.NAME, 0.05, Map.of())), List.of("bott"));
+    for (long seed = 1; seed <= 3; seed++) {
+      assertThat(count(replayRemoved(seed, 0, 144, 0.05))).as("sites removed with seed " + seed).isPositive();
+      RealisationResult r = run(diluted, seed);
+      assertThat(r.outcome()).as(String.valueOf(r.failure())).isEqualTo(Outcome.DONE);
+      assertThat(r.values().get("bott")).isCloseTo(1.0, within(1e-6));
+    }
+  }
+
+  /**
+   * (c) Kitaev ring with one vacancy. Clean, |μ| &lt; 2|t|: Majorana number Q = −1, z2 = 1
+   * (Kitaev, Phys.-Usp. 44, 131 (2001)). One vacancy cuts the ring into an open wire of L − 1 sites
+   * plus a decoupled site. Derived expectation: on an open wire the closure phase −1 of the bond
+   * (L−1, 0) is removed by the gauge c_j → −c_j on the sites on one side of it (an orthogonal map of
+   * determinant +1 on the Majoranas, so Pf is unchanged), hence Pf(A_periodic) = Pf(A_antiperiodic)
+   * and Q = +1, z2 = 0, whatever the phase of the wire; the decoupled site multiplies both Pfaffians
+   * by the same factor. μ = 1 keeps the open wire's end-mode splitting ~ (μ/2t)^(L−1) ≈ 2e-3 far
+   * above round-off, so both Pfaffian signs are well defined.
+   */
+  @Test
+  void kitaevRingWithOneVacancyIsAnOpenWire() {
+    Map<String, Double> parameters = Map.of("mu", 1.0, "t", 1.0, "delta", 1.0);
+    int size = 10;
+    PointSpec clean = new PointSpec("pwave-wire", new ParameterValues(parameters), size, Boundary.PERIODIC, 0.0, List.of(), List.of("z2"));
+    assertThat(run(clean, 1).values().get("z2")).isEqualTo(1.0);
+    long seed = 1;
+    while (count(replayRemoved(seed, 0, size, 0.1)) != 1) {
+      seed++;
+    }
+    PointSpec diluted = new PointSpec("pwave-wire", new ParameterValues(parameters), size, Boundary.PERIODIC, 0.0,
+        List.of(new DisorderTerm(VacancyDisorder.NAME, 0.1, Map.of())), List.of("z2"));
+    RealisationResult r = run(diluted, seed);
+    assertThat(r.outcome()).as(String.valueOf(r.failure())).isEqualTo(Outcome.DONE);
+    assertThat(r.values().get("z2")).isEqualTo(0.0);
+  }
+
+  /**
+   * (d) The BdG sign rule keeps C (pip-square, class D, declared C = τx K) and the real potential
+   * keeps T (bhz, class AII): the audit of the claimed class passes. On ssh only T is claimed
+   * (BDI → AI), because +U on both sublattice orbitals breaks the sublattice C and S.
+   */
+  @Test
+  void symmetryChecksPassWithVacancies() {
+    List<DisorderTerm> vacancies = List.of(new DisorderTerm(VacancyDisorder.NAME, 0.3, Map.of()));
+    SymmetryCheckReport pip = SymmetryCheckOps.check(new PointSpec("pip-square", new ParameterValues(Map.of("mu", 1.0, "t", 1.0, "delta", 1.0)),
+        6, Boundary.PERIODIC, 0.0, vacancies, List.of()), 7L, SymmetryCheckKernel.TOLERANCE);
+    assertThat(pip.effectiveClass()).isEqualTo(SymmetryClass.D);
+    assertThat(pip.checks()).extracting(SymmetryCheckResult::symmetry).containsExactly(Symmetry.PARTICLE_HOLE);
+    assertThat(pip.violations()).isEmpty();
+    SymmetryCheckReport bhz = SymmetryCheckOps.check(new PointSpec("bhz", new ParameterValues(Map.of("A", 1.0, "B", 1.0, "M", 2.0, "rashba", 0.3)),
+        6, Boundary.PERIODIC, 0.0, vacancies, List.of()), 7L, SymmetryCheckKernel.TOLERANCE);
+    assertThat(bhz.effectiveClass()).isEqualTo(SymmetryClass.AII);
+    assertThat(bhz.checks()).extracting(SymmetryCheckResult::symmetry).containsExactly(Symmetry.TIME_REVERSAL);
+    assertThat(bhz.violations()).isEmpty();
+    assertThat(SymmetryCheckOps.effectiveClass(ModelCatalog.find("ssh").orElseThrow(), vacancies)).isEqualTo(SymmetryClass.AI);
+    assertThat(SymmetryCheckOps.effectiveClass(ModelCatalog.find("pwave-wire").orElseThrow(), vacancies)).isEqualTo(SymmetryClass.BDI);
+  }
+
+  /** (e) The concentration must lie in [0, 1); the kind refuses anything else, naming the field. */
+  @Test
+  void concentrationOutsideTheUnitIntervalIsBadInput() {
+    VacancyDisorder kind = new VacancyDisorder();
+    assertThat(kind.whyNotValidStrength(0.0)).isEmpty();
+    assertThat(kind.whyNotValidStrength(0.999)).isEmpty();
+    assertThat(kind.whyNotValidStrength(1.0)).isPresent();
+    assertThat(kind.whyNotValidStrength(2.5)).isPresent();
+    assertThatThrownBy(() -> aRealisation("qwz").with("m", -1.0).size(4).disorder(VacancyDisorder.NAME, 1.0).build())
+        .isInstanceOfSatisfying(InvalidInputException.class,
+            e -> assertThat(e.violations()).extracting(InvalidInputException.Violation::fieldPath).containsExactly("disorder.strength"));
+    assertThat(kind.whyNotApplicable(ModelCatalog.find("majorana-cluster").orElseThrow())).isPresent();
+    assertThat(kind.whyNotBefore(new OnsiteBoxDisorder())).isPresent();
+  }
+}
