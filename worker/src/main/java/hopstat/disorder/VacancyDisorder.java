@@ -25,9 +25,10 @@ import java.util.random.RandomGenerator;
  * removed site then gets the onsite potential U through {@link Model#addOnsitePotential}: U on every
  * orbital of a normal model, ±U on the particle/hole orbitals of a BdG model (which of the two is
  * the particle level depends on the model's potential convention: pip-square and custom models add
- * +U to particles, pwave-wire and ising-chain read V as a chemical-potential/field shift), so
- * particle–hole symmetry survives. Each removed site is thus an exactly decoupled block with levels
- * at ±U only, and the rest of the spectrum is exactly that of the sample with those sites deleted.
+ * +U to particles, pwave-wire reads V as a chemical-potential shift and puts the particle at −U;
+ * ising-chain reads it as a transverse-field shift, which gives ±2U), so particle–hole symmetry
+ * survives. Each removed site is thus an exactly decoupled block with levels at ±U only (±2U on
+ * ising-chain), and the rest of the spectrum is exactly that of the sample with those sites deleted.
  *
  * <p>Rule for U: U = {@value #LEVEL_FACTOR} · R, R the Gershgorin radius max_i Σ_j |H_ij| of the
  * terms present before the removal (triangle-inequality bound, terms summed by absolute value; 1

@@ -214,6 +214,65 @@ class VacancyDisorderTest {
   }
 
   /**
+   * BdG: the vacancy's hole level at −U is occupied at E_F = 0 but is one orbital of one site, so it
+   * commutes with the position operators and leaves the Bott index unchanged. pip-square at μ = 1,
+   * t = Δ = 1 is in the weak-pairing phase with |C| = 1 (Read & Green, PRB 61, 10267 (2000), lattice
+   * version: from memory; checked here only as |bott| = 1 on the clean sample).
+   */
+  @Test
+  void bottIndexOfADilutedBdgSampleIsUnchanged() {
+    Map<String, Double> parameters = Map.of("mu", 1.0, "t", 1.0, "delta", 1.0);
+    PointSpec clean = new PointSpec("pip-square", new ParameterValues(parameters), 10, Boundary.PERIODIC, 0.0, List.of(), List.of("bott"));
+    double cleanBott = run(clean, 1).values().get("bott");
+    assertThat(Math.abs(cleanBott)).isCloseTo(1.0, within(1e-6));
+    PointSpec diluted = new PointSpec("pip-square", new ParameterValues(parameters), 10, Boundary.PERIODIC, 0.0,
+        List.of(new DisorderTerm(VacancyDisorder.NAME, 0.05, Map.of())), List.of("bott"));
+    for (long seed = 1; seed <= 2; seed++) {
+      assertThat(count(replayRemoved(seed, 0, 100, 0.05))).as("sites removed with seed " + seed).isPositive();
+      RealisationResult r = run(diluted, seed);
+      assertThat(r.outcome()).as(String.valueOf(r.failure())).isEqualTo(Outcome.DONE);
+      assertThat(r.values().get("bott")).isCloseTo(cleanBott, within(1e-6));
+    }
+  }
+
+  /**
+   * Class AII: vacancies keep T, so bhz stays AII and its Z2 (spin Chern number mod 2) is unchanged
+   * by weak dilution: odd for 0 &lt; M/B &lt; 8, M/B ≠ 4 (Bernevig, Hughes, Zhang, Science 314, 1757
+   * (2006); mapping to the two-band model derived in REFERENCE.md).
+   */
+  @Test
+  void z2OfWeaklyDilutedBhzStaysOdd() {
+    PointSpec diluted = new PointSpec("bhz", new ParameterValues(Map.of("A", 1.0, "B", 1.0, "M", 2.0, "rashba", 0.0)), 8, Boundary.PERIODIC, 0.0,
+        List.of(new DisorderTerm(VacancyDisorder.NAME, 0.05, Map.of())), List.of("z2"));
+    for (long seed = 1; seed <= 2; seed++) {
+      assertThat(count(replayRemoved(seed, 0, 64, 0.05))).as("sites removed with seed " + seed).isPositive();
+      RealisationResult r = run(diluted, seed);
+      assertThat(r.outcome()).as(String.valueOf(r.failure())).isEqualTo(Outcome.DONE);
+      assertThat(r.values().get("z2")).isEqualTo(1.0);
+    }
+  }
+
+  /**
+   * With a fixed κ the spectral localizer is blind to vacancies: a removed site is a 2 × 2 block
+   * [[U − E, κ x], [κ x, −(U − E)]] of signature 0 (derived). Clean qwz, m = −1: ½ sig L = −C with
+   * centred X, Y (Loring, Ann. Phys. 356, 383 (2015); sign as in REFERENCE.md, κ = 0.05–0.2 worked
+   * at L = 16); the observable reports −½ sig L, i.e. C = +1 (Qi, Wu, Zhang 2006); here κ = 0.1, L = 12.
+   */
+  @Test
+  void localizerIndexWithFixedKappaIgnoresVacancies() {
+    Map<String, Double> parameters = Map.of("m", -1.0, "t", 1.0, "kappa", 0.1);
+    PointSpec clean = new PointSpec("qwz", new ParameterValues(parameters), 12, Boundary.OPEN, 0.0, List.of(), List.of("chern-localizer"));
+    assertThat(run(clean, 1).values().get("chern-localizer")).isEqualTo(1.0);
+    PointSpec diluted = new PointSpec("qwz", new ParameterValues(parameters), 12, Boundary.OPEN, 0.0,
+        List.of(new DisorderTerm(VacancyDisorder.NAME, 0.05, Map.of())), List.of("chern-localizer"));
+    for (long seed = 1; seed <= 2; seed++) {
+      RealisationResult r = run(diluted, seed);
+      assertThat(r.outcome()).as(String.valueOf(r.failure())).isEqualTo(Outcome.DONE);
+      assertThat(r.values().get("chern-localizer")).isEqualTo(1.0);
+    }
+  }
+
+  /**
    * The Bianco–Resta marker is a density per unit cell averaged over all bulk cells, vacancies
    * included (a removed site carries no occupied weight and contributes 0, so the area average is
    * kept). Clean C = +1 (qwz, m = −1; Qi, Wu, Zhang 2006). Measured (this test's setup, L = 16 open,
