@@ -21,6 +21,7 @@ public final class DisorderCatalog {
     m.put(CouplingBoxDisorder.NAME, new CouplingBoxDisorder());
     m.put(PairingBoxDisorder.NAME, new PairingBoxDisorder());
     m.put(BondBoxDisorder.NAME, new BondBoxDisorder());
+    m.put(BondPhaseDisorder.NAME, new BondPhaseDisorder());
     m.put(MajoranaGaussDisorder.NAME, new MajoranaGaussDisorder());
     return Collections.unmodifiableMap(m);
   }
