@@ -22,6 +22,7 @@ public final class DisorderCatalog {
     m.put(PairingBoxDisorder.NAME, new PairingBoxDisorder());
     m.put(BondBoxDisorder.NAME, new BondBoxDisorder());
     m.put(MajoranaGaussDisorder.NAME, new MajoranaGaussDisorder());
+    m.put(ZeemanBoxDisorder.NAME, new ZeemanBoxDisorder());
     return Collections.unmodifiableMap(m);
   }
 
