@@ -23,6 +23,7 @@ public final class DisorderCatalog {
     m.put(BondBoxDisorder.NAME, new BondBoxDisorder());
     m.put(BondPhaseDisorder.NAME, new BondPhaseDisorder());
     m.put(MajoranaGaussDisorder.NAME, new MajoranaGaussDisorder());
+    m.put(ZeemanBoxDisorder.NAME, new ZeemanBoxDisorder());
     return Collections.unmodifiableMap(m);
   }
 
