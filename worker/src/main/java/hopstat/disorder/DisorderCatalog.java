@@ -21,7 +21,9 @@ public final class DisorderCatalog {
     m.put(CouplingBoxDisorder.NAME, new CouplingBoxDisorder());
     m.put(PairingBoxDisorder.NAME, new PairingBoxDisorder());
     m.put(BondBoxDisorder.NAME, new BondBoxDisorder());
+    m.put(BondPhaseDisorder.NAME, new BondPhaseDisorder());
     m.put(MajoranaGaussDisorder.NAME, new MajoranaGaussDisorder());
+    m.put(ZeemanBoxDisorder.NAME, new ZeemanBoxDisorder());
     m.put(VacancyDisorder.NAME, new VacancyDisorder());
     m.put(BondScaleDisorder.NAME, new BondScaleDisorder());
     return Collections.unmodifiableMap(m);

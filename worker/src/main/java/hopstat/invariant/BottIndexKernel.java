@@ -23,7 +23,7 @@ public final class BottIndexKernel {
   private BottIndexKernel() {}
 
   /**
-   * @param lattice read: site positions and extents (directions 0 and 1 are x and y)
+   * @param lattice read: orbital positions ({@link Lattice#orbitalPosition}) and extents (directions 0 and 1 are x and y)
    * @param occupied read, not modified: N × n matrix whose columns are orthonormal occupied states
    * @param workspace scratch
    * @return the index; {@code converged = false} when the eigenvalue routine failed
@@ -62,18 +62,17 @@ public final class BottIndexKernel {
     return new BottIndexResult(phaseSum / (2.0 * Math.PI), smallest, true);
   }
 
-  /** out = Ψ† diag(e^{2πi r_d/extent_d}) Ψ, the projected position unitary along direction d. */
+  /** out = Ψ† diag(e^{2πi r_d/extent_d}) Ψ, the projected position unitary along direction d (r: orbital positions). */
   private static void projectPositionUnitary(Lattice lattice, int d, ZMatrixRMaj psi, BottWorkspace ws, ZMatrixRMaj out) {
     int rows = psi.numRows;
     int cols = psi.numCols;
-    int perSite = lattice.orbitalsPerSite();
     double extent = lattice.extent()[d];
     ZMatrixRMaj phased = ws.phased;
     phased.reshape(rows, cols);
     double[] src = psi.data;
     double[] dst = phased.data;
     for (int i = 0; i < rows; i++) {
-      double angle = 2.0 * Math.PI * lattice.position(d, i / perSite) / extent;
+      double angle = 2.0 * Math.PI * lattice.orbitalPosition(d, i) / extent;
       double c = Math.cos(angle);
       double s = Math.sin(angle);
       int base = 2 * i * cols;

@@ -9,12 +9,14 @@ import org.ejml.data.ZMatrixRMaj;
  *
  * <pre>  c(s) = −4π Im Σ_{o on site s} ⟨s,o| P X Q Y P |s,o⟩,   Q = 1 − P,</pre>
  *
- * with P the projector on the occupied states and X, Y the position operators (in the lattice's
+ * with P the projector on the occupied states and X, Y the position operators of the orbitals
+ * ({@link Lattice#orbitalPosition}: site position plus intra-cell offset, in the lattice's
  * coordinates, in which the unit cell has unit area). The marker per unit cell is c(s) times the
  * site density ρ = sites / (extent_x extent_y); its average over a bulk region far from the edges
  * is the Chern number C in the sign convention of {@link hopstat.model.QwzModel} (checked in
  * tests). Bulk region: the sites whose coordinates lie in the central half of the sample's span in
- * each direction, |x − x_c| ≤ (x_max − x_min)/4 and likewise for y.
+ * each direction, |x − x_c| ≤ (x_max − x_min)/4 and likewise for y, with the span and its centre
+ * x_c taken over the orbital positions (the site span when no offsets are set).
  *
  * <p>With Ψ the N × n occupied states, P X Q Y P = Ψ (Ψ†XYΨ − Ψ†XΨ Ψ†YΨ) Ψ†, so the diagonal costs
  * four N·n² products and one n³ product; positions are centred first (the marker is exactly
@@ -45,10 +47,10 @@ public final class ChernMarkerKernel {
     double[] marker = workspace.siteMarker;
     double[] extent = lattice.extent();
     double density = sites / (extent[0] * extent[1]);
-    double xMin = lattice.minPosition(0);
-    double xMax = lattice.maxPosition(0);
-    double yMin = lattice.minPosition(1);
-    double yMax = lattice.maxPosition(1);
+    double xMin = lattice.minOrbitalPosition(0);
+    double xMax = lattice.maxOrbitalPosition(0);
+    double yMin = lattice.minOrbitalPosition(1);
+    double yMax = lattice.maxOrbitalPosition(1);
     double xc = 0.5 * (xMin + xMax);
     double yc = 0.5 * (yMin + yMax);
     if (n == 0 || n == rows) {
@@ -104,16 +106,15 @@ public final class ChernMarkerKernel {
     return workspace.siteMarker[site];
   }
 
-  /** out = diag(r_d − centre) Ψ. */
+  /** out = diag(r_d − centre) Ψ, r_d the orbital positions. */
   private static void scaleRows(Lattice lattice, int d, double centre, ZMatrixRMaj psi, ZMatrixRMaj out) {
     int rows = psi.numRows;
     int cols = psi.numCols;
-    int perSite = lattice.orbitalsPerSite();
     out.reshape(rows, cols);
     double[] src = psi.data;
     double[] dst = out.data;
     for (int i = 0; i < rows; i++) {
-      double r = lattice.position(d, i / perSite) - centre;
+      double r = lattice.orbitalPosition(d, i) - centre;
       int base = 2 * i * cols;
       for (int j = 0; j < 2 * cols; j++) {
         dst[base + j] = r * src[base + j];

@@ -13,7 +13,8 @@ import hopstat.spectrum.SliceInertiaKernel;
  * <p><b>Definition.</b> In the chiral basis S = diag(1, −1) (orbital 0 = sublattice A, +1;
  * orbital 1 = sublattice B, −1) the Hamiltonian is H = [[0, A], [A†, 0]] and the localizer is
  * L_κ = [[κ(X − x0), A], [A†, −κ(X − x0)]] = H + κ(X − x0)S, X the cell position and x0 the centre
- * of the open chain. This is an N × N Hermitian matrix (no doubling), block tridiagonal cell by cell
+ * of the open chain (the cell coordinate, not the orbital position: as for {@link RealSpaceWindingKernel}
+ * the index is defined relative to the unit cell). This is an N × N Hermitian matrix (no doubling), block tridiagonal cell by cell
  * for nearest-neighbour chains, so its signature comes from {@link SliceInertiaKernel#hamiltonianInertia}
  * (Haynsworth inertia additivity + Bunch–Kaufman LDLᴴ per cell block) applied to the term list of H
  * plus the onsite terms κ(x − x0)·S.

@@ -14,8 +14,8 @@ import java.util.random.RandomGenerator;
  * is estimated stochastically.
  *
  * <p><b>Marker.</b> As in {@link ChernMarkerKernel}: c(s) = −4π ρ Im Σ_{o on s} ⟨s,o|P X Q Y P|s,o⟩,
- * ρ = sites/(extent_x·extent_y) the site density, X, Y the positions centred on the middle of the
- * sample's span, and the result is the mean of c(s) over the bulk sites: the sites with |x − x_c| ≤
+ * ρ = sites/(extent_x·extent_y) the site density, X, Y the orbital positions ({@link
+ * Lattice#orbitalPosition}) centred on the middle of the sample's span of orbital positions, and the result is the mean of c(s) over the bulk sites: the sites with |x − x_c| ≤
  * (x_max − x_min)/4 and |y − y_c| ≤ (y_max − y_min)/4 (the central half in each direction, the same
  * region and sign convention as {@code chern-marker}: C = +1 for qwz with −2 &lt; m &lt; 0).
  *
@@ -118,10 +118,10 @@ public final class KpmChernMarkerKernel {
    */
   public static int bulkOrbitals(Lattice lattice, int[] out) {
     int sites = lattice.sites();
-    double xMin = lattice.minPosition(0);
-    double xMax = lattice.maxPosition(0);
-    double yMin = lattice.minPosition(1);
-    double yMax = lattice.maxPosition(1);
+    double xMin = lattice.minOrbitalPosition(0);
+    double xMax = lattice.maxOrbitalPosition(0);
+    double yMin = lattice.minOrbitalPosition(1);
+    double yMax = lattice.maxOrbitalPosition(1);
     double xc = 0.5 * (xMin + xMax);
     double yc = 0.5 * (yMin + yMax);
     // Same region and tolerance as ChernMarkerKernel (checked in tests).
@@ -160,12 +160,11 @@ public final class KpmChernMarkerKernel {
   private static double probeValue(CsrHermitianMatrix h, Lattice lattice, ChebyshevScale scale, int moments, double[] probe,
       int bulkSites, KpmChernMarkerWorkspace ws) {
     int n = h.dimension();
-    int perSite = lattice.orbitalsPerSite();
     int sites = lattice.sites();
-    double xMin = lattice.minPosition(0);
-    double xMax = lattice.maxPosition(0);
-    double yMin = lattice.minPosition(1);
-    double yMax = lattice.maxPosition(1);
+    double xMin = lattice.minOrbitalPosition(0);
+    double xMax = lattice.maxOrbitalPosition(0);
+    double yMin = lattice.minOrbitalPosition(1);
+    double yMax = lattice.maxOrbitalPosition(1);
     double xc = 0.5 * (xMin + xMax);
     double yc = 0.5 * (yMin + yMax);
     double[] extent = lattice.extent();
@@ -175,7 +174,7 @@ public final class KpmChernMarkerKernel {
     double[] pyv = ws.projectedTwice;
     KpmKernel.applySeries(h, scale, ws.coefficients, moments, probe, v, ws.kpm);
     for (int i = 0; i < n; i++) {
-      double y = lattice.position(1, i / perSite) - yc;
+      double y = lattice.orbitalPosition(1, i) - yc;
       yv[2 * i] = y * v[2 * i];
       yv[2 * i + 1] = y * v[2 * i + 1];
     }
@@ -183,7 +182,7 @@ public final class KpmChernMarkerKernel {
     // Im ⟨v| X (Yv − P̃Yv)⟩
     double im = 0.0;
     for (int i = 0; i < n; i++) {
-      double x = lattice.position(0, i / perSite) - xc;
+      double x = lattice.orbitalPosition(0, i) - xc;
       double wr = x * (yv[2 * i] - pyv[2 * i]);
       double wi = x * (yv[2 * i + 1] - pyv[2 * i + 1]);
       im += v[2 * i] * wi - v[2 * i + 1] * wr;

@@ -21,6 +21,13 @@ import org.ejml.data.ZMatrixRMaj;
  * bonds B_j–A_{j+1}) Q_{AB}[j+1][j] = sgn w and ν = +1 exactly (derived); the trivial dimerisation
  * gives 0. Layout: orbital 0 of each cell is A, orbital 1 is B ({@link hopstat.model.ChiralChain}).
  *
+ * <p><b>X is the cell coordinate</b> ({@link Lattice#position} of the site), not the orbital
+ * position ({@link Lattice#orbitalPosition}), on purpose: the winding is defined relative to the
+ * choice of unit cell. Moving the B orbitals by c inside the cell (X → X + c·P_B) gives [X + cP_B,
+ * Q_{+−}] = [X, Q_{+−}] − c Q_{+−} and, with T{Q_{−+}Q_{+−}} = 1 per cell in a gapped bulk, ν → ν −
+ * c (derived): with true positions the value would not be an integer (ν − 1/2 for B at the cell
+ * middle).
+ *
  * <p>Cost: one L × n × L complex product (n occupied states) plus O(L²).
  */
 public final class RealSpaceWindingKernel {

@@ -84,8 +84,8 @@ public final class SpectralLocalizerKernel {
     double x0 = centre(lattice, 0);
     double y0 = centre(lattice, 1);
     double maxRadius = 0;
-    for (int s = 0; s < lattice.sites(); s++) {
-      maxRadius = Math.max(maxRadius, Math.hypot(lattice.position(0, s) - x0, lattice.position(1, s) - y0));
+    for (int i = 0; i < lattice.orbitals(); i++) {
+      maxRadius = Math.max(maxRadius, Math.hypot(lattice.orbitalPosition(0, i) - x0, lattice.orbitalPosition(1, i) - y0));
     }
     double[] scratch = new double[2 * terms.dimension()];
     double hi = SliceInertiaKernel.gershgorinRadius(terms, scratch) + Math.abs(fermiEnergy) + kappa * maxRadius + 1.0;

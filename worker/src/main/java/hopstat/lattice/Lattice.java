@@ -10,6 +10,15 @@ import java.util.Arrays;
  * {@code extent[d]} is the period of the sample along direction d (used by position unitaries
  * e^{2πi x/extent}); for an open direction it is the span of positions plus one spacing.
  *
+ * <p><b>Orbital positions.</b> Orbital {@code o} of site {@code s} sits at {@link #orbitalPosition}
+ * = {@code positions[d][s] + orbitalOffsets[d][o]}, in the same coordinates as the site positions
+ * (the cell coordinates of the lattice factory; e.g. the oblique coordinates of {@link
+ * HoneycombLattices}). The offsets default to zero (all orbitals of a site at the site position);
+ * custom models set them from the orbitals' fractional positions ({@link #withOrbitalOffsets}).
+ * Position operators of position-based invariants (Bott index, Chern markers, the Chern spectral
+ * localizer) use the orbital positions; the chiral-chain windings deliberately use the cell
+ * position {@link #position} (their X is the unit-cell coordinate, see RealSpaceWindingKernel).
+ *
  * @param dimension spatial dimension, 0..3 (0: a cluster without positions, e.g. a quantum dot)
  * @param linearSize L, the number of unit cells along each direction
  * @param sites number of sites
@@ -17,6 +26,8 @@ import java.util.Arrays;
  * @param positions positions, {@code positions[d][s]}; copied in and out
  * @param extent period along each direction; copied in and out
  * @param boundary boundary condition
+ * @param orbitalOffsets offset of orbital o along direction d, {@code orbitalOffsets[d][o]}, same
+ *     units as the positions; copied in and out
  */
 public record Lattice(
     int dimension,
@@ -25,7 +36,13 @@ public record Lattice(
     int orbitalsPerSite,
     double[][] positions,
     double[] extent,
-    Boundary boundary) {
+    Boundary boundary,
+    double[][] orbitalOffsets) {
+
+  /** A lattice with every orbital at its site position (zero offsets). */
+  public Lattice(int dimension, int linearSize, int sites, int orbitalsPerSite, double[][] positions, double[] extent, Boundary boundary) {
+    this(dimension, linearSize, sites, orbitalsPerSite, positions, extent, boundary, new double[Math.max(dimension, 0)][Math.max(orbitalsPerSite, 0)]);
+  }
 
   public Lattice {
     if (dimension < 0 || dimension > 3) {
@@ -46,6 +63,83 @@ public record Lattice(
     }
     positions = copy;
     extent = extent.clone();
+    if (orbitalOffsets.length != dimension) {
+      throw new IllegalArgumentException("orbitalOffsets must have one row per dimension");
+    }
+    double[][] offsets = new double[dimension][];
+    for (int d = 0; d < dimension; d++) {
+      if (orbitalOffsets[d].length != orbitalsPerSite) {
+        throw new IllegalArgumentException("orbitalOffsets[" + d + "] must have one entry per orbital of a site");
+      }
+      for (double x : orbitalOffsets[d]) {
+        if (!Double.isFinite(x)) {
+          throw new IllegalArgumentException("orbital offsets must be finite: " + x);
+        }
+      }
+      offsets[d] = orbitalOffsets[d].clone();
+    }
+    orbitalOffsets = offsets;
+  }
+
+  /**
+   * The same lattice with these orbital offsets.
+   *
+   * @param offsets {@code offsets[d][o]}, one row per dimension, one entry per orbital of a site; copied
+   */
+  public Lattice withOrbitalOffsets(double[][] offsets) {
+    return new Lattice(dimension, linearSize, sites, orbitalsPerSite, positions, extent, boundary, offsets);
+  }
+
+  /** Offset of orbital {@code orbital} (0 ≤ orbital &lt; orbitalsPerSite) from its site along d. */
+  public double orbitalOffset(int d, int orbital) {
+    return orbitalOffsets[d][orbital];
+  }
+
+  /** True if some orbital is displaced from its site position. */
+  public boolean hasOrbitalOffsets() {
+    for (double[] row : orbitalOffsets) {
+      for (double x : row) {
+        if (x != 0.0) {
+          return true;
+        }
+      }
+    }
+    return false;
+  }
+
+  /**
+   * Position along d of the orbital with this matrix index (site = index / orbitalsPerSite,
+   * orbital = index % orbitalsPerSite): site position plus orbital offset. Allocates nothing.
+   */
+  public double orbitalPosition(int d, int matrixIndex) {
+    return positions[d][matrixIndex / orbitalsPerSite] + orbitalOffsets[d][matrixIndex % orbitalsPerSite];
+  }
+
+  /** Smallest orbital position along d (= {@link #minPosition} plus the smallest offset). */
+  public double minOrbitalPosition(int d) {
+    double min = Double.POSITIVE_INFINITY;
+    for (double x : orbitalOffsets[d]) {
+      min = Math.min(min, x);
+    }
+    return minPosition(d) + min;
+  }
+
+  /** Largest orbital position along d (= {@link #maxPosition} plus the largest offset). */
+  public double maxOrbitalPosition(int d) {
+    double max = Double.NEGATIVE_INFINITY;
+    for (double x : orbitalOffsets[d]) {
+      max = Math.max(max, x);
+    }
+    return maxPosition(d) + max;
+  }
+
+  @Override
+  public double[][] orbitalOffsets() {
+    double[][] copy = new double[dimension][];
+    for (int d = 0; d < dimension; d++) {
+      copy[d] = orbitalOffsets[d].clone();
+    }
+    return copy;
   }
 
   /** Matrix dimension: sites × orbitals per site. */
@@ -53,7 +147,7 @@ public record Lattice(
     return sites * orbitalsPerSite;
   }
 
-  /** Position of site {@code s} along direction {@code d}. */
+  /** Position of site (cell) {@code s} along direction {@code d}; see {@link #orbitalPosition} for an orbital's. */
   public double position(int d, int s) {
     return positions[d][s];
   }
@@ -112,7 +206,8 @@ public record Lattice(
         && orbitalsPerSite == l.orbitalsPerSite
         && boundary == l.boundary
         && Arrays.deepEquals(positions, l.positions)
-        && Arrays.equals(extent, l.extent);
+        && Arrays.equals(extent, l.extent)
+        && Arrays.deepEquals(orbitalOffsets, l.orbitalOffsets);
   }
 
   @Override

@@ -62,9 +62,27 @@ public final class CustomModel implements Model {
     return list;
   }
 
+  /**
+   * The L^d grid of cells (cell coordinates, extent L) with each orbital at its declared position:
+   * {@link Lattice#orbitalPosition} = cell coordinate + the orbital's fractional position, so the
+   * position operators of the Bott index and the Chern markers see the intra-cell geometry. In
+   * Nambu form the hole copy of orbital k sits where orbital k sits. An orbital without a position
+   * sits at the cell origin.
+   */
   @Override
   public Lattice lattice(int linearSize, Boundary boundary) {
-    return CubicLattices.hypercubic(definition.dimension(), linearSize, definition.orbitalsPerCell(), boundary);
+    Lattice cells = CubicLattices.hypercubic(definition.dimension(), linearSize, definition.orbitalsPerCell(), boundary);
+    int d = definition.dimension();
+    int n = definition.orbitals().size();
+    int o = definition.orbitalsPerCell();
+    double[][] offsets = new double[d][o];
+    for (int k = 0; k < o; k++) {
+      List<Double> position = definition.orbitals().get(k % n).position();
+      for (int axis = 0; axis < d && axis < position.size(); axis++) {
+        offsets[axis][k] = position.get(axis);
+      }
+    }
+    return cells.withOrbitalOffsets(offsets);
   }
 
   @Override

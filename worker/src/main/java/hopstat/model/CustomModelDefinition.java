@@ -20,7 +20,7 @@ import java.util.Set;
  * offsets modulo L.
  *
  * @param dimension d = 1..3
- * @param vectors d lattice vectors of length d (recorded; observables use cell coordinates)
+ * @param vectors d lattice vectors of length d (recorded; observables use cell (fractional) coordinates)
  * @param orbitals the orbitals of one cell, in matrix order
  * @param onsite onsite energies (real per orbital)
  * @param hoppings hopping terms, each standing for itself plus its Hermitian conjugate
@@ -65,7 +65,12 @@ public record CustomModelDefinition(
     }
   }
 
-  /** One orbital of the unit cell; position in fractional coordinates (recorded, length d). */
+  /**
+   * One orbital of the unit cell; position in fractional coordinates (length d). The position
+   * operators of the Bott index, the Chern markers and the Chern localizer place the orbital at
+   * cell coordinate + position ({@link hopstat.lattice.Lattice#orbitalPosition}); the chain
+   * windings use the cell coordinate alone (they are defined relative to the unit cell).
+   */
   public record Orbital(String name, List<Double> position) {
     public Orbital {
       Objects.requireNonNull(name, "name");

@@ -83,7 +83,9 @@ public final class MajoranaOps {
 
   /**
    * A = −2i W† H_BdG W of the realised terms; on a periodic chain (L ≥ 3) the closing-bond terms
-   * are multiplied by {@code closurePhase}.
+   * are multiplied by {@code closurePhase}. A site may hold several fermions, each as a Nambu pair
+   * (orbitals 2f, 2f+1 = c_f, c†_f, e.g. spinful chains); W acts on each pair, so Majorana 2f is
+   * a_f and 2f+1 is b_f of fermion f = orbital index / 2.
    *
    * @param lattice read
    * @param terms read
@@ -96,8 +98,9 @@ public final class MajoranaOps {
     if (closurePhase != 1 && closurePhase != -1) {
       throw new IllegalArgumentException("closure phase must be +1 or -1: " + closurePhase);
     }
-    if (lattice.orbitalsPerSite() != 2 || terms.dimension() != lattice.orbitals()) {
-      throw new IllegalArgumentException("Majorana form needs 2 Nambu orbitals per site and a matching builder");
+    int o = lattice.orbitalsPerSite();
+    if (o % 2 != 0 || terms.dimension() != lattice.orbitals()) {
+      throw new IllegalArgumentException("Majorana form needs Nambu pairs (an even number of orbitals per site) and a matching builder");
     }
     boolean ring = lattice.dimension() == 1 && lattice.boundary() == Boundary.PERIODIC;
     if (ring && closurePhase == -1 && lattice.linearSize() < 3) {
@@ -113,7 +116,7 @@ public final class MajoranaOps {
       int q = terms.column(k);
       double zr = terms.realPart(k);
       double zi = terms.imaginaryPart(k);
-      if (ring && closurePhase == -1 && ChainLattices.isClosingBond(lattice, p / 2, q / 2)) {
+      if (ring && closurePhase == -1 && ChainLattices.isClosingBond(lattice, p / o, q / o)) {
         zr = -zr;
         zi = -zi;
       }

@@ -21,6 +21,7 @@ public final class ModelCatalog {
     register(m, new PipSquareModel());
     register(m, new BhzModel());
     register(m, new PWaveWireModel());
+    register(m, new DiiiWireModel());
     register(m, new IsingChainModel());
     register(m, new SshModel());
     register(m, new MajoranaClusterModel());

@@ -12,8 +12,9 @@ import java.util.List;
  * <pre>  H = Σ_j [ v c†_{A,j} c_{B,j} + w c†_{B,j} c_{A,j+1} + h.c. ]</pre>
  *
  * v intracell, w intercell; orbital 0 = A, orbital 1 = B (see {@link ChiralChain}). Sublattice
- * symmetry S = diag(+1 on A, −1 on B); with real hoppings also T = K, hence class BDI (complex
- * hoppings, not offered here, would give AIII). Clean winding ν = 1 iff |v| &lt; |w|, else 0, with
+ * symmetry S = diag(+1 on A, −1 on B); with real hoppings also T = K, hence class BDI. Complex
+ * hoppings (class AIII) come from the {@code bond-phase} disorder: the declared class of a model is
+ * fixed, and uniform clean phases on the open chain would be a pure gauge. Clean winding ν = 1 iff |v| &lt; |w|, else 0, with
  * the sign convention of the {@code winding} observable. An onsite potential is a scalar (same
  * value on A and B) and breaks the chiral symmetry.
  */
@@ -29,7 +30,7 @@ public final class SshModel implements Model, ChiralChain {
   @Override
   public String description() {
     return "Su-Schrieffer-Heeger chain (Su, Schrieffer, Heeger, PRL 42, 1698 (1979)), real hoppings:"
-        + " H = sum_j [v c+_Aj c_Bj + w c+_Bj c_Aj+1 + h.c.], orbital 0 = A, 1 = B; class BDI (AIII if complex, not offered)."
+        + " H = sum_j [v c+_Aj c_Bj + w c+_Bj c_Aj+1 + h.c.], orbital 0 = A, 1 = B; class BDI (AIII realisations with bond-phase disorder)."
         + " Clean winding 1 iff |v| < |w|.";
   }
 
@@ -37,6 +38,22 @@ public final class SshModel implements Model, ChiralChain {
   public SymmetryClass symmetryClass() {
     return SymmetryClass.BDI;
   }
+
+  /**
+   * T = K, C = S·K and S = diag(1, −1) on (A, B) of every cell (BDI with T² = C² = +1): a real
+   * Hamiltonian with A–B hoppings only satisfies all three; an onsite term breaks C and S, a
+   * complex hopping ({@code bond-phase}) breaks T and C.
+   */
+  @Override
+  public SymmetryOperators symmetryOperators() {
+    return lattice -> OPERATORS;
+  }
+
+  private static final double[][] ZERO = {{0, 0}, {0, 0}};
+  private static final List<SymmetryOperator> OPERATORS = List.of(
+      SymmetryOperator.local(Symmetry.TIME_REVERSAL, new double[][] {{1, 0}, {0, 1}}, ZERO),
+      SymmetryOperator.local(Symmetry.PARTICLE_HOLE, new double[][] {{1, 0}, {0, -1}}, ZERO),
+      SymmetryOperator.local(Symmetry.CHIRAL, new double[][] {{1, 0}, {0, -1}}, ZERO));
 
   @Override
   public int dimension() {

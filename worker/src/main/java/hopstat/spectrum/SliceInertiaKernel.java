@@ -25,7 +25,7 @@ import org.ejml.data.ZMatrixRMaj;
  *
  * <p><b>Localizer.</b> With {@code doubled}, M is L_κ − δ = [[H − E, κ(X − x0 − i(Y − y0))], [κ(X −
  * x0 + i(Y − y0)), −(H − E)]] − δ (Loring, Ann. Phys. 356, 383 (2015)), each orbital carrying two
- * localizer components, both in its slice. X, Y are the site positions (d ≥ 2; for d = 1 Y = 0).
+ * localizer components, both in its slice. X, Y are the orbital positions ({@link Lattice#orbitalPosition}; d ≥ 2; for d = 1 Y = 0).
  *
  * <p>Cost O(Σ_g n_g³) ≈ L · n_slice³ (factorisation n³/3 plus the solve with n_{g+1} right-hand
  * sides ≈ n³ complex multiply–adds per slice); memory O(n_slice²) plus O(N) integers. Only valid
@@ -264,7 +264,6 @@ public final class SliceInertiaKernel {
         }
       }
     }
-    int per = lattice.orbitalsPerSite();
     int n = terms.dimension();
     // Diagonal shifts and the position terms, orbital by orbital of this group.
     for (int i = 0; i < n; i++) {
@@ -278,9 +277,9 @@ public final class SliceInertiaKernel {
       }
       a[li * stride + 2 * li] -= energy + shift;
       a[(li + 1) * stride + 2 * (li + 1)] += energy - shift;
-      int site = i / per;
-      double dx = kappa * (lattice.position(0, site) - x0);
-      double dy = lattice.dimension() >= 2 ? kappa * (lattice.position(1, site) - y0) : 0.0;
+      // Orbital positions (site position + intra-cell offset); the slices stay whole sites.
+      double dx = kappa * (lattice.orbitalPosition(0, i) - x0);
+      double dy = lattice.dimension() >= 2 ? kappa * (lattice.orbitalPosition(1, i) - y0) : 0.0;
       // upper-right κ(X − iY), lower-left κ(X + iY)
       int ur = li * stride + 2 * (li + 1);
       a[ur] += dx;

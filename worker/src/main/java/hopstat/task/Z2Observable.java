@@ -15,7 +15,9 @@ import java.util.Optional;
  * {@code z2}: the one Z2 invariant name for every class, 0 trivial, 1 non-trivial, so its mean over
  * realisations is the fraction of non-trivial samples. Dispatches on dimension and effective class:
  * one-dimensional BdG chains with C² = +1 (classes D, BDI; {@link MajoranaForm} models): the
- * Majorana number (Kitaev, Phys.-Usp. 44, 131 (2001)); class AII in d = 2: {@link Z2ClassAii2d}.
+ * Majorana number (Kitaev, Phys.-Usp. 44, 131 (2001)); class DIII in d = 1: {@link Z2ClassDiii1d}
+ * (checked before the Majorana number, which is always trivial with Kramers pairs); class AII in
+ * d = 2: {@link Z2ClassAii2d}.
  * Eigenvectors are computed only on the AII path (the context computes them on demand).
  */
 final class Z2Observable implements Observable {
@@ -32,12 +34,14 @@ final class Z2Observable implements Observable {
     return "Z2 invariant, 0 trivial / 1 non-trivial (mean = fraction non-trivial). d = 1 BdG chains (classes D, BDI):"
         + " Majorana number Q = sign Pf(A_periodic) sign Pf(A_antiperiodic) of the closed ring (Kitaev, Phys.-Usp. 44, 131"
         + " (2001)), z2 = 1 iff Q = -1; needs boundary periodic and L >= 3. ising-chain: z2 = 1 is the ordered phase."
-        + " A zero Pfaffian (zero mode under one closure) fails the realisation. " + Z2ClassAii2d.description();
+        + " A zero Pfaffian (zero mode under one closure) fails the realisation. " + Z2ClassDiii1d.description() + " "
+        + Z2ClassAii2d.description();
   }
 
   @Override
   public List<Quantity> quantities() {
-    return List.of(new Quantity("z2", true, "1", "Z2 invariant: 0 trivial, 1 non-trivial (d = 1 BdG chains: Majorana number Q = -1; class AII d = 2: spin Chern number mod 2)"));
+    return List.of(new Quantity("z2", true, "1", "Z2 invariant: 0 trivial, 1 non-trivial (d = 1 BdG chains: Majorana number Q = -1; class DIII d = 1: Kramers pairs of"
+        + " Majorana end modes; class AII d = 2: spin Chern number mod 2)"));
   }
 
   @Override
@@ -50,8 +54,12 @@ final class Z2Observable implements Observable {
     if (effectiveClass == SymmetryClass.AII && model.dimension() == 2) {
       return Z2ClassAii2d.whyNotApplicable(model, boundary);
     }
+    if (effectiveClass == SymmetryClass.DIII && model.dimension() == 1) {
+      return Z2ClassDiii1d.whyNotApplicable(model, boundary);
+    }
     if (!(model instanceof MajoranaForm) || model.dimension() != 1) {
-      return Optional.of("z2 is implemented for one-dimensional BdG chains in Majorana form (pwave-wire, ising-chain); "
+      return Optional.of("z2 is implemented for one-dimensional BdG chains in Majorana form (pwave-wire, ising-chain, diii-wire), class DIII"
+          + " chains and class AII in d = 2; "
           + model.name() + " is not one");
     }
     if (effectiveClass.particleHoleSquare() != 1) {
@@ -69,6 +77,10 @@ final class Z2Observable implements Observable {
     Model model = context.model();
     if (model.dimension() == 2 && SymmetryCheckOps.effectiveClass(model, context.point().disorder()) == SymmetryClass.AII) {
       Z2ClassAii2d.compute(context, out);
+      return;
+    }
+    if (model.dimension() == 1 && SymmetryCheckOps.effectiveClass(model, context.point().disorder()) == SymmetryClass.DIII) {
+      Z2ClassDiii1d.compute(context, out);
       return;
     }
     if (context.lattice().linearSize() < 3) {

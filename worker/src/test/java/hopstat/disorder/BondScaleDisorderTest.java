@@ -219,8 +219,15 @@ class BondScaleDisorderTest {
     assertThat(pip.effectiveClass()).isEqualTo(SymmetryClass.D);
     assertThat(pip.checks()).isNotEmpty();
     assertThat(pip.violations()).isEmpty();
-    assertThat(SymmetryCheckOps.effectiveClass(ModelCatalog.find("ssh").orElseThrow(),
-        List.of(new DisorderTerm(BondScaleDisorder.NAME, 1.0, Map.of())))).isEqualTo(SymmetryClass.BDI);
+    List<DisorderTerm> scale = List.of(new DisorderTerm(BondScaleDisorder.NAME, 1.0, Map.of()));
+    SymmetryCheckReport sshCheck = SymmetryCheckOps.check(new PointSpec("ssh", new ParameterValues(Map.of("v", 0.5, "w", 1.0)),
+        8, Boundary.OPEN, 0.0, scale, List.of()), 3L, SymmetryCheckKernel.TOLERANCE);
+    assertThat(sshCheck.effectiveClass()).isEqualTo(SymmetryClass.BDI);
+    assertThat(sshCheck.violations()).isEmpty();
+    SymmetryCheckReport diii = SymmetryCheckOps.check(new PointSpec("diii-wire", new ParameterValues(Map.of("mu", 0.5, "t", 1.0, "delta", 1.0, "lambda", 0.3)),
+        8, Boundary.PERIODIC, 0.0, scale, List.of()), 3L, SymmetryCheckKernel.TOLERANCE);
+    assertThat(diii.effectiveClass()).isEqualTo(SymmetryClass.DIII);
+    assertThat(diii.violations()).isEmpty();
     ZMatrixRMaj ssh = dense(aRealisation("ssh").with("v", 0.5).with("w", 1.0).size(6).boundary(Boundary.OPEN)
         .disorder(BondScaleDisorder.NAME, 0.8).seed(2).build());
     for (int j = 0; j < 6; j++) {

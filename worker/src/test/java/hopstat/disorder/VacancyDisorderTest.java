@@ -336,7 +336,15 @@ class VacancyDisorderTest {
     assertThat(bhz.effectiveClass()).isEqualTo(SymmetryClass.AII);
     assertThat(bhz.checks()).extracting(SymmetryCheckResult::symmetry).containsExactly(Symmetry.TIME_REVERSAL);
     assertThat(bhz.violations()).isEmpty();
-    assertThat(SymmetryCheckOps.effectiveClass(ModelCatalog.find("ssh").orElseThrow(), vacancies)).isEqualTo(SymmetryClass.AI);
+    SymmetryCheckReport diii = SymmetryCheckOps.check(new PointSpec("diii-wire", new ParameterValues(Map.of("mu", 0.5, "t", 1.0, "delta", 1.0, "lambda", 0.3)),
+        12, Boundary.PERIODIC, 0.0, vacancies, List.of()), 7L, SymmetryCheckKernel.TOLERANCE);
+    assertThat(diii.effectiveClass()).isEqualTo(SymmetryClass.DIII);
+    assertThat(diii.violations()).isEmpty();
+    assertThat(diii.undeclared()).isEmpty();
+    SymmetryCheckReport ssh = SymmetryCheckOps.check(new PointSpec("ssh", new ParameterValues(Map.of("v", 0.5, "w", 1.0)),
+        12, Boundary.OPEN, 0.0, vacancies, List.of()), 7L, SymmetryCheckKernel.TOLERANCE);
+    assertThat(ssh.effectiveClass()).isEqualTo(SymmetryClass.AI);
+    assertThat(ssh.violations()).isEmpty();
     assertThat(SymmetryCheckOps.effectiveClass(ModelCatalog.find("pwave-wire").orElseThrow(), vacancies)).isEqualTo(SymmetryClass.BDI);
   }
 

@@ -1,0 +1,18 @@
+package hopstat.linalg;
+
+/**
+ * Scratch for {@link ComplexPfaffianKernel}: an interleaved (re, im) copy of the matrix that the
+ * elimination overwrites. Grows to the largest dimension seen, never shrinks. One per worker
+ * thread; not thread-safe.
+ */
+public final class ComplexPfaffianWorkspace {
+
+  double[] work = new double[8];
+
+  /** Makes room for an n × n complex matrix. */
+  void ensure(int n) {
+    if (work.length < 2 * n * n) {
+      work = new double[2 * n * n];
+    }
+  }
+}
