@@ -31,14 +31,15 @@ import org.ejml.data.ZMatrixRMaj;
  *       keeping only the sites with transverse cell coordinates &lt; M. An open sample cut to a
  *       smaller box is the open sample of that box, so this is exact.
  *   <li>periodic cross-section: a periodic sample of L_ref = the smallest multiple of M that is ≥
- *       {@value #REFERENCE_SLICES}, folded transversally modulo M: every matrix entry whose column
+ *       {@value #REFERENCE_SLICES} and ≥ 2M, folded transversally modulo M: every matrix entry whose column
  *       lies in the cells 0 ≤ x &lt; M is kept, its row's transverse coordinates taken modulo M (the
  *       Bloch fold at transverse momentum 0 of the L_ref torus onto the M torus). For M ≥ 3 this is
  *       the model's own periodic sample of width M; for M ≤ 2 hoppings that wrap onto the same pair
  *       of cells add up (so e.g. the M = 2 anderson strip would get a doubled transverse bond).
  *       The clean model must be periodic with period M across the bar (e.g. flux-square needs q |
- *       M, which its validation already demands on periodic samples); a fold that is not Hermitian
- *       is rejected.
+ *       M, which its validation already demands on periodic samples): the blocks read from the
+ *       copy of the strip shifted by M along each transverse direction must equal those of the
+ *       first copy, else the cut is rejected.
  * </ul>
  *
  * H and T are read from the entries whose column lies in slice 1 (on-slice: row in slice 1;
@@ -108,7 +109,7 @@ public final class BarSliceOps {
     int m = d == 1 ? 1 : crossSection;
     boolean periodic = d > 1 && boundary == Boundary.PERIODIC;
     int lRef = d == 1 ? REFERENCE_SLICES
-        : periodic ? m * ((REFERENCE_SLICES + m - 1) / m) : Math.max(m, REFERENCE_SLICES);
+        : periodic ? m * Math.max(2, (REFERENCE_SLICES + m - 1) / m) : Math.max(m, REFERENCE_SLICES);
     Boundary refBoundary = periodic ? Boundary.PERIODIC : Boundary.OPEN;
     Lattice ref = model.lattice(lRef, refBoundary);
     if (ref.dimension() != d) {
@@ -132,6 +133,8 @@ public final class BarSliceOps {
     int[] slice = new int[sites];
     int[] local = new int[sites];
     boolean[] inDomain = new boolean[sites];
+    // periodic fold: which transverse copy of the strip a site lies in (-1: none of those read)
+    int[] copy = new int[sites];
     int[] ordinal = new int[(int) cells];
     int transverseCells = 1;
     for (int k = 0; k < d - 1; k++) {
@@ -145,6 +148,8 @@ public final class BarSliceOps {
       int transverse = 0;
       int tStride = 1;
       boolean in = true;
+      int shiftedAlong = -1;
+      int shifts = 0;
       for (int k = 0; k < d; k++) {
         int c = (int) Math.floor(ref.position(k, s) + 1e-9);
         if (c < 0 || c >= lRef) {
@@ -156,6 +161,10 @@ public final class BarSliceOps {
           slice[s] = c;
         } else {
           in &= c < m;
+          if (c >= m) {
+            shifts++;
+            shiftedAlong = c < 2 * m ? k : -2;
+          }
           transverse += (c % m) * tStride;
           tStride *= m;
         }
@@ -165,6 +174,7 @@ public final class BarSliceOps {
         throw new IllegalArgumentException(model.name() + ": cells hold different numbers of sites; cannot cut it into slices");
       }
       inDomain[s] = in;
+      copy[s] = in ? 0 : shifts == 1 && shiftedAlong >= 0 ? 1 + shiftedAlong : -1;
       local[s] = transverse * perCell + o;
       if (in && slice[s] == 1) {
         for (int k = 0; k < d; k++) {
@@ -174,16 +184,22 @@ public final class BarSliceOps {
     }
     // Blocks read at slices 1 and 2: h[0], t[0] from slice 1, h[1], t[1] from slice 2.
     int kk = sliceSites * orbs;
-    ZMatrixRMaj[] h = {new ZMatrixRMaj(kk, kk), new ZMatrixRMaj(kk, kk)};
-    ZMatrixRMaj[] t = {new ZMatrixRMaj(kk, kk), new ZMatrixRMaj(kk, kk)};
+    // variants: 0 = slice 1, 1 = slice 2, 2 + k = slice 1 of the strip copy shifted by M along transverse direction k (periodic)
+    int variants = 2 + (periodic ? d - 1 : 0);
+    ZMatrixRMaj[] h = new ZMatrixRMaj[variants];
+    ZMatrixRMaj[] t = new ZMatrixRMaj[variants];
+    for (int v = 0; v < variants; v++) {
+      h[v] = new ZMatrixRMaj(kk, kk);
+      t[v] = new ZMatrixRMaj(kk, kk);
+    }
     for (int term = 0; term < clean.termCount(); term++) {
       int i = clean.row(term);
       int j = clean.column(term);
       double re = clean.realPart(term);
       double im = clean.imaginaryPart(term);
-      addEntry(model, i, j, re, im, orbs, lRef, periodic, slice, local, inDomain, h, t);
+      addEntry(model, i, j, re, im, orbs, lRef, periodic, slice, local, inDomain, copy, h, t);
       if (i != j) {
-        addEntry(model, j, i, re, -im, orbs, lRef, periodic, slice, local, inDomain, h, t);
+        addEntry(model, j, i, re, -im, orbs, lRef, periodic, slice, local, inDomain, copy, h, t);
       }
     }
     double scale = Math.max(maxAbs(h[0]), maxAbs(t[0]));
@@ -191,6 +207,12 @@ public final class BarSliceOps {
     if (maxDifference(h[0], h[1]) > tol || maxDifference(t[0], t[1]) > tol) {
       throw new IllegalArgumentException(model.name() + ": the clean Hamiltonian is not translation invariant along the bar"
           + " (its last lattice direction), so it has no single slice form");
+    }
+    for (int v = 2; v < variants; v++) {
+      if (maxDifference(h[0], h[v]) > tol || maxDifference(t[0], t[v]) > tol) {
+        throw new IllegalArgumentException(model.name() + ": the clean Hamiltonian is not periodic with period M = " + m
+            + " across the bar, so the periodic cross-section is not defined");
+      }
     }
     if (hermiticityDefect(h[0]) > tol) {
       throw new IllegalArgumentException(model.name() + ": the clean Hamiltonian is not periodic with period M = " + m
@@ -211,7 +233,7 @@ public final class BarSliceOps {
    * modulo M).
    */
   private static void addEntry(Model model, int row, int col, double re, double im, int orbs, int lRef, boolean periodic,
-      int[] slice, int[] local, boolean[] inDomain, ZMatrixRMaj[] h, ZMatrixRMaj[] t) {
+      int[] slice, int[] local, boolean[] inDomain, int[] copy, ZMatrixRMaj[] h, ZMatrixRMaj[] t) {
     int sr = row / orbs;
     int sc = col / orbs;
     int distance = slice[sr] - slice[sc];
@@ -225,11 +247,18 @@ public final class BarSliceOps {
       throw new IllegalArgumentException(model.name() + ": a term couples slices " + Math.abs(distance) + " apart along the bar;"
           + " the transfer-matrix bar needs couplings between neighbouring slices only");
     }
-    if (distance < 0 || !inDomain[sc] || !(periodic || inDomain[sr])) {
+    if (distance < 0 || !(periodic || inDomain[sr])) {
       return;
     }
-    int block = slice[sc] - 1;
-    if (block != 0 && block != 1) {
+    int block;
+    if (inDomain[sc]) {
+      block = slice[sc] - 1;
+      if (block != 0 && block != 1) {
+        return;
+      }
+    } else if (periodic && copy[sc] > 0 && slice[sc] == 1) {
+      block = 1 + copy[sc];
+    } else {
       return;
     }
     ZMatrixRMaj target = distance == 0 ? h[block] : t[block];
