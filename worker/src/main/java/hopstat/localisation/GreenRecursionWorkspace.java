@@ -15,8 +15,9 @@ import org.ejml.data.ZMatrixRMaj;
  * One per worker thread.
  *
  * <p>Backend: slices of K ≤ {@link #SMALL_SLICE} orbitals use the pure-Java solver and products
- * whatever {@code linalg} is, because each call crosses JNI and copies its operands, a fixed cost
- * that dominates 2 × 2 or 4 × 4 blocks; larger slices use {@code linalg}'s kind.
+ * whatever {@code linalg} is, because each native call crosses JNI and copies its operands, a fixed
+ * cost expected to dominate 2 × 2 or 4 × 4 blocks; larger slices use {@code linalg}'s kind. The
+ * threshold is a design guess, not yet backed by a benchmark.
  */
 public final class GreenRecursionWorkspace {
 
