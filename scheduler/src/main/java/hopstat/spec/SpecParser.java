@@ -165,7 +165,7 @@ public final class SpecParser {
       if (model != null) {
         effective = effectiveClass(model, disorder);
         parameters = checkParameters(model, observables, disorder, parameters);
-        checkObservables(model, boundary, effective, observables);
+        checkObservables(model, boundary, effective, observables, disorder.stream().map(DisorderSpec::type).toList());
       }
       problems.throwIfAny();
       return new JobSpec(name, description, seed, modelName, parameters, disorder, boundary,
@@ -632,7 +632,7 @@ public final class SpecParser {
       return all;
     }
 
-    private void checkObservables(Model model, Boundary boundary, SymmetryClass effective, List<Observable> observables) {
+    private void checkObservables(Model model, Boundary boundary, SymmetryClass effective, List<Observable> observables, List<String> disorderTypes) {
       JsonNode list = root.get("observables");
       for (Observable o : observables) {
         int index = 0;
@@ -642,7 +642,7 @@ public final class SpecParser {
           }
         }
         String path = "observables[" + index + "]";
-        o.whyNotApplicable(model, boundary, effective).ifPresent(reason -> problems.add(path, o.name(), reason));
+        o.whyNotApplicable(model, boundary, effective, disorderTypes).ifPresent(reason -> problems.add(path, o.name(), reason));
       }
     }
   }
