@@ -166,7 +166,7 @@ public final class SpecParser {
       if (model != null) {
         effective = effectiveClass(model, disorder);
         parameters = checkParameters(model, observables, disorder, parameters);
-        checkObservables(model, boundary, effective, observables);
+        checkObservables(model, boundary, effective, observables, disorder.stream().map(DisorderSpec::type).toList());
         checkObservablesWithDisorder(observables, disorder, parameters);
       }
       problems.throwIfAny();
@@ -680,7 +680,7 @@ public final class SpecParser {
       }
     }
 
-    private void checkObservables(Model model, Boundary boundary, SymmetryClass effective, List<Observable> observables) {
+    private void checkObservables(Model model, Boundary boundary, SymmetryClass effective, List<Observable> observables, List<String> disorderTypes) {
       JsonNode list = root.get("observables");
       for (Observable o : observables) {
         int index = 0;
@@ -690,7 +690,7 @@ public final class SpecParser {
           }
         }
         String path = "observables[" + index + "]";
-        o.whyNotApplicable(model, boundary, effective).ifPresent(reason -> problems.add(path, o.name(), reason));
+        o.whyNotApplicable(model, boundary, effective, disorderTypes).ifPresent(reason -> problems.add(path, o.name(), reason));
       }
     }
   }

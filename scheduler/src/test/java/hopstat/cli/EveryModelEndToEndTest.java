@@ -57,6 +57,11 @@ class EveryModelEndToEndTest {
         study("pwave-wire", """
             "model":"pwave-wire","parameters":{"mu":0.5,"delta":0.7,"W":0.5,"L":12},"disorder":[{"type":"onsite-box","strength":"W"}],
             "boundary":"periodic","observables":["gap","z2"]""", "z2", 1),
+        // Kitaev, Phys.-Usp. 44, 131 (2001); Qi, Hughes, Zhang, PRB 81, 134508 (2010): the Kramers pair of
+        // Kitaev chains is DIII-non-trivial iff |mu| < 2|t| (|lambda| < |delta| keeps it gapped).
+        study("diii-wire", """
+            "model":"diii-wire","parameters":{"mu":0.5,"lambda":0.3,"W":0.5,"L":12},"disorder":[{"type":"onsite-box","strength":"W"}],
+            "boundary":"periodic","observables":["gap","z2"]""", "z2", 1),
         // Pfeuty, Ann. Phys. 57, 79 (1970): ordered iff |h| < |J|.
         study("ising-chain", """
             "model":"ising-chain","parameters":{"h":0.5,"W":0.3,"L":12},"disorder":[{"type":"field-box","strength":"W"}],

@@ -18,7 +18,7 @@ import java.util.random.RandomGenerator;
  * within cell j first the intracell bond, then the intercell bond j (if it exists). Only A–B
  * hoppings change, so chiral symmetry is kept, and real values keep T: all of BDI survives.
  */
-public final class BondBoxDisorder implements DisorderKind {
+public final class BondBoxDisorder implements DisorderKind, SliceDisorder {
 
   public static final String NAME = "bond-box";
 
@@ -64,6 +64,28 @@ public final class BondBoxDisorder implements DisorderKind {
       if (inter && j < intercellBonds) {
         chain.addIntercellShift(lattice, j, w * (random.nextDouble() - 0.5), out);
       }
+    }
+  }
+
+  /**
+   * Slice n = cell n of the chain, draws in the order of {@link #apply}: the intracell bond of cell
+   * n, then the intercell bond n (cell n → n+1), each if selected.
+   */
+  @Override
+  public Optional<String> whyNotSliceable(Model model) {
+    return model.dimension() == 1 ? Optional.empty() : Optional.of(NAME + " is drawn slice by slice only on a chain");
+  }
+
+  @Override
+  public void applyToSlice(DisorderTerm term, Model model, ParameterValues parameters, Lattice window, int sliceSites, RandomGenerator random, HamiltonianBuilder out) {
+    ChiralChain chain = (ChiralChain) model;
+    String bonds = term.options().getOrDefault("bonds", "all");
+    double w = term.strength();
+    if (!"intercell".equals(bonds)) {
+      chain.addIntracellShift(window, 0, w * (random.nextDouble() - 0.5), out);
+    }
+    if (!"intracell".equals(bonds)) {
+      chain.addIntercellShift(window, 0, w * (random.nextDouble() - 0.5), out);
     }
   }
 }

@@ -33,8 +33,8 @@ import java.util.random.RandomGenerator;
  *
  * <p>Symmetry: a real factor common to all elements of a bond commutes with complex conjugation
  * (T), with the BdG particle–hole map (hopping and pairing blocks scaled alike: C) and with any
- * sublattice operator diagonal on atoms (S), so every symmetry of the model is kept. Not slice-local
- * (the inter-slice bonds of the transfer-matrix observable would be missed).
+ * sublattice operator diagonal on atoms (S), so every symmetry of the model is kept. Not drawn slice
+ * by slice ({@link SliceDisorder} not implemented), so {@code lyapunov} rejects it.
  */
 public final class BondScaleDisorder implements DisorderKind {
 
@@ -54,11 +54,6 @@ public final class BondScaleDisorder implements DisorderKind {
   @Override
   public Set<Symmetry> keptSymmetries(Model model) {
     return Set.of(Symmetry.TIME_REVERSAL, Symmetry.PARTICLE_HOLE, Symmetry.CHIRAL);
-  }
-
-  @Override
-  public boolean isSliceLocal() {
-    return false;
   }
 
   @Override

@@ -15,7 +15,7 @@ import java.util.random.RandomGenerator;
  * Random Ising couplings: J_j = J + W·u_j, u_j uniform in [−1/2, 1/2), one draw per bond j = 0, 1,
  * … (L−1 bonds open, L periodic, the closing bond L−1 → 0 last). Keeps every symmetry.
  */
-public final class CouplingBoxDisorder implements DisorderKind {
+public final class CouplingBoxDisorder implements DisorderKind, SliceDisorder {
 
   public static final String NAME = "coupling-box";
 
@@ -53,5 +53,17 @@ public final class CouplingBoxDisorder implements DisorderKind {
     for (int bond = 0; bond < chain.bondCount(lattice); bond++) {
       chain.addCouplingShift(lattice, bond, w * (random.nextDouble() - 0.5), out);
     }
+  }
+
+  /** Slice n = site n of the chain: one draw for bond n (n → n+1), J_n = J + W u_n. */
+  @Override
+  public Optional<String> whyNotSliceable(Model model) {
+    return model.dimension() == 1 ? Optional.empty() : Optional.of(NAME + " is drawn slice by slice only on a chain");
+  }
+
+  @Override
+  public void applyToSlice(DisorderTerm term, Model model, ParameterValues parameters, Lattice window, int sliceSites, RandomGenerator random, HamiltonianBuilder out) {
+    TransverseFieldChain chain = (TransverseFieldChain) model;
+    chain.addCouplingShift(window, 0, term.strength() * (random.nextDouble() - 0.5), out);
   }
 }

@@ -57,16 +57,6 @@ public interface DisorderKind {
     return false;
   }
 
-  /**
-   * True if {@link #apply} on one slice of a sample (a cross-section lattice, as the transfer-matrix
-   * observable uses) gives that slice's part of the full sample's disorder, i.e. the kind only
-   * touches terms inside sites and draws site by site. False for kinds that change bonds between
-   * sites (the inter-slice bonds would be missed) or cancel terms. Default: true.
-   */
-  default boolean isSliceLocal() {
-    return true;
-  }
-
   /** Allowed option keys and, for each, the allowed values (empty set = any text). */
   Map<String, java.util.Set<String>> options();
 

@@ -15,7 +15,7 @@ import java.util.random.RandomGenerator;
  * Random transverse field of an Ising chain: h_j = h + W·u_j, u_j uniform in [−1/2, 1/2), one draw
  * per site j = 0, 1, …, L−1. Real, so it keeps every symmetry of the chain.
  */
-public final class FieldBoxDisorder implements DisorderKind {
+public final class FieldBoxDisorder implements DisorderKind, SliceDisorder {
 
   public static final String NAME = "field-box";
 
@@ -51,6 +51,16 @@ public final class FieldBoxDisorder implements DisorderKind {
     double w = term.strength();
     for (int j = 0; j < lattice.sites(); j++) {
       chain.addFieldShift(lattice, j, w * (random.nextDouble() - 0.5), out);
+    }
+  }
+
+  /** Slice n = site n of the chain: one draw, h_n = h + W u_n. */
+  @Override
+  public void applyToSlice(DisorderTerm term, Model model, ParameterValues parameters, Lattice window, int sliceSites, RandomGenerator random, HamiltonianBuilder out) {
+    TransverseFieldChain chain = (TransverseFieldChain) model;
+    double w = term.strength();
+    for (int j = 0; j < sliceSites; j++) {
+      chain.addFieldShift(window, j, w * (random.nextDouble() - 0.5), out);
     }
   }
 }

@@ -16,7 +16,7 @@ import java.util.random.RandomGenerator;
  * {@code orbitals = independent} every orbital gets its own draw, in matrix-index order. BdG models
  * receive V as a shift of the chemical potential (see {@link Model#addOnsitePotential}).
  */
-public final class OnsiteBoxDisorder implements DisorderKind {
+public final class OnsiteBoxDisorder implements DisorderKind, SliceDisorder {
 
   public static final String NAME = "onsite-box";
 
@@ -61,6 +61,23 @@ public final class OnsiteBoxDisorder implements DisorderKind {
         }
       } else {
         model.addOnsitePotential(lattice, s, w * (random.nextDouble() - 0.5), out);
+      }
+    }
+  }
+
+  /** Slice n: one draw per site of the slice (or per orbital), in the slice's site order, as {@link #apply}. */
+  @Override
+  public void applyToSlice(DisorderTerm term, Model model, ParameterValues parameters, Lattice window, int sliceSites, RandomGenerator random, HamiltonianBuilder out) {
+    double w = term.strength();
+    boolean independent = "independent".equals(term.options().getOrDefault("orbitals", "same"));
+    int orbitals = window.orbitalsPerSite();
+    for (int s = 0; s < sliceSites; s++) {
+      if (independent) {
+        for (int o = 0; o < orbitals; o++) {
+          model.addOrbitalPotential(window, s, o, w * (random.nextDouble() - 0.5), out);
+        }
+      } else {
+        model.addOnsitePotential(window, s, w * (random.nextDouble() - 0.5), out);
       }
     }
   }

@@ -16,7 +16,7 @@ import java.util.random.RandomGenerator;
  * site-index order, applied through {@link Model#addOnsitePotential} (a scalar potential, or a
  * chemical-potential/field shift for models that say so).
  */
-public final class OnsiteGaussDisorder implements DisorderKind {
+public final class OnsiteGaussDisorder implements DisorderKind, SliceDisorder {
 
   public static final String NAME = "onsite-gauss";
 
@@ -50,6 +50,15 @@ public final class OnsiteGaussDisorder implements DisorderKind {
     double w = term.strength();
     for (int s = 0; s < lattice.sites(); s++) {
       model.addOnsitePotential(lattice, s, w * random.nextGaussian(), out);
+    }
+  }
+
+  /** Slice n: one draw per site of the slice, in the slice's site order, as {@link #apply}. */
+  @Override
+  public void applyToSlice(DisorderTerm term, Model model, ParameterValues parameters, Lattice window, int sliceSites, RandomGenerator random, HamiltonianBuilder out) {
+    double w = term.strength();
+    for (int s = 0; s < sliceSites; s++) {
+      model.addOnsitePotential(window, s, w * random.nextGaussian(), out);
     }
   }
 }

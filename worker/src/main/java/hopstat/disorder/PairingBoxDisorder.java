@@ -15,7 +15,7 @@ import java.util.random.RandomGenerator;
  * Random real p-wave pairing: Δ_j = delta + W·u_j, u_j uniform in [−1/2, 1/2), one draw per bond j
  * = 0, 1, … (closing bond last on a periodic chain). Real, so it keeps every symmetry.
  */
-public final class PairingBoxDisorder implements DisorderKind {
+public final class PairingBoxDisorder implements DisorderKind, SliceDisorder {
 
   public static final String NAME = "pairing-box";
 
@@ -52,5 +52,17 @@ public final class PairingBoxDisorder implements DisorderKind {
     for (int bond = 0; bond < chain.bondCount(lattice); bond++) {
       chain.addPairingShift(lattice, bond, w * (random.nextDouble() - 0.5), out);
     }
+  }
+
+  /** Slice n = site n of the chain: one draw for bond n (n → n+1), Δ_n = delta + W u_n. */
+  @Override
+  public Optional<String> whyNotSliceable(Model model) {
+    return model.dimension() == 1 ? Optional.empty() : Optional.of(NAME + " is drawn slice by slice only on a chain");
+  }
+
+  @Override
+  public void applyToSlice(DisorderTerm term, Model model, ParameterValues parameters, Lattice window, int sliceSites, RandomGenerator random, HamiltonianBuilder out) {
+    PairingChain chain = (PairingChain) model;
+    chain.addPairingShift(window, 0, term.strength() * (random.nextDouble() - 0.5), out);
   }
 }

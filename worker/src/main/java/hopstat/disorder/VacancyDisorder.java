@@ -36,7 +36,8 @@ import java.util.random.RandomGenerator;
  * vacancy levels are at least 999 R away from every other level. Observables that scale or bin by
  * the whole spectrum are rejected with this kind ({@link #hasDecoupledLevels()}): KPM (its
  * Chebyshev rescaling would stretch by 10³), level statistics and IPR without explicit windows, and
- * the localizer with automatic kappa. Gaps at E_F, Bott/Chern/Majorana invariants are unaffected:
+ * the localizer with automatic kappa; {@code lyapunov} too, as this kind is not drawn slice by slice
+ * ({@link SliceDisorder} not implemented). Gaps at E_F, Bott/Chern/Majorana invariants are unaffected:
  * a decoupled level is an eigenvector localised on one site, which contributes nothing (or the same
  * factor to both Pfaffians of the Majorana number).
  *
@@ -94,11 +95,6 @@ public final class VacancyDisorder implements DisorderKind {
   @Override
   public boolean hasDecoupledLevels() {
     return true;
-  }
-
-  @Override
-  public boolean isSliceLocal() {
-    return false;
   }
 
   @Override

@@ -10,7 +10,8 @@ package hopstat.localisation;
  * @param relativeError estimated relative standard error of γ_K (see the kernel's Javadoc)
  * @param slices number of slices propagated, warm-up included
  * @param converged true if the target error was reached before the length guard
- * @param exponents all K exponents γ_1..γ_K, descending; copied in and out
+ * @param exponents all K exponents γ_1..γ_K, descending ({@link TransferMatrixKernel}); only γ_K
+ *     ({@link GreenRecursionKernel}); copied in and out
  */
 public record LyapunovResult(double smallestPositive, double relativeError, long slices, boolean converged, double[] exponents) {
   public LyapunovResult {

@@ -65,6 +65,17 @@ public interface Observable {
   }
 
   /**
+   * As {@link #whyNotApplicable(Model, Boundary, SymmetryClass)}, also knowing the spec's disorder
+   * types (spec order), for observables that cannot use every disorder kind (e.g. {@code lyapunov}
+   * draws the disorder slice by slice). Default: ignores the disorder.
+   *
+   * @param disorderTypes the {@code disorder[i].type} names; read
+   */
+  default Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass, List<String> disorderTypes) {
+    return whyNotApplicable(model, boundary, effectiveClass);
+  }
+
+  /**
    * Computes the quantities of one realisation.
    *
    * @param context read (lazily computes and caches spectra)

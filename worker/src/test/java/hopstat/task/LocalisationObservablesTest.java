@@ -78,7 +78,7 @@ class LocalisationObservablesTest {
     assertThat(r.outcome()).isEqualTo(Outcome.FAILED);
     assertThat(r.failure()).contains("parameters.energy");
     Observable o = ObservableCatalog.find("lyapunov").orElseThrow();
-    assertThat(o.whyNotApplicable(ModelCatalog.find("qwz").orElseThrow(), Boundary.PERIODIC, SymmetryClass.A)).isPresent();
+    assertThat(o.whyNotApplicable(ModelCatalog.find("majorana-cluster").orElseThrow(), Boundary.OPEN, SymmetryClass.D)).isPresent();
     assertThat(o.whyNotApplicable(ModelCatalog.find("anderson-3d").orElseThrow(), Boundary.PERIODIC, SymmetryClass.AI)).isEmpty();
   }
 

@@ -1,0 +1,151 @@
+package hopstat.localisation;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.data.Offset.offset;
+
+import hopstat.linalg.LinalgFactory;
+import java.util.SplittableRandom;
+import org.ejml.data.ZMatrixRMaj;
+import org.junit.jupiter.api.Test;
+
+class GreenRecursionKernelTest {
+
+  private final GreenRecursionWorkspace workspace = new GreenRecursionWorkspace(LinalgFactory.preferred());
+
+  /**
+   * Kitaev wire slice in the BdG basis (c_j, c†_j) of {@code PWaveWireModel}: H_j = diag(−μ_j, μ_j),
+   * T = H_{j+1,j} = [[−t, Δ], [−Δ, t]] (from H_BdG entries (j p, j+1 p) = −t, (j h, j+1 h) = +t,
+   * (j+1 p, j h) = +Δ, (j p, j+1 h) = −Δ, Hermitian conjugate for the lower block). Singular for Δ = t.
+   */
+  private static void wireSlice(double mu, double t, double delta, ZMatrixRMaj h, ZMatrixRMaj c) {
+    h.set(0, 0, -mu, 0);
+    h.set(1, 1, mu, 0);
+    c.set(0, 0, -t, 0);
+    c.set(1, 1, t, 0);
+    c.set(0, 1, delta, 0);
+    c.set(1, 0, -delta, 0);
+  }
+
+  /**
+   * Δ = t, E = 0, random μ_j = μ + W u_j: the BdG equations split into two Majorana chains with
+   * α_{j+1} = (μ_j/2t) α_j (derived from H = (i/2) Σ [−μ_j a_j b_j + 2t b_j a_{j+1}], REFERENCE.md),
+   * so over the counted slices γ = |mean ln|μ_j| − ln|2t|| up to boundary terms O(1/N) (criterion of
+   * Motrunich, Damle, Huse, PRB 63, 224204 (2001)). The μ_j used are recorded and averaged over the
+   * same slices the kernel counts (after its warm-up). Tolerance 2/N_counted for the two end terms.
+   * Both phases: mean μ = 1 (topological, ‖G_1N‖ grows) and mean μ = 3 (trivial, it decays).
+   */
+  @Test
+  void kitaevWireAtDeltaEqualsTMatchesTheMajoranaRecursion() {
+    for (double mean : new double[] {1.0, 3.0}) {
+      SplittableRandom rng = new SplittableRandom(11);
+      double[] logs = new double[40_000];
+      int[] n = {0};
+      double w = 1.5;
+      LyapunovResult r = GreenRecursionKernel.run(2, new LyapunovSpec(0.0, 0.0, 20_000), (h, c) -> {
+        double mu = mean + w * (rng.nextDouble() - 0.5);
+        logs[n[0]++] = Math.log(Math.abs(mu));
+        wireSlice(mu, 1.0, 1.0, h, c);
+      }, workspace);
+      int warm = 64; // max(64, 10 K) for K = 2
+      double s = 0;
+      for (int j = warm; j < n[0]; j++) {
+        s += logs[j];
+      }
+      double expected = Math.abs(s / (n[0] - warm) - Math.log(2.0));
+      assertThat(r.slices()).isEqualTo(20_000);
+      assertThat(r.smallestPositive()).isCloseTo(expected, offset(2.0 / (n[0] - warm) * 10));
+    }
+  }
+
+  /**
+   * Clean wire, E = 0, Δ ≠ t: a zero mode Σ α_j a_j needs (Δ + t) λ² ± μ λ + (t − Δ) = 0 for α_j =
+   * λ^j (derived from the Majorana form above); the b-chain has the inverse roots. γ = min |ln|λ||.
+   * μ = 1, t = 1, Δ = 0.5: complex roots, |λ|² = (t − Δ)/(t + Δ) = 1/3, γ = ln 3 / 2. μ = 1.8:
+   * real roots (1.8 ± √0.24)/3, γ = −ln((1.8 + √0.24)/3). μ = 3 (trivial): (3 ± √6)/3, smaller
+   * |ln| from the root nearer 1. A slipped sign or row in T changes these.
+   */
+  @Test
+  void cleanWireAwayFromDeltaEqualsTFollowsTheCharacteristicRoots() {
+    double[][] cases = {{1.0, 0.5}, {1.8, 0.5}, {3.0, 0.5}};
+    for (double[] c : cases) {
+      double mu = c[0];
+      double delta = c[1];
+      double disc = mu * mu - 4 * (1 - delta * delta);
+      double expected;
+      if (disc < 0) {
+        expected = 0.5 * Math.abs(Math.log((1 - delta) / (1 + delta)));
+      } else {
+        double l1 = Math.abs((mu + Math.sqrt(disc)) / (2 * (1 + delta)));
+        double l2 = Math.abs((mu - Math.sqrt(disc)) / (2 * (1 + delta)));
+        expected = Math.min(Math.abs(Math.log(l1)), Math.abs(Math.log(l2)));
+      }
+      LyapunovResult r = GreenRecursionKernel.run(2, new LyapunovSpec(0.0, 1e-9, 4_000), (h, t) -> wireSlice(mu, 1.0, delta, h, t), workspace);
+      assertThat(r.smallestPositive()).as("mu %s delta %s", mu, delta).isCloseTo(expected, offset(2e-3 * expected + 5.0 / r.slices()));
+    }
+  }
+
+  /**
+   * The Green's-function engine against the real transfer-matrix kernel on the same disordered
+   * anderson strip (M = 3 open, W = 4, E = 0.3; the identical draws in the same slice order): the
+   * two estimators of one realisation differ by boundary terms only, so they must agree within the
+   * combined stated errors (3σ).
+   */
+  @Test
+  void agreesWithTheTransferMatrixKernelOnADisorderedStrip() {
+    int m = 3;
+    double w = 4.0;
+    LyapunovSpec spec = new LyapunovSpec(0.3, 0.02, 2_000_000);
+    SplittableRandom a = new SplittableRandom(5);
+    LyapunovResult tm = TransferMatrixKernel.run(new double[] {-1, 0, 0, 0, -1, 0, 0, 0, -1}, m, spec, h -> {
+      h.addHopping(0, 1, -1, 0);
+      h.addHopping(1, 2, -1, 0);
+      for (int i = 0; i < m; i++) {
+        h.addOnsite(i, w * (a.nextDouble() - 0.5));
+      }
+    }, new TransferMatrixWorkspace());
+    SplittableRandom b = new SplittableRandom(5);
+    LyapunovResult rgf = GreenRecursionKernel.run(m, spec, (h, t) -> {
+      h.set(0, 1, -1, 0);
+      h.set(1, 0, -1, 0);
+      h.set(1, 2, -1, 0);
+      h.set(2, 1, -1, 0);
+      for (int i = 0; i < m; i++) {
+        h.set(i, i, w * (b.nextDouble() - 0.5), 0);
+        t.set(i, i, -1, 0);
+      }
+    }, workspace);
+    assertThat(tm.converged()).isTrue();
+    assertThat(rgf.converged()).isTrue();
+    double sigma = Math.hypot(tm.relativeError() * tm.smallestPositive(), rgf.relativeError() * rgf.smallestPositive());
+    assertThat(rgf.smallestPositive()).isCloseTo(tm.smallestPositive(), offset(3 * sigma));
+  }
+
+  /**
+   * Band-centre anomaly of the 1D Anderson chain through the Green's-function engine: γ(0) = W²/105.045
+   * (Kappus &amp; Wegner, Z. Phys. B 45, 15 (1981) — constant from memory, REFERENCE.md). W = 1.5,
+   * 2 % target; tolerance 3 × error + 3 % (weak-disorder corrections), as the transfer-matrix test.
+   */
+  @Test
+  void bandCentreChainFollowsKappusWegner() {
+    SplittableRandom rng = new SplittableRandom(3);
+    double w = 1.5;
+    LyapunovResult r = GreenRecursionKernel.run(1, new LyapunovSpec(0.0, 0.02, 5_000_000), (h, t) -> {
+      h.set(0, 0, w * (rng.nextDouble() - 0.5), 0);
+      t.set(0, 0, -1, 0);
+    }, workspace);
+    double expected = w * w / 105.045;
+    assertThat(r.converged()).isTrue();
+    assertThat(r.smallestPositive()).isCloseTo(expected, offset(expected * (3 * r.relativeError() + 0.03)));
+  }
+
+  /** Decoupled slices (T = 0): G_1N = 0, a recorded failure (NaN), not an exception. */
+  @Test
+  void decoupledSlicesAreAFailureOutcome() {
+    LyapunovResult r = GreenRecursionKernel.run(2, new LyapunovSpec(0.1, 0.01, 1_000), (h, t) -> {
+      h.set(0, 0, 1, 0);
+      h.set(1, 1, -1, 0);
+    }, workspace);
+    assertThat(r.converged()).isFalse();
+    assertThat(r.smallestPositive()).isNaN();
+  }
+}
