@@ -207,7 +207,11 @@ class BondScaleDisorderTest {
     assertThat(broken.relativeViolation()).isGreaterThan(1e-3);
   }
 
-  /** A real model stays real; class D keeps its declared C (hopping and pairing scaled alike); ssh scales v and w and stays bipartite. */
+  /**
+   * A real model stays real; the declared operators of pip-square (C: hopping and pairing scaled
+   * alike), ssh (T, C, S), diii-wire (T, C, S) and bhz (T) pass the audit; ssh scales v and w and
+   * stays bipartite.
+   */
   @Test
   void realModelsStayRealAndBdgKeepsParticleHole() {
     ZMatrixRMaj anderson = dense(aRealisation("anderson-2d").size(6).disorder(BondScaleDisorder.NAME, 2.0).seed(4).build());
@@ -228,6 +232,11 @@ class BondScaleDisorderTest {
         8, Boundary.PERIODIC, 0.0, scale, List.of()), 3L, SymmetryCheckKernel.TOLERANCE);
     assertThat(diii.effectiveClass()).isEqualTo(SymmetryClass.DIII);
     assertThat(diii.violations()).isEmpty();
+    SymmetryCheckReport bhz = SymmetryCheckOps.check(new PointSpec("bhz", new ParameterValues(Map.of("A", 1.0, "B", 1.0, "M", 2.0, "rashba", 0.3)),
+        6, Boundary.PERIODIC, 0.0, scale, List.of()), 3L, SymmetryCheckKernel.TOLERANCE);
+    assertThat(bhz.effectiveClass()).isEqualTo(SymmetryClass.AII);
+    assertThat(bhz.checks()).extracting(SymmetryCheckResult::symmetry).containsExactly(Symmetry.TIME_REVERSAL);
+    assertThat(bhz.violations()).isEmpty();
     ZMatrixRMaj ssh = dense(aRealisation("ssh").with("v", 0.5).with("w", 1.0).size(6).boundary(Boundary.OPEN)
         .disorder(BondScaleDisorder.NAME, 0.8).seed(2).build());
     for (int j = 0; j < 6; j++) {
