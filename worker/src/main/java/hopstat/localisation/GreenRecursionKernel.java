@@ -1,5 +1,6 @@
 package hopstat.localisation;
 
+import hopstat.linalg.ComplexHouseholderOps;
 import org.ejml.data.ZMatrixRMaj;
 
 /**
@@ -54,6 +55,13 @@ public final class GreenRecursionKernel {
   /** Slices per error block (same as {@link TransferMatrixKernel#QR_INTERVAL}, so both kernels' errors compare). */
   public static final int BLOCK_SLICES = 4;
 
+  /**
+   * A one-slice factor ‖M A_n‖ (M of unit norm) at or below this means the slices are decoupled to
+   * working precision (e.g. T_n = 0 gives rounding-level C): a failure outcome, γ ≳ −ln(64 ε) ≈ 31
+   * per slice is beyond what double precision resolves.
+   */
+  static final double DECOUPLED = 64 * Math.ulp(1.0);
+
   /** Supplies the slices of the bar. */
   @FunctionalInterface
   public interface SliceSource {
@@ -96,6 +104,8 @@ public final class GreenRecursionKernel {
     boolean converged = false;
     boolean broken = false;
     boolean first = true;
+    initialFrame(ws, k);
+    ws.previousCoupling.setTo(ws.identity);
 
     outer:
     while (slices < spec.maxSlices()) {
@@ -104,41 +114,45 @@ public final class GreenRecursionKernel {
         ws.onSlice.zero();
         ws.coupling.zero();
         source.next(ws.onSlice, ws.coupling);
-        // a = E − H_n − Σ_n, Σ_n = T_{n−1} G_{n−1} T_{n−1}† (zero for the first slice)
-        double[] a = ws.a.data;
-        double[] h = ws.onSlice.data;
-        double[] sigma = ws.sigma.data;
+        // Z = (E − H_n) P − T_{n−1} Q for the frame [P; Q] of pairs (ψ_n, ψ_{n−1})
+        ws.products.mult(ws.onSlice, ws.frameTop, ws.z);
+        ws.products.mult(ws.previousCoupling, ws.frameBottom, ws.scratch);
+        double[] z = ws.z.data;
+        double[] p = ws.frameTop.data;
+        double[] tq = ws.scratch.data;
         int len = 2 * k * k;
         for (int i = 0; i < len; i++) {
-          a[i] = -h[i] - (first ? 0.0 : sigma[i]);
+          z[i] = energy * p[i] - z[i] - tq[i];
         }
-        for (int i = 0; i < k; i++) {
-          a[2 * (i * k + i)] += energy;
-        }
-        if (!ws.ldlt.factor(ws.a)) {
+        // B† = [T_n; −Z†]; ker B = {(ψ_{n+1}, c) : T_n† ψ_{n+1} = Z c} = last K columns of B†'s full Q
+        stack(ws.coupling, ws.z, true, ws.stacked);
+        ComplexHouseholderOps.factor(ws.stacked, ws.reflectors);
+        ComplexHouseholderOps.formQ(ws.reflectors, k, ws.kernel);
+        // new pairs (ψ_{n+1}, ψ_n) = [X; P C], orthonormalised: [X; P C] = F' R
+        split(ws.kernel, ws.x, ws.c);
+        ws.products.mult(ws.frameTop, ws.c, ws.scratch);
+        stack(ws.x, ws.scratch, false, ws.stacked);
+        ComplexHouseholderOps.factor(ws.stacked, ws.reflectors);
+        ComplexHouseholderOps.formQ(ws.reflectors, 0, ws.kernel);
+        split(ws.kernel, ws.frameTop, ws.frameBottom);
+        // A_n = C R⁻¹ maps new-frame coordinates to old ones; M ← M A_n
+        if (!solveRight(ws.c, ws.stacked, ws.a)) {
           broken = true;
           break outer;
         }
-        ws.green.setTo(ws.identity);
-        ws.ldlt.solve(ws.green);
-        // G_{1n} = G_{1,n−1} T_{n−1}† G_n (G_{11} = G_1)
         if (first) {
-          ws.endToEnd.setTo(ws.green);
+          ws.product.setTo(ws.a);
         } else {
-          ws.products.multConjTransB(ws.endToEnd, ws.previousCoupling, ws.scratch);
-          ws.products.mult(ws.scratch, ws.green, ws.endToEnd);
+          ws.products.mult(ws.product, ws.a, ws.scratch);
+          ws.product.setTo(ws.scratch);
         }
-        double norm = frobenius(ws.endToEnd);
-        if (!(norm > 0) || !Double.isFinite(norm)) {
+        double norm = frobenius(ws.product);
+        if (!(norm > DECOUPLED) || !Double.isFinite(norm)) {
           broken = true;
           break outer;
         }
-        scale(ws.endToEnd, 1.0 / norm);
+        scale(ws.product, 1.0 / norm);
         blockLog += Math.log(norm);
-        // Σ_{n+1} = T_n G_n T_n†, kept Hermitian against rounding drift
-        ws.products.mult(ws.coupling, ws.green, ws.scratch);
-        ws.products.multConjTransB(ws.scratch, ws.coupling, ws.sigma);
-        hermitise(ws.sigma);
         ws.previousCoupling.setTo(ws.coupling);
         first = false;
       }
@@ -161,9 +175,92 @@ public final class GreenRecursionKernel {
         }
       }
     }
-    // |rate|: at an energy where an open end of the bar holds a protected zero mode, ‖G_1N‖ grows at the same rate
-    double gamma = counted == 0 || broken ? Double.NaN : Math.abs(sum / (counted * (double) BLOCK_SLICES));
+    double gamma = counted == 0 || broken ? Double.NaN : sum / (counted * (double) BLOCK_SLICES);
     return new LyapunovResult(gamma, broken ? Double.NaN : relativeError, slices, converged && !broken, new double[] {gamma});
+  }
+
+  /**
+   * A fixed generic starting frame (ψ_1, ψ_0) (a deterministic quasi-random 2K × K matrix,
+   * orthonormalised), so that no open-end boundary condition, and no end zero mode, is imposed.
+   */
+  private static void initialFrame(GreenRecursionWorkspace ws, int k) {
+    double[] s = ws.stacked.data;
+    int len = 2 * (2 * k) * k;
+    for (int i = 0; i < len; i++) {
+      // golden-ratio Weyl sequence, centred: no structure a Hamiltonian could share
+      double u = (i + 1) * 0.6180339887498949;
+      s[i] = (u - Math.floor(u)) - 0.5;
+    }
+    ComplexHouseholderOps.factor(ws.stacked, ws.reflectors);
+    ComplexHouseholderOps.formQ(ws.reflectors, 0, ws.kernel);
+    split(ws.kernel, ws.frameTop, ws.frameBottom);
+  }
+
+  /** out (2K × K) ← [top; bottom] or, if {@code negConjBottom}, [top; −bottom†]. */
+  private static void stack(ZMatrixRMaj top, ZMatrixRMaj bottom, boolean negConjBottom, ZMatrixRMaj out) {
+    int k = top.numRows;
+    double[] o = out.data;
+    double[] t = top.data;
+    double[] b = bottom.data;
+    System.arraycopy(t, 0, o, 0, 2 * k * k);
+    int off = 2 * k * k;
+    for (int i = 0; i < k; i++) {
+      for (int j = 0; j < k; j++) {
+        int ij = 2 * (i * k + j);
+        if (negConjBottom) {
+          int ji = 2 * (j * k + i);
+          o[off + ij] = -b[ji];
+          o[off + ij + 1] = b[ji + 1];
+        } else {
+          o[off + ij] = b[ij];
+          o[off + ij + 1] = b[ij + 1];
+        }
+      }
+    }
+  }
+
+  /** [top; bottom] ← in (2K × K). */
+  private static void split(ZMatrixRMaj in, ZMatrixRMaj top, ZMatrixRMaj bottom) {
+    int len = 2 * top.numRows * top.numCols;
+    System.arraycopy(in.data, 0, top.data, 0, len);
+    System.arraycopy(in.data, len, bottom.data, 0, len);
+  }
+
+  /**
+   * out ← c R⁻¹ with R the upper K × K triangle of {@code r} (2K × K), by substitution along each
+   * row; false if a diagonal entry of R is zero or the result is not finite.
+   */
+  private static boolean solveRight(ZMatrixRMaj c, ZMatrixRMaj r, ZMatrixRMaj out) {
+    int k = c.numRows;
+    double[] cd = c.data;
+    double[] rd = r.data;
+    double[] o = out.data;
+    for (int row = 0; row < k; row++) {
+      for (int j = 0; j < k; j++) {
+        int oj = 2 * (row * k + j);
+        double re = cd[oj];
+        double im = cd[oj + 1];
+        for (int l = 0; l < j; l++) {
+          int ol = 2 * (row * k + l);
+          int lj = 2 * (l * k + j);
+          re -= o[ol] * rd[lj] - o[ol + 1] * rd[lj + 1];
+          im -= o[ol] * rd[lj + 1] + o[ol + 1] * rd[lj];
+        }
+        int jj = 2 * (j * k + j);
+        double dr = rd[jj];
+        double di = rd[jj + 1];
+        double den = dr * dr + di * di;
+        if (!(den > 0)) {
+          return false;
+        }
+        o[oj] = (re * dr + im * di) / den;
+        o[oj + 1] = (im * dr - re * di) / den;
+        if (!Double.isFinite(o[oj]) || !Double.isFinite(o[oj + 1])) {
+          return false;
+        }
+      }
+    }
+    return true;
   }
 
   private static double frobenius(ZMatrixRMaj a) {
@@ -181,26 +278,6 @@ public final class GreenRecursionKernel {
     int len = a.getDataLength();
     for (int i = 0; i < len; i++) {
       d[i] *= factor;
-    }
-  }
-
-  /** a ← (a + a†)/2. */
-  private static void hermitise(ZMatrixRMaj a) {
-    int n = a.numRows;
-    double[] d = a.data;
-    for (int i = 0; i < n; i++) {
-      int ii = 2 * (i * n + i);
-      d[ii + 1] = 0.0;
-      for (int j = 0; j < i; j++) {
-        int ij = 2 * (i * n + j);
-        int ji = 2 * (j * n + i);
-        double re = 0.5 * (d[ij] + d[ji]);
-        double im = 0.5 * (d[ij + 1] - d[ji + 1]);
-        d[ij] = re;
-        d[ij + 1] = im;
-        d[ji] = re;
-        d[ji + 1] = -im;
-      }
     }
   }
 }
