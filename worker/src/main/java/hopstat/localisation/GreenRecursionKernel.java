@@ -71,8 +71,8 @@ import org.ejml.data.ZMatrixRMaj;
  * 2, … in order, once each.
  *
  * <p><b>Cost.</b> Per slice two Householder QRs of 2K × K complex matrices and the formation of K
- * columns of Q (pure Java, O(K³)), a triangular solve and three K × K products; memory O(K²), independent of the length. Not benchmarked against the
- * previous engine.
+ * columns of Q (pure Java, O(K³)), a triangular solve and three K × K products; memory O(K²),
+ * independent of the length. Not benchmarked against the previous engine.
  */
 public final class GreenRecursionKernel {
 

@@ -10,12 +10,12 @@ import org.ejml.data.ZMatrixRMaj;
  * Scratch for {@link GreenRecursionKernel}: twelve K × K complex blocks (the slice's H and T, the
  * previous T, the two halves of the solution frame, Z, the kernel halves X and C, A_n, the
  * accumulated product, a buffer and the identity), three 2K × K blocks (stacked matrix, Householder
- * reflectors, Q columns) and a product engine. Memory O(K²), independent of the bar length. Grows, never shrinks.
- * One per worker thread.
+ * reflectors, Q columns) and a product engine. Memory O(K²), independent of the bar length. Grows,
+ * never shrinks. One per worker thread.
  *
- * <p>Backend: slices of K ≤ {@link #SMALL_SLICE} orbitals use the pure-Java products
- * whatever {@code linalg} is (the Householder steps are pure Java for every K), because each native call crosses JNI and copies its operands, a fixed
- * cost expected to dominate 2 × 2 or 4 × 4 blocks; larger slices use {@code linalg}'s kind. The
+ * <p>Backend: the Householder steps are pure Java for every K. Slices of K ≤ {@link #SMALL_SLICE}
+ * orbitals use the pure-Java products whatever {@code linalg} is, because each native call crosses
+ * JNI and copies its operands, a fixed cost expected to dominate 2 × 2 or 4 × 4 blocks; larger slices use {@code linalg}'s kind. The
  * threshold is a design guess, not yet backed by a benchmark.
  */
 public final class GreenRecursionWorkspace {

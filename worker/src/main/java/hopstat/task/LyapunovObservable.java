@@ -36,7 +36,8 @@ import org.ejml.data.ZMatrixRMaj;
  * models: real slices, invertible T = −t·1) run the real transfer-matrix QR iteration {@link
  * TransferMatrixKernel}, kept because it is tested against Kappus–Wegner and closed forms and costs
  * O(K²) per slice for their diagonal T. Every other model with d ≥ 1 runs {@link
- * GreenRecursionKernel} (a QR-stabilised solution-frame recursion that never inverts a coupling) on slices cut from the model's own clean Hamiltonian by
+ * GreenRecursionKernel} (a QR-stabilised solution-frame recursion that never inverts a coupling)
+ * on slices cut from the model's own clean Hamiltonian by
  * {@link BarSliceOps} (complex slices, singular couplings allowed, e.g. BdG wires at Δ = t and the
  * QWZ hopping): qwz, haldane, flux-square, pip-square, bhz, pwave-wire, ising-chain, ssh and custom
  * models whose terms join neighbouring cells along their last direction only. Both engines agree
