@@ -1,58 +1,90 @@
 package hopstat.localisation;
 
+import hopstat.linalg.ComplexHouseholderOps;
 import org.ejml.data.ZMatrixRMaj;
 
 /**
- * The smallest Lyapunov exponent of a quasi-one-dimensional bar from the recursive Green's function
- * (MacKinnon &amp; Kramer, Z. Phys. B 53, 1 (1983)). Works for complex slices and for singular
- * inter-slice couplings (e.g. the QWZ hopping t(σz + iσx)/2 or the Kitaev-wire BdG hopping at Δ =
- * t), because it never inverts the coupling.
+ * The smallest positive Lyapunov exponent of a quasi-one-dimensional bar with complex slices and
+ * possibly singular inter-slice couplings (e.g. the QWZ hopping t(σz + iσx)/2, BdG wires at Δ =
+ * t, SSH), by a QR-stabilised propagation of the space of solutions written as a matrix pencil, so
+ * that no coupling and no self-energy is ever inverted. (The class keeps its historical name: it
+ * used to run the recursive Green's function of MacKinnon &amp; Kramer, Z. Phys. B 53, 1
+ * (1983); see "Why not the Green's function recursion" below.)
  *
- * <p><b>Equation.</b> Bar of slices 1..N with on-slice blocks H_n and couplings T_n = H_{n+1,n} (see
- * {@link BarSlices}). With G^{(N)} = (E − H_bar)⁻¹ of the first N slices,
+ * <p><b>Equation.</b> Bar of slices with on-slice blocks H_n and couplings T_n = H_{n+1,n} (see
+ * {@link BarSlices}): T_{n−1} ψ_{n−1} + (H_n − E) ψ_n + T_n† ψ_{n+1} = 0. A K-dimensional space of
+ * solutions is held as an orthonormal 2K × K frame F_n = [P; Q] of pairs (ψ_n, ψ_{n−1}). With Z =
+ * (E − H_n) P − T_{n−1} Q, the solution with frame coordinates c continues to every ψ_{n+1} with
+ * T_n† ψ_{n+1} = Z c, i.e. (ψ_{n+1}, c) ∈ ker B, B = [T_n†, −Z] (K × 2K). A Householder QR of
+ * B† = [T_n; −Z†] gives an orthonormal basis [X; C] of ker B (the last K columns of its full Q;
+ * {@link hopstat.linalg.ComplexHouseholderOps}); the new pairs [X; P C] = F_{n+1} R (QR again). So
+ * new-frame coordinates z map to old ones by A_n = C R⁻¹ (derived). No inverse of T_n is needed: a
+ * singular T_n makes C singular, which is an infinitely fast channel (γ = ∞), not a breakdown.
  *
- * <pre>
- *   G_{N,N}  = (E − H_N − T_{N−1} G_{N−1,N−1} T_{N−1}†)⁻¹ ,   G_{1,1} = (E − H_1)⁻¹ ,
- *   G_{1,N}  = G_{1,N−1} T_{N−1}† G_{N,N}
- * </pre>
+ * <p><b>Exponent.</b> The forward map restricted to the frame has the K largest exponents γ_1 ≥ …
+ * ≥ γ_K of the 2K (for Hermitian slices at real E they come in ± pairs, so these are the
+ * non-negative ones, some possibly +∞ from singular couplings), hence the backward product M_N =
+ * A_1 A_2 ⋯ A_N has singular values ~ e^{−γ_i N} (Oseledec; the QR/Benettin scheme as in {@link
+ * TransferMatrixKernel}) and ‖M_N‖ ~ e^{−γ_min N} with γ_min the smallest FINITE non-negative
+ * exponent: γ = −lim (1/N) ln ‖M_N‖_F, amplitude convention |ψ| ~ e^{−γx}. M is renormalised to
+ * unit Frobenius norm after every slice and the logarithms summed. Only this one exponent is
+ * returned ({@code exponents} has one entry).
  *
- * (Dyson's equation for attaching slice N; derived). For real E the matrix inverted is Hermitian,
- * so it is factored by LDLᴴ ({@link hopstat.linalg.HermitianLdltSolver}). The end-to-end propagator
- * decays with the slowest channel, ‖G_{1N}‖ ~ e^{−γN} in the amplitude convention |ψ| ~ e^{−γx}
- * (MacKinnon &amp; Kramer write Tr|G_{1N}|² ~ e^{−2N/λ}), so γ = −lim (1/N) ln ‖G_{1N}‖_F. G_{1N}
- * is renormalised to unit Frobenius norm after every slice and the logarithms of the norms are
- * summed (they telescope to ln ‖G_{1N}‖).
+ * <p><b>Starting frame.</b> A fixed, deterministic generic frame (a golden-ratio Weyl sequence,
+ * orthonormalised) with a fictitious coupling T_0 = 1, not the open end ψ_0 = 0: at E = 0 in a
+ * topological phase the open end holds zero modes that decay into the bar, a non-generic start
+ * that would only be corrected by rounding. No randomness is drawn for it.
  *
- * <p><b>Zero modes at the bar's ends.</b> At an energy where an open end of the growing bar holds a
- * protected zero mode (E = 0 in a topological phase of a chiral or BdG chain: SSH with |v| &lt; |w|,
- * the Kitaev wire with |μ| &lt; 2|t|), the left- and right-end modes hybridise with a splitting ~
- * e^{−γN} and ‖G_{1N}‖ grows as e^{+γN} instead of decaying; the kernel therefore returns γ = |lim
- * (1/N) ln ‖G_{1N}‖| (checked against the closed forms of both phases). With two or more such end
- * modes per end (|winding| ≥ 2, possible in class BDI/AIII with several channels) the growth rate is
- * set by the fastest-decaying end mode, so γ may then exceed the smallest exponent; not tested.
+ * <p><b>Zero modes at the ends.</b> Because the frame is generic and the exponent is the top one
+ * of the backward product, the result does not depend on end modes: several zero modes per end
+ * (|winding| ≥ 2 in class BDI, Kramers pairs in class DIII) or a mix of topological and trivial
+ * channels give the smallest exponent of all channels (tested against two SSH chains, decoupled
+ * and coupled, and the diii-wire with spin–orbit coupling, clean and disordered).
+ *
+ * <p><b>Why not the Green's function recursion.</b> The previous engine built G_{1N} of the
+ * open bar by Dyson's equation, Σ_{n+1} = T_n (E − H_n − Σ_n)⁻¹ T_n†, and took |rate| of ‖G_{1N}‖
+ * (it grows when the open ends hold zero modes). At E = 0 in a topological phase the right-end
+ * surface Green's function of a long bar has a pole, and the open left end keeps Σ finite only
+ * through an exact cancellation between left and right end modes that the antiunitary symmetries
+ * (T, C) enforce. Rounding breaks those symmetries at 1e-16 and the break grows by ~e^{2γ} per
+ * slice (measured on the clean diii-wire, μ = 0.5, λ = 0.3: relative T- and C-breaking of Σ_n from
+ * 7e-16 to O(1) within 9 slices, then Σ exploded on a rank-2 subspace and the factorisation failed;
+ * symmetrising Σ by T and C at every slice removed the breakdown, which located the cause). Real
+ * 2 × 2 BdG slices and SSH-like zero patterns preserved the cancellation exactly, which is why the
+ * Kitaev and SSH chains were unaffected. Also, |rate| of ‖G_{1N}‖ reported the fastest topological
+ * channel, not the slowest channel, when channels differ.
  *
  * <p><b>Warm-up, error estimate and stopping</b> as in {@link TransferMatrixKernel}: the first
- * max(64, 10·K) slices (whole blocks) are not counted; d_b = sum of the log-norm increments over a
- * block of {@link #BLOCK_SLICES} slices; γ = −Σ d_b / (B·BLOCK_SLICES) and its relative standard
+ * max(64, 10·K) slices (whole blocks) are not counted; d_b = −(sum of the log-norm increments) over a
+ * block of {@link #BLOCK_SLICES} slices; γ = Σ d_b / (B·BLOCK_SLICES) and its relative standard
  * error sqrt(var(d)/B)/|mean(d)| with blocks treated as independent (block-to-block correlations
  * over the localisation length are ignored, as in the transfer-matrix kernel). After at least
  * {@link TransferMatrixKernel#MIN_BLOCKS} blocks the run stops when the error reaches the target;
- * after {@code spec.maxSlices()} slices it stops unconverged.
+ * after {@code spec.maxSlices()} slices it stops unconverged. In a band of a clean bar γ → 0 and may
+ * come out slightly negative; the caller treats γ ≤ 0 as not converged.
  *
- * <p><b>Failure outcomes</b> (NaN exponent, not an exception): an exactly singular E − H_N − Σ (E
- * an eigenvalue of the bar grown so far; measure zero with disorder, but possible for clean,
- * symmetric slices), an overflow, or G_{1N} = 0 (the slices decouple, γ = ∞).
+ * <p><b>Failure outcomes</b> (NaN exponent, not an exception): a zero or non-finite diagonal entry
+ * of R, an overflow, or a one-slice factor ‖M A_n‖ ≤ {@link #DECOUPLED} (the slices decouple to
+ * working precision, e.g. T = 0: γ = ∞).
  *
  * <p><b>Randomness.</b> None drawn here: the {@link SliceSource} supplies H_n and T_n for n = 1,
- * 2, … in order.
+ * 2, … in order, once each.
  *
- * <p><b>Cost.</b> Per slice one LDLᴴ factorisation and solve (≈ 4K³/3 complex multiply–adds) and
- * four K × K products (4K³); memory O(K²), independent of the length.
+ * <p><b>Cost.</b> Per slice two Householder QRs of 2K × K complex matrices and the formation of K
+ * columns of Q (pure Java, O(K³)), a triangular solve and three K × K products; memory O(K²),
+ * independent of the length. Not benchmarked against the previous engine.
  */
 public final class GreenRecursionKernel {
 
   /** Slices per error block (same as {@link TransferMatrixKernel#QR_INTERVAL}, so both kernels' errors compare). */
   public static final int BLOCK_SLICES = 4;
+
+  /**
+   * A one-slice factor ‖M A_n‖ (M of unit norm) at or below this means the slices are decoupled to
+   * working precision (e.g. T_n = 0 gives rounding-level C): a failure outcome, γ ≳ −ln(64 ε) ≈ 31
+   * per slice is beyond what double precision resolves.
+   */
+  static final double DECOUPLED = 64 * Math.ulp(1.0);
 
   /** Supplies the slices of the bar. */
   @FunctionalInterface
@@ -96,6 +128,8 @@ public final class GreenRecursionKernel {
     boolean converged = false;
     boolean broken = false;
     boolean first = true;
+    initialFrame(ws, k);
+    ws.previousCoupling.setTo(ws.identity);
 
     outer:
     while (slices < spec.maxSlices()) {
@@ -104,41 +138,45 @@ public final class GreenRecursionKernel {
         ws.onSlice.zero();
         ws.coupling.zero();
         source.next(ws.onSlice, ws.coupling);
-        // a = E − H_n − Σ_n, Σ_n = T_{n−1} G_{n−1} T_{n−1}† (zero for the first slice)
-        double[] a = ws.a.data;
-        double[] h = ws.onSlice.data;
-        double[] sigma = ws.sigma.data;
+        // Z = (E − H_n) P − T_{n−1} Q for the frame [P; Q] of pairs (ψ_n, ψ_{n−1})
+        ws.products.mult(ws.onSlice, ws.frameTop, ws.z);
+        ws.products.mult(ws.previousCoupling, ws.frameBottom, ws.scratch);
+        double[] z = ws.z.data;
+        double[] p = ws.frameTop.data;
+        double[] tq = ws.scratch.data;
         int len = 2 * k * k;
         for (int i = 0; i < len; i++) {
-          a[i] = -h[i] - (first ? 0.0 : sigma[i]);
+          z[i] = energy * p[i] - z[i] - tq[i];
         }
-        for (int i = 0; i < k; i++) {
-          a[2 * (i * k + i)] += energy;
-        }
-        if (!ws.ldlt.factor(ws.a)) {
+        // B† = [T_n; −Z†]; ker B = {(ψ_{n+1}, c) : T_n† ψ_{n+1} = Z c} = last K columns of B†'s full Q
+        stack(ws.coupling, ws.z, true, ws.stacked);
+        ComplexHouseholderOps.factor(ws.stacked, ws.reflectors);
+        ComplexHouseholderOps.formQ(ws.reflectors, k, ws.kernel);
+        // new pairs (ψ_{n+1}, ψ_n) = [X; P C], orthonormalised: [X; P C] = F' R
+        split(ws.kernel, ws.x, ws.c);
+        ws.products.mult(ws.frameTop, ws.c, ws.scratch);
+        stack(ws.x, ws.scratch, false, ws.stacked);
+        ComplexHouseholderOps.factor(ws.stacked, ws.reflectors);
+        ComplexHouseholderOps.formQ(ws.reflectors, 0, ws.kernel);
+        split(ws.kernel, ws.frameTop, ws.frameBottom);
+        // A_n = C R⁻¹ maps new-frame coordinates to old ones; M ← M A_n
+        if (!solveRight(ws.c, ws.stacked, ws.a)) {
           broken = true;
           break outer;
         }
-        ws.green.setTo(ws.identity);
-        ws.ldlt.solve(ws.green);
-        // G_{1n} = G_{1,n−1} T_{n−1}† G_n (G_{11} = G_1)
         if (first) {
-          ws.endToEnd.setTo(ws.green);
+          ws.product.setTo(ws.a);
         } else {
-          ws.products.multConjTransB(ws.endToEnd, ws.previousCoupling, ws.scratch);
-          ws.products.mult(ws.scratch, ws.green, ws.endToEnd);
+          ws.products.mult(ws.product, ws.a, ws.scratch);
+          ws.product.setTo(ws.scratch);
         }
-        double norm = frobenius(ws.endToEnd);
-        if (!(norm > 0) || !Double.isFinite(norm)) {
+        double norm = frobenius(ws.product);
+        if (!(norm > DECOUPLED) || !Double.isFinite(norm)) {
           broken = true;
           break outer;
         }
-        scale(ws.endToEnd, 1.0 / norm);
+        scale(ws.product, 1.0 / norm);
         blockLog += Math.log(norm);
-        // Σ_{n+1} = T_n G_n T_n†, kept Hermitian against rounding drift
-        ws.products.mult(ws.coupling, ws.green, ws.scratch);
-        ws.products.multConjTransB(ws.scratch, ws.coupling, ws.sigma);
-        hermitise(ws.sigma);
         ws.previousCoupling.setTo(ws.coupling);
         first = false;
       }
@@ -161,9 +199,92 @@ public final class GreenRecursionKernel {
         }
       }
     }
-    // |rate|: at an energy where an open end of the bar holds a protected zero mode, ‖G_1N‖ grows at the same rate
-    double gamma = counted == 0 || broken ? Double.NaN : Math.abs(sum / (counted * (double) BLOCK_SLICES));
+    double gamma = counted == 0 || broken ? Double.NaN : sum / (counted * (double) BLOCK_SLICES);
     return new LyapunovResult(gamma, broken ? Double.NaN : relativeError, slices, converged && !broken, new double[] {gamma});
+  }
+
+  /**
+   * A fixed generic starting frame (ψ_1, ψ_0) (a deterministic quasi-random 2K × K matrix,
+   * orthonormalised), so that no open-end boundary condition, and no end zero mode, is imposed.
+   */
+  private static void initialFrame(GreenRecursionWorkspace ws, int k) {
+    double[] s = ws.stacked.data;
+    int len = 2 * (2 * k) * k;
+    for (int i = 0; i < len; i++) {
+      // golden-ratio Weyl sequence, centred: no structure a Hamiltonian could share
+      double u = (i + 1) * 0.6180339887498949;
+      s[i] = (u - Math.floor(u)) - 0.5;
+    }
+    ComplexHouseholderOps.factor(ws.stacked, ws.reflectors);
+    ComplexHouseholderOps.formQ(ws.reflectors, 0, ws.kernel);
+    split(ws.kernel, ws.frameTop, ws.frameBottom);
+  }
+
+  /** out (2K × K) ← [top; bottom] or, if {@code negConjBottom}, [top; −bottom†]. */
+  private static void stack(ZMatrixRMaj top, ZMatrixRMaj bottom, boolean negConjBottom, ZMatrixRMaj out) {
+    int k = top.numRows;
+    double[] o = out.data;
+    double[] t = top.data;
+    double[] b = bottom.data;
+    System.arraycopy(t, 0, o, 0, 2 * k * k);
+    int off = 2 * k * k;
+    for (int i = 0; i < k; i++) {
+      for (int j = 0; j < k; j++) {
+        int ij = 2 * (i * k + j);
+        if (negConjBottom) {
+          int ji = 2 * (j * k + i);
+          o[off + ij] = -b[ji];
+          o[off + ij + 1] = b[ji + 1];
+        } else {
+          o[off + ij] = b[ij];
+          o[off + ij + 1] = b[ij + 1];
+        }
+      }
+    }
+  }
+
+  /** [top; bottom] ← in (2K × K). */
+  private static void split(ZMatrixRMaj in, ZMatrixRMaj top, ZMatrixRMaj bottom) {
+    int len = 2 * top.numRows * top.numCols;
+    System.arraycopy(in.data, 0, top.data, 0, len);
+    System.arraycopy(in.data, len, bottom.data, 0, len);
+  }
+
+  /**
+   * out ← c R⁻¹ with R the upper K × K triangle of {@code r} (2K × K), by substitution along each
+   * row; false if a diagonal entry of R is zero or the result is not finite.
+   */
+  private static boolean solveRight(ZMatrixRMaj c, ZMatrixRMaj r, ZMatrixRMaj out) {
+    int k = c.numRows;
+    double[] cd = c.data;
+    double[] rd = r.data;
+    double[] o = out.data;
+    for (int row = 0; row < k; row++) {
+      for (int j = 0; j < k; j++) {
+        int oj = 2 * (row * k + j);
+        double re = cd[oj];
+        double im = cd[oj + 1];
+        for (int l = 0; l < j; l++) {
+          int ol = 2 * (row * k + l);
+          int lj = 2 * (l * k + j);
+          re -= o[ol] * rd[lj] - o[ol + 1] * rd[lj + 1];
+          im -= o[ol] * rd[lj + 1] + o[ol + 1] * rd[lj];
+        }
+        int jj = 2 * (j * k + j);
+        double dr = rd[jj];
+        double di = rd[jj + 1];
+        double den = dr * dr + di * di;
+        if (!(den > 0)) {
+          return false;
+        }
+        o[oj] = (re * dr + im * di) / den;
+        o[oj + 1] = (im * dr - re * di) / den;
+        if (!Double.isFinite(o[oj]) || !Double.isFinite(o[oj + 1])) {
+          return false;
+        }
+      }
+    }
+    return true;
   }
 
   private static double frobenius(ZMatrixRMaj a) {
@@ -181,26 +302,6 @@ public final class GreenRecursionKernel {
     int len = a.getDataLength();
     for (int i = 0; i < len; i++) {
       d[i] *= factor;
-    }
-  }
-
-  /** a ← (a + a†)/2. */
-  private static void hermitise(ZMatrixRMaj a) {
-    int n = a.numRows;
-    double[] d = a.data;
-    for (int i = 0; i < n; i++) {
-      int ii = 2 * (i * n + i);
-      d[ii + 1] = 0.0;
-      for (int j = 0; j < i; j++) {
-        int ij = 2 * (i * n + j);
-        int ji = 2 * (j * n + i);
-        double re = 0.5 * (d[ij] + d[ji]);
-        double im = 0.5 * (d[ij + 1] - d[ji + 1]);
-        d[ij] = re;
-        d[ij + 1] = im;
-        d[ji] = re;
-        d[ji + 1] = -im;
-      }
     }
   }
 }

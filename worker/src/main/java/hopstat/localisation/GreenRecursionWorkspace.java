@@ -1,22 +1,21 @@
 package hopstat.localisation;
 
 import hopstat.linalg.ComplexProducts;
-import hopstat.linalg.HermitianLdltFactory;
-import hopstat.linalg.HermitianLdltSolver;
 import hopstat.linalg.Linalg;
 import hopstat.linalg.LinalgFactory;
 import hopstat.linalg.LinalgKind;
 import org.ejml.data.ZMatrixRMaj;
 
 /**
- * Scratch for {@link GreenRecursionKernel}: eight K × K complex blocks (the slice's H and T, the
- * previous T, the self-energy, the matrix to factor, G_nn, G_1n and a product buffer), an LDLᴴ
- * solver and a product engine. Memory O(K²), independent of the bar length. Grows, never shrinks.
- * One per worker thread.
+ * Scratch for {@link GreenRecursionKernel}: twelve K × K complex blocks (the slice's H and T, the
+ * previous T, the two halves of the solution frame, Z, the kernel halves X and C, A_n, the
+ * accumulated product, a buffer and the identity), three 2K × K blocks (stacked matrix, Householder
+ * reflectors, Q columns) and a product engine. Memory O(K²), independent of the bar length. Grows,
+ * never shrinks. One per worker thread.
  *
- * <p>Backend: slices of K ≤ {@link #SMALL_SLICE} orbitals use the pure-Java solver and products
- * whatever {@code linalg} is, because each native call crosses JNI and copies its operands, a fixed
- * cost expected to dominate 2 × 2 or 4 × 4 blocks; larger slices use {@code linalg}'s kind. The
+ * <p>Backend: the Householder steps are pure Java for every K. Slices of K ≤ {@link #SMALL_SLICE}
+ * orbitals use the pure-Java products whatever {@code linalg} is, because each native call crosses
+ * JNI and copies its operands, a fixed cost expected to dominate 2 × 2 or 4 × 4 blocks; larger slices use {@code linalg}'s kind. The
  * threshold is a design guess, not yet backed by a benchmark.
  */
 public final class GreenRecursionWorkspace {
@@ -30,17 +29,20 @@ public final class GreenRecursionWorkspace {
   ZMatrixRMaj onSlice = new ZMatrixRMaj(1, 1);
   ZMatrixRMaj coupling = new ZMatrixRMaj(1, 1);
   ZMatrixRMaj previousCoupling = new ZMatrixRMaj(1, 1);
-  ZMatrixRMaj sigma = new ZMatrixRMaj(1, 1);
+  ZMatrixRMaj frameTop = new ZMatrixRMaj(1, 1);
+  ZMatrixRMaj frameBottom = new ZMatrixRMaj(1, 1);
+  ZMatrixRMaj z = new ZMatrixRMaj(1, 1);
+  ZMatrixRMaj x = new ZMatrixRMaj(1, 1);
+  ZMatrixRMaj c = new ZMatrixRMaj(1, 1);
   ZMatrixRMaj a = new ZMatrixRMaj(1, 1);
-  ZMatrixRMaj green = new ZMatrixRMaj(1, 1);
-  ZMatrixRMaj endToEnd = new ZMatrixRMaj(1, 1);
+  ZMatrixRMaj product = new ZMatrixRMaj(1, 1);
   ZMatrixRMaj scratch = new ZMatrixRMaj(1, 1);
   ZMatrixRMaj identity = new ZMatrixRMaj(1, 1);
-  HermitianLdltSolver ldlt;
+  ZMatrixRMaj stacked = new ZMatrixRMaj(2, 1);
+  ZMatrixRMaj reflectors = new ZMatrixRMaj(2, 1);
+  ZMatrixRMaj kernel = new ZMatrixRMaj(2, 1);
   ComplexProducts products;
-  private HermitianLdltSolver ldltLarge;
   private ComplexProducts productsLarge;
-  private HermitianLdltSolver ldltSmall;
   private ComplexProducts productsSmall;
 
   /** @param linalg the backend for slices larger than {@link #SMALL_SLICE}; read */
@@ -50,25 +52,24 @@ public final class GreenRecursionWorkspace {
 
   void ensure(int k) {
     if (k <= SMALL_SLICE) {
-      if (ldltSmall == null) {
-        ldltSmall = HermitianLdltFactory.create(small);
+      if (productsSmall == null) {
         productsSmall = small.newComplexProducts();
       }
-      ldlt = ldltSmall;
       products = productsSmall;
     } else {
-      if (ldltLarge == null) {
-        ldltLarge = HermitianLdltFactory.create(linalg);
+      if (productsLarge == null) {
         productsLarge = linalg.newComplexProducts();
       }
-      ldlt = ldltLarge;
       products = productsLarge;
     }
     if (k == sizedFor) {
       return;
     }
-    for (ZMatrixRMaj m : new ZMatrixRMaj[] {onSlice, coupling, previousCoupling, sigma, a, green, endToEnd, scratch, identity}) {
+    for (ZMatrixRMaj m : new ZMatrixRMaj[] {onSlice, coupling, previousCoupling, frameTop, frameBottom, z, x, c, a, product, scratch, identity}) {
       m.reshape(k, k);
+    }
+    for (ZMatrixRMaj m : new ZMatrixRMaj[] {stacked, reflectors, kernel}) {
+      m.reshape(2 * k, k);
     }
     identity.zero();
     for (int i = 0; i < k; i++) {

@@ -35,8 +35,9 @@ import org.ejml.data.ZMatrixRMaj;
  * <p><b>Engines.</b> Models implementing {@link SliceHamiltonian} (the {@code anderson-1d/2d/3d}
  * models: real slices, invertible T = −t·1) run the real transfer-matrix QR iteration {@link
  * TransferMatrixKernel}, kept because it is tested against Kappus–Wegner and closed forms and costs
- * O(K²) per slice for their diagonal T. Every other model with d ≥ 1 runs the recursive Green's
- * function {@link GreenRecursionKernel} on slices cut from the model's own clean Hamiltonian by
+ * O(K²) per slice for their diagonal T. Every other model with d ≥ 1 runs {@link
+ * GreenRecursionKernel} (a QR-stabilised solution-frame recursion that never inverts a coupling)
+ * on slices cut from the model's own clean Hamiltonian by
  * {@link BarSliceOps} (complex slices, singular couplings allowed, e.g. BdG wires at Δ = t and the
  * QWZ hopping): qwz, haldane, flux-square, pip-square, bhz, pwave-wire, ising-chain, ssh and custom
  * models whose terms join neighbouring cells along their last direction only. Both engines agree
@@ -77,7 +78,8 @@ final class LyapunovObservable implements Observable {
         + " lyapunov-error <= lyapunovError (default 0.01) or lyapunovMaxLength slices (default 1e7, then the realisation fails)."
         + " Disorder is drawn slice by slice. anderson-*: real transfer-matrix QR; every other model with d >= 1 (qwz, haldane,"
         + " flux-square, pip-square, bhz, pwave-wire, ising-chain, ssh, custom with nearest-cell terms along the last direction):"
-        + " recursive Green's function, complex and BdG slices allowed. Disorder kinds: onsite-box, onsite-gauss, field-box,"
+        + " QR-stabilised solution-frame recursion (no coupling inverted), complex and BdG slices allowed, several zero modes per end"
+        + " (E = 0 in topological phases) handled. Disorder kinds: onsite-box, onsite-gauss, field-box,"
         + " coupling-box, pairing-box, bond-box.";
   }
 
@@ -192,7 +194,7 @@ final class LyapunovObservable implements Observable {
     return TransferMatrixKernel.run(hopping, k, spec, source, workspace);
   }
 
-  /** Every other model: slices cut from the clean Hamiltonian, recursive Green's function. */
+  /** Every other model: slices cut from the clean Hamiltonian, {@link GreenRecursionKernel}. */
   private static LyapunovResult runGreenRecursion(RealisationContext context, ParameterValues parameters, int crossSection,
       LyapunovSpec spec, List<DisorderTerm> terms, List<DisorderKind> kinds) {
     Model model = context.model();

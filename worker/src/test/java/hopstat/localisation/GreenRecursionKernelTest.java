@@ -3,7 +3,12 @@ package hopstat.localisation;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.data.Offset.offset;
 
+import hopstat.lattice.Boundary;
 import hopstat.linalg.LinalgFactory;
+import hopstat.model.DiiiWireBloch;
+import hopstat.model.ModelCatalog;
+import hopstat.model.ParameterValues;
+import java.util.Map;
 import java.util.SplittableRandom;
 import org.ejml.data.ZMatrixRMaj;
 import org.junit.jupiter.api.Test;
@@ -136,6 +141,161 @@ class GreenRecursionKernelTest {
     double expected = w * w / 105.045;
     assertThat(r.converged()).isTrue();
     assertThat(r.smallestPositive()).isCloseTo(expected, offset(expected * (3 * r.relativeError() + 0.03)));
+  }
+
+  /** diii-wire slices cut by {@link BarSliceOps} from the model's own clean Hamiltonian (Δ = t = 1). */
+  private static BarSlices diiiSlices(double mu, double lambda) {
+    return BarSliceOps.extract(ModelCatalog.find("diii-wire").orElseThrow(),
+        new ParameterValues(Map.of("mu", mu, "t", 1.0, "delta", 1.0, "lambda", lambda)), 1, Boundary.OPEN);
+  }
+
+  /**
+   * diii-wire (class DIII, K = 4, a Kramers pair of Majorana zero modes per end) at λ = 0, Δ = t, E
+   * = 0 with random μ_j = μ + W u_j (onsite, both spins): the two spin blocks are Kitaev chains, so
+   * γ = |⟨ln|μ_j|⟩ − ln|2t|| (derived Majorana recursion as above; criterion of Motrunich, Damle,
+   * Huse, PRB 63, 224204 (2001)), averaged over the counted slices. Both phases (μ = 0.5
+   * topological, μ = 3 trivial). Tolerance 20/N_counted for the boundary terms, as above.
+   */
+  @Test
+  void diiiWireWithoutSpinOrbitIsTwoKitaevChains() {
+    for (double mean : new double[] {0.5, 3.0}) {
+      BarSlices bar = diiiSlices(mean, 0.0);
+      SplittableRandom rng = new SplittableRandom(7);
+      double[] logs = new double[20_000];
+      int[] n = {0};
+      double w = 1.0;
+      LyapunovResult r = GreenRecursionKernel.run(4, new LyapunovSpec(0.0, 0.0, 12_000), (h, c) -> {
+        double v = w * (rng.nextDouble() - 0.5);
+        bar.copyOnSlice(h);
+        bar.copyCoupling(c);
+        for (int o = 0; o < 4; o++) {
+          h.set(o, o, h.getReal(o, o) + (o % 2 == 0 ? -v : v), 0);
+        }
+        logs[n[0]++] = Math.log(Math.abs(mean + v));
+      }, workspace);
+      int warm = 64; // max(64, 10 K) for K = 4
+      double s = 0;
+      for (int j = warm; j < n[0]; j++) {
+        s += logs[j];
+      }
+      double expected = Math.abs(s / (n[0] - warm) - Math.log(2.0));
+      assertThat(r.smallestPositive()).as("mu %s", mean).isCloseTo(expected, offset(20.0 / (n[0] - warm)));
+    }
+  }
+
+  /**
+   * Clean diii-wire at E = 0 with spin–orbit coupling λ ≠ 0 (the case that used to break down):
+   * γ is the slowest evanescent decay of the 4 × 4 Bloch problem, from the roots of det H(z) = 0,
+   * z = e^{ik} continued off the unit circle, with H(k) = ξ_k τ_z + 2Δ sin k τ_y + 2λ sin k s_x, ξ_k
+   * = −2t cos k − μ (derived; Bloch form independent of the model's real-space entries and of the
+   * kernel: {@link DiiiWireBloch#continued}, {@link EvanescentRoots}). Topological (|μ| &lt; 2t) and trivial points. A
+   * deterministic clean run: tolerance 2e-3 γ + 5/N as in the Kitaev test above.
+   */
+  @Test
+  void cleanDiiiWireWithSpinOrbitFollowsTheBlochRoots() {
+    double[][] cases = {{0.5, 0.3}, {1.0, 0.6}, {-1.2, 0.8}, {3.0, 0.3}};
+    for (double[] c : cases) {
+      double mu = c[0];
+      double lambda = c[1];
+      double expected = EvanescentRoots.slowestDecay(4, (z, h) -> DiiiWireBloch.continued(z, mu, 1.0, 1.0, lambda, h));
+      BarSlices bar = diiiSlices(mu, lambda);
+      LyapunovResult r = GreenRecursionKernel.run(4, new LyapunovSpec(0.0, 1e-9, 4_000), (h, t) -> {
+        bar.copyOnSlice(h);
+        bar.copyCoupling(t);
+      }, workspace);
+      assertThat(expected).isFinite().isPositive();
+      assertThat(r.smallestPositive()).as("mu %s lambda %s", mu, lambda).isCloseTo(expected, offset(2e-3 * expected + 5.0 / r.slices()));
+    }
+  }
+
+  /**
+   * Two SSH chains (class BDI) side by side, K = 4 (A1, B1, A2, B2), E = 0, random bonds v_{i,n} =
+   * v_i + W u, w_{i,n} = w_i + W u: each channel has γ_i = |⟨ln|w_i|⟩ − ⟨ln|v_i|⟩| (derived: the
+   * E = 0 equations of a bipartite chain give ψ_A(n+1) = −(v_n/w_n) ψ_A(n); criterion of
+   * Mondragon-Shem, Hughes, Song, Prodan, PRL 113, 046802 (2014)), and the smallest positive
+   * exponent is the smaller γ_i (derived: decoupled channels). Winding 2 (both chains topological,
+   * two zero modes per end with different decay lengths) and a mixed pair (one topological, one
+   * trivial, the trivial one slower): in both an end-to-end growth rate would report the faster
+   * topological channel. Tolerance 20/N_counted for the boundary terms.
+   */
+  @Test
+  void twoSshChainsGiveTheSlowerChannelWhateverTheirWinding() {
+    double[][] cases = {{0.3, 1.0, 0.7, 1.0}, {0.3, 1.0, 1.4, 1.0}};
+    for (double[] c : cases) {
+      SplittableRandom rng = new SplittableRandom(13);
+      double w = 0.2;
+      double[][] logs = new double[4][12_000];
+      int[] n = {0};
+      LyapunovResult r = GreenRecursionKernel.run(4, new LyapunovSpec(0.0, 0.0, 8_000), (h, t) -> {
+        for (int ch = 0; ch < 2; ch++) {
+          double v = c[2 * ch] + w * (rng.nextDouble() - 0.5);
+          double hop = c[2 * ch + 1] + w * (rng.nextDouble() - 0.5);
+          int a = 2 * ch;
+          h.set(a, a + 1, v, 0);
+          h.set(a + 1, a, v, 0);
+          t.set(a, a + 1, hop, 0); // A of slice n+1 to B of slice n
+          logs[2 * ch][n[0]] = Math.log(Math.abs(v));
+          logs[2 * ch + 1][n[0]] = Math.log(Math.abs(hop));
+        }
+        n[0]++;
+      }, workspace);
+      int warm = 64;
+      double expected = Double.POSITIVE_INFINITY;
+      for (int ch = 0; ch < 2; ch++) {
+        double s = 0;
+        for (int j = warm; j < n[0]; j++) {
+          s += logs[2 * ch + 1][j] - logs[2 * ch][j];
+        }
+        expected = Math.min(expected, Math.abs(s / (n[0] - warm)));
+      }
+      assertThat(r.smallestPositive()).as("v/w %s", java.util.Arrays.toString(c)).isCloseTo(expected, offset(20.0 / (n[0] - warm)));
+    }
+  }
+
+  /**
+   * Two clean SSH chains coupled by BDI-preserving A–B hoppings (u inside a cell, u' between cells),
+   * so the channels mix, both topological (winding 2): γ = the slowest evanescent root of det[H +
+   * T/z + T† z] = 0 (derived, {@link EvanescentRoots}). Tolerance as in the clean wire tests.
+   */
+  @Test
+  void coupledSshChainsWithWindingTwoFollowTheBlochRoots() {
+    double v1 = 0.3;
+    double w1 = 1.0;
+    double v2 = 0.5;
+    double w2 = 1.2;
+    double u = 0.15;
+    double up = 0.1;
+    double[] hm = new double[16];
+    double[] tm = new double[16];
+    hm[0 * 4 + 1] = v1;
+    hm[1 * 4 + 0] = v1;
+    hm[2 * 4 + 3] = v2;
+    hm[3 * 4 + 2] = v2;
+    hm[0 * 4 + 3] = u;
+    hm[3 * 4 + 0] = u;
+    tm[0 * 4 + 1] = w1;
+    tm[2 * 4 + 3] = w2;
+    tm[2 * 4 + 1] = up;
+    double expected = EvanescentRoots.slowestDecay(4, (z, h) -> {
+      double n2 = z[0] * z[0] + z[1] * z[1];
+      for (int i = 0; i < 4; i++) {
+        for (int j = 0; j < 4; j++) {
+          // H + T/z + T† z (T real)
+          h[0][i * 4 + j] = hm[i * 4 + j] + tm[i * 4 + j] * z[0] / n2 + tm[j * 4 + i] * z[0];
+          h[1][i * 4 + j] = -tm[i * 4 + j] * z[1] / n2 + tm[j * 4 + i] * z[1];
+        }
+      }
+    });
+    LyapunovResult r = GreenRecursionKernel.run(4, new LyapunovSpec(0.0, 1e-9, 4_000), (h, t) -> {
+      for (int i = 0; i < 4; i++) {
+        for (int j = 0; j < 4; j++) {
+          h.set(i, j, hm[i * 4 + j], 0);
+          t.set(i, j, tm[i * 4 + j], 0);
+        }
+      }
+    }, workspace);
+    assertThat(expected).isFinite().isPositive();
+    assertThat(r.smallestPositive()).isCloseTo(expected, offset(2e-3 * expected + 5.0 / r.slices()));
   }
 
   /** Decoupled slices (T = 0): G_1N = 0, a recorded failure (NaN), not an exception. */

@@ -54,4 +54,45 @@ public final class DiiiWireBloch {
     }
     return min;
   }
+
+  /**
+   * {@link #hamiltonian} continued to complex z = e^{ik}: cos k = (z + 1/z)/2, sin k = (z − 1/z)/2i
+   * (entries analytic in z, not Hermitian off the unit circle), for the evanescent roots of det H(z).
+   *
+   * @param z (re, im)
+   * @param h overwritten: {re[16], im[16]} row-major
+   */
+  public static void continued(double[] z, double mu, double t, double delta, double lambda, double[][] h) {
+    double n2 = z[0] * z[0] + z[1] * z[1];
+    double ir = z[0] / n2;
+    double ii = -z[1] / n2;
+    // cos k, sin k
+    double cr = 0.5 * (z[0] + ir);
+    double ci = 0.5 * (z[1] + ii);
+    double dr = 0.5 * (z[0] - ir);
+    double di = 0.5 * (z[1] - ii);
+    double sr = di;
+    double si = -dr;
+    double xr = -2 * t * cr - mu;
+    double xi = -2 * t * ci;
+    java.util.Arrays.fill(h[0], 0);
+    java.util.Arrays.fill(h[1], 0);
+    for (int spin = 0; spin < 2; spin++) {
+      int o = 2 * spin;
+      set(h, o, o, xr, xi);
+      set(h, o + 1, o + 1, -xr, -xi);
+      // 2Δ sin k τ_y: (o, o+1) = −2iΔ s, (o+1, o) = +2iΔ s
+      set(h, o, o + 1, 2 * delta * si, -2 * delta * sr);
+      set(h, o + 1, o, -2 * delta * si, 2 * delta * sr);
+    }
+    for (int n = 0; n < 2; n++) {
+      set(h, n, n + 2, 2 * lambda * sr, 2 * lambda * si);
+      set(h, n + 2, n, 2 * lambda * sr, 2 * lambda * si);
+    }
+  }
+
+  private static void set(double[][] h, int i, int j, double re, double im) {
+    h[0][i * 4 + j] = re;
+    h[1][i * 4 + j] = im;
+  }
 }
