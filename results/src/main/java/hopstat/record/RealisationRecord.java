@@ -17,7 +17,11 @@ import java.util.Objects;
  * @param linalg linear-algebra backend that computed it
  */
 public record RealisationRecord(
-    RealisationResult result, Map<String, Double> grid, Map<String, Double> parameters, String toolVersion, String linalg) {
+    RealisationResult result,
+    Map<String, Double> grid,
+    Map<String, Double> parameters,
+    String toolVersion,
+    String linalg) {
   public RealisationRecord {
     Objects.requireNonNull(result, "result");
     grid = Collections.unmodifiableMap(new LinkedHashMap<>(grid));

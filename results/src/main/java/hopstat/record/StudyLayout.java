@@ -18,10 +18,16 @@ import java.util.Map;
  * @param quantities measured quantities in observable order
  * @param plannedPerPoint realisations requested per point (the maximum under adaptive sampling)
  * @param effectiveClass the Altland–Zirnbauer class of the model with the spec's disorder (what the
- *     disorder keeps of the clean class); null when unknown. Used to pick the Wigner–Dyson reference
- *     of level statistics (the records do not carry it).
+ *     disorder keeps of the clean class); null when unknown. Used to pick the Wigner–Dyson
+ *     reference of level statistics (the records do not carry it).
  */
-public record StudyLayout(String name, String specHash, List<String> gridNames, List<Point> points, List<Quantity> quantities, int plannedPerPoint,
+public record StudyLayout(
+    String name,
+    String specHash,
+    List<String> gridNames,
+    List<Point> points,
+    List<Quantity> quantities,
+    int plannedPerPoint,
     SymmetryClass effectiveClass) {
 
   public StudyLayout {
@@ -31,7 +37,13 @@ public record StudyLayout(String name, String specHash, List<String> gridNames, 
   }
 
   /** A layout whose effective symmetry class is unknown. */
-  public StudyLayout(String name, String specHash, List<String> gridNames, List<Point> points, List<Quantity> quantities, int plannedPerPoint) {
+  public StudyLayout(
+      String name,
+      String specHash,
+      List<String> gridNames,
+      List<Point> points,
+      List<Quantity> quantities,
+      int plannedPerPoint) {
     this(name, specHash, gridNames, points, quantities, plannedPerPoint, null);
   }
 

@@ -15,8 +15,21 @@ import java.util.List;
  */
 final class BoundaryCsvFormat implements ReportFormat {
 
-  static final List<String> COLUMNS = List.of("kind", "quantity", "axis", "fixed", "level", "size_low", "size_high", "estimate", "ci95_low", "ci95_high",
-      "exists_fraction", "resamples", "nearest_point");
+  static final List<String> COLUMNS =
+      List.of(
+          "kind",
+          "quantity",
+          "axis",
+          "fixed",
+          "level",
+          "size_low",
+          "size_high",
+          "estimate",
+          "ci95_low",
+          "ci95_high",
+          "exists_fraction",
+          "resamples",
+          "nearest_point");
 
   @Override
   public String fileName() {
@@ -32,7 +45,14 @@ final class BoundaryCsvFormat implements ReportFormat {
       row.add(b.quantity());
       row.add(b.axis());
       StringBuilder fixed = new StringBuilder();
-      b.fixed().forEach((k, v) -> fixed.append(fixed.length() > 0 ? ";" : "").append(k).append('=').append(NumberText.of(v)));
+      b.fixed()
+          .forEach(
+              (k, v) ->
+                  fixed
+                      .append(fixed.length() > 0 ? ";" : "")
+                      .append(k)
+                      .append('=')
+                      .append(NumberText.of(v)));
       row.add(fixed.toString());
       row.add(NumberText.of(b.level()));
       row.add(NumberText.of(b.sizeLow()));

@@ -3,10 +3,10 @@ package hopstat.report;
 import hopstat.statistics.IntegerDistribution;
 import hopstat.statistics.MeanEstimate;
 import hopstat.statistics.PointSummary;
-import hopstat.statistics.QuantitySummary;
 import hopstat.statistics.Quantiles;
-import hopstat.statistics.TypicalValue;
+import hopstat.statistics.QuantitySummary;
 import hopstat.statistics.Summary;
+import hopstat.statistics.TypicalValue;
 import java.io.IOException;
 import java.io.Writer;
 import java.util.ArrayList;
@@ -19,15 +19,38 @@ import java.util.List;
  * boot95_high, typical, typical_ci95_low, typical_ci95_high}. modal..max_int_distance are empty for
  * quantities that are not integer-valued; q05..q95 are type-7 sample quantiles; boot95_* is the
  * percentile-bootstrap interval of the mean; typical* is the geometric mean with its log-scale
- * Student-t interval, empty unless every sample is positive and the quantity is not
- * integer-valued. Empty cells mean "not defined" (e.g. stderr for n = 1). Columns are only ever
- * appended, never renamed or reordered.
+ * Student-t interval, empty unless every sample is positive and the quantity is not integer-valued.
+ * Empty cells mean "not defined" (e.g. stderr for n = 1). Columns are only ever appended, never
+ * renamed or reordered.
  */
 final class CsvSummaryFormat implements ReportFormat {
 
-  static final List<String> STAT_COLUMNS = List.of("observable", "n", "mean", "stderr", "ci95_low", "ci95_high", "std", "median", "min", "max",
-      "failed", "modal", "modal_fraction", "non_quantised", "max_int_distance", "q05", "q25", "q75", "q95", "boot95_low", "boot95_high", "typical",
-      "typical_ci95_low", "typical_ci95_high");
+  static final List<String> STAT_COLUMNS =
+      List.of(
+          "observable",
+          "n",
+          "mean",
+          "stderr",
+          "ci95_low",
+          "ci95_high",
+          "std",
+          "median",
+          "min",
+          "max",
+          "failed",
+          "modal",
+          "modal_fraction",
+          "non_quantised",
+          "max_int_distance",
+          "q05",
+          "q25",
+          "q75",
+          "q95",
+          "boot95_low",
+          "boot95_high",
+          "typical",
+          "typical_ci95_low",
+          "typical_ci95_high");
 
   @Override
   public String fileName() {

@@ -5,11 +5,8 @@ import com.fasterxml.jackson.core.JsonGenerator;
 import hopstat.statistics.BootstrapOps;
 import hopstat.statistics.BoundaryEstimate;
 import hopstat.statistics.IntegerDistribution;
-import hopstat.statistics.Quantiles;
-import hopstat.statistics.TypicalValue;
-import hopstat.statistics.ValueProbability;
-import hopstat.statistics.MeanEstimate;
 import hopstat.statistics.Interval;
+import hopstat.statistics.MeanEstimate;
 import hopstat.statistics.MobilityAgreement;
 import hopstat.statistics.MobilityCurve;
 import hopstat.statistics.MobilityEdge;
@@ -18,9 +15,12 @@ import hopstat.statistics.MobilityMethod;
 import hopstat.statistics.MobilityOps;
 import hopstat.statistics.MobilitySummary;
 import hopstat.statistics.PointSummary;
+import hopstat.statistics.Quantiles;
 import hopstat.statistics.QuantitySummary;
 import hopstat.statistics.SampleStatisticsOps;
 import hopstat.statistics.Summary;
+import hopstat.statistics.TypicalValue;
+import hopstat.statistics.ValueProbability;
 import java.io.IOException;
 import java.io.Writer;
 import java.util.Map;
@@ -31,11 +31,11 @@ import java.util.Map;
  * modal fraction and the largest distance of any sample from its nearest integer. States the
  * estimator, error measure and confidence level. Later additions (appended after the original
  * fields): quantiles, bootstrap interval of the mean, typical value, P(value) with Wilson intervals
- * per integer value, the phase-boundary estimates with their bootstrap intervals, and the
- * {@code mobility} section (mobility edges and gaps by three estimators, see {@link MobilityOps};
- * always present, with empty lists when the study measured nothing they use). Contains
- * nothing that depends on when, where or
- * with how many threads the run happened, so equal journals give byte-identical files.
+ * per integer value, the phase-boundary estimates with their bootstrap intervals, and the {@code
+ * mobility} section (mobility edges and gaps by three estimators, see {@link MobilityOps}; always
+ * present, with empty lists when the study measured nothing they use). Contains nothing that
+ * depends on when, where or with how many threads the run happened, so equal journals give
+ * byte-identical files.
  */
 final class JsonSummaryFormat implements ReportFormat {
 
@@ -62,7 +62,9 @@ final class JsonSummaryFormat implements ReportFormat {
     g.writeNumberField("confidenceLevel", SampleStatisticsOps.CONFIDENCE);
     g.writeStringField("modalFractionInterval", "Wilson score");
     g.writeNumberField("quantisationTolerance", SampleStatisticsOps.QUANTISATION_TOLERANCE);
-    g.writeStringField("excludes", "finite-size and other systematic errors; only disorder-sampling error is included");
+    g.writeStringField(
+        "excludes",
+        "finite-size and other systematic errors; only disorder-sampling error is included");
     g.writeStringField("quantiles", Quantiles.METHOD);
     g.writeStringField("bootstrap", BootstrapOps.METHOD);
     g.writeNumberField("bootstrapResamples", BootstrapOps.RESAMPLES);
@@ -140,7 +142,11 @@ final class JsonSummaryFormat implements ReportFormat {
         g.writeObjectFieldStart(Long.toString(e.getKey()));
         g.writeNumberField("count", e.getValue());
         number(g, "fraction", (double) e.getValue() / d.n());
-        ValueProbability vp = d.probabilities().stream().filter(v -> v.value() == e.getKey()).findFirst().orElseThrow();
+        ValueProbability vp =
+            d.probabilities().stream()
+                .filter(v -> v.value() == e.getKey())
+                .findFirst()
+                .orElseThrow();
         number(g, "wilsonLow", vp.wilsonLow());
         number(g, "wilsonHigh", vp.wilsonHigh());
         g.writeEndObject();
@@ -195,17 +201,24 @@ final class JsonSummaryFormat implements ReportFormat {
   private static void writeMobility(JsonGenerator g, MobilitySummary m) throws IOException {
     g.writeObjectFieldStart("mobility");
     g.writeObjectFieldStart("conventions");
-    g.writeStringField("effectiveClass", m.effectiveClass() == null ? "" : m.effectiveClass().name());
+    g.writeStringField(
+        "effectiveClass", m.effectiveClass() == null ? "" : m.effectiveClass().name());
     g.writeStringField("wignerDysonEnsemble", m.wignerDysonEnsemble());
     number(g, "wignerDysonRatio", m.wignerDysonRatio());
     number(g, "poissonRatio", MobilityOps.POISSON_RATIO);
     number(g, "quantisedFraction", MobilityOps.QUANTISED_FRACTION);
     number(g, "quantisationTolerance", SampleStatisticsOps.QUANTISATION_TOLERANCE);
     number(g, "minWindowPresence", MobilityOps.MIN_WINDOW_PRESENCE);
-    g.writeStringField("reference", "fixed fermiEnergy when common to the curve and inside the scan, else the centre of the scan");
-    g.writeStringField("halfWidth", "(upper - lower)/2 of the window around the reference classed localised (quantised); 0 when the reference is not inside one");
+    g.writeStringField(
+        "reference",
+        "fixed fermiEnergy when common to the curve and inside the scan, else the centre of the scan");
+    g.writeStringField(
+        "halfWidth",
+        "(upper - lower)/2 of the window around the reference classed localised (quantised); 0 when the reference is not inside one");
     g.writeStringField("agreement", "all pairs of 95 % intervals of the half-width overlap");
-    g.writeStringField("excludes", "finite-size drift of crossings and the resolution of the energy grid; only disorder-sampling error is included");
+    g.writeStringField(
+        "excludes",
+        "finite-size drift of crossings and the resolution of the energy grid; only disorder-sampling error is included");
     g.writeEndObject();
     g.writeArrayFieldStart("gaps");
     for (MobilityGap x : m.gaps()) {

@@ -22,9 +22,31 @@ import java.util.Map;
  */
 final class MobilityCsvFormat implements ReportFormat {
 
-  static final List<String> COLUMNS = List.of("record", "method", "quantity", "axis", "fixed", "criterion", "size_low", "size_high", "level", "reference",
-      "estimate", "ci95_low", "ci95_high", "exists_fraction", "lower", "lower_ci95_low", "lower_ci95_high", "upper", "upper_ci95_low", "upper_ci95_high",
-      "lower_open", "upper_open", "resamples");
+  static final List<String> COLUMNS =
+      List.of(
+          "record",
+          "method",
+          "quantity",
+          "axis",
+          "fixed",
+          "criterion",
+          "size_low",
+          "size_high",
+          "level",
+          "reference",
+          "estimate",
+          "ci95_low",
+          "ci95_high",
+          "exists_fraction",
+          "lower",
+          "lower_ci95_low",
+          "lower_ci95_high",
+          "upper",
+          "upper_ci95_low",
+          "upper_ci95_high",
+          "lower_open",
+          "upper_open",
+          "resamples");
 
   @Override
   public String fileName() {
@@ -87,7 +109,9 @@ final class MobilityCsvFormat implements ReportFormat {
 
   private static String fixed(Map<String, Double> fixed) {
     StringBuilder b = new StringBuilder();
-    fixed.forEach((k, v) -> b.append(b.length() > 0 ? ";" : "").append(k).append('=').append(NumberText.of(v)));
+    fixed.forEach(
+        (k, v) ->
+            b.append(b.length() > 0 ? ";" : "").append(k).append('=').append(NumberText.of(v)));
     return b.toString();
   }
 }

@@ -11,8 +11,8 @@ import java.util.Objects;
 import java.util.TreeMap;
 
 /**
- * Provenance shown in report.html and stored as results.h5 attributes. The generation time
- * appears only there, never in summary.csv/summary.json (which stay byte-identical across runs).
+ * Provenance shown in report.html and stored as results.h5 attributes. The generation time appears
+ * only there, never in summary.csv/summary.json (which stay byte-identical across runs).
  *
  * @param specHash SHA-256 of the canonical spec
  * @param reportTool version and commit of the hopstat that wrote the report
@@ -22,8 +22,14 @@ import java.util.TreeMap;
  * @param libraries library versions of the reporting build (EJML, OpenBLAS)
  * @param generated when the report was generated (UTC)
  */
-public record Provenance(String specHash, String reportTool, String jvm, Map<String, Integer> recordTools, Map<String, Integer> linalgBackends,
-    Map<String, String> libraries, Instant generated) {
+public record Provenance(
+    String specHash,
+    String reportTool,
+    String jvm,
+    Map<String, Integer> recordTools,
+    Map<String, Integer> linalgBackends,
+    Map<String, String> libraries,
+    Instant generated) {
 
   public Provenance {
     Objects.requireNonNull(specHash, "specHash");
@@ -46,6 +52,7 @@ public record Provenance(String specHash, String reportTool, String jvm, Map<Str
     libraries.put("ejml", build.get("ejml"));
     libraries.put("openblas", build.get("openblas"));
     libraries.put("os", build.get("os"));
-    return new Provenance(specHash, BuildInfo.toolVersion(), build.get("jvm"), tools, linalg, libraries, generated);
+    return new Provenance(
+        specHash, BuildInfo.toolVersion(), build.get("jvm"), tools, linalg, libraries, generated);
   }
 }

@@ -14,10 +14,9 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Writes every output of a study into its run directory: summary.csv, summary.json,
- * boundaries.csv, figures/*.png and *.svg, report.html and results.h5. Each file goes through a
- * temporary file renamed into place. Needs a headless-capable AWT (set
- * {@code java.awt.headless=true} on servers).
+ * Writes every output of a study into its run directory: summary.csv, summary.json, boundaries.csv,
+ * figures/*.png and *.svg, report.html and results.h5. Each file goes through a temporary file
+ * renamed into place. Needs a headless-capable AWT (set {@code java.awt.headless=true} on servers).
  */
 public final class ReportFiles {
 
@@ -26,7 +25,9 @@ public final class ReportFiles {
 
   private ReportFiles() {}
 
-  /** @return the files written, in writing order */
+  /**
+   * @return the files written, in writing order
+   */
   public static List<Path> writeAll(StudyReport report, Path dir) throws IOException {
     List<Path> written = new ArrayList<>(ReportFormats.writeAll(report.summary(), dir));
     Path figures = dir.resolve(FIGURES);
@@ -35,7 +36,10 @@ public final class ReportFiles {
     for (Figure f : FigureOps.figures(report)) {
       byte[] png = FigureOps.png(f);
       written.add(atomicWrite(figures.resolve(f.name() + ".png"), png));
-      written.add(atomicWrite(figures.resolve(f.name() + ".svg"), FigureOps.svg(f).getBytes(StandardCharsets.UTF_8)));
+      written.add(
+          atomicWrite(
+              figures.resolve(f.name() + ".svg"),
+              FigureOps.svg(f).getBytes(StandardCharsets.UTF_8)));
       embedded.add(new HtmlReportWriter.EmbeddedFigure(f.name(), f.caption(), png));
     }
     Path html = dir.resolve("report.html");

@@ -26,8 +26,8 @@ public enum ReportFormats {
   }
 
   /**
-   * Writes every summary format into {@code dir}, each through a temporary file renamed into
-   * place, so a reader never sees a half-written summary.
+   * Writes every summary format into {@code dir}, each through a temporary file renamed into place,
+   * so a reader never sees a half-written summary.
    *
    * @return the files written
    */

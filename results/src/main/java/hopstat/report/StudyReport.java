@@ -22,7 +22,12 @@ import java.util.Objects;
  * @param axisLabels grid axis name → axis label with unit (axes not listed are labelled by name)
  * @param provenance where and with what the numbers were made
  */
-public record StudyReport(StudyLayout layout, Summary summary, List<RealisationRecord> records, String specText, Map<String, String> axisLabels,
+public record StudyReport(
+    StudyLayout layout,
+    Summary summary,
+    List<RealisationRecord> records,
+    String specText,
+    Map<String, String> axisLabels,
     Provenance provenance) {
 
   public StudyReport {
@@ -30,9 +35,12 @@ public record StudyReport(StudyLayout layout, Summary summary, List<RealisationR
     Objects.requireNonNull(summary, "summary");
     Objects.requireNonNull(specText, "specText");
     Objects.requireNonNull(provenance, "provenance");
-    records = records.stream()
-        .sorted(Comparator.comparingInt((RealisationRecord r) -> r.result().pointIndex()).thenComparingInt(r -> r.result().realisationIndex()))
-        .toList();
+    records =
+        records.stream()
+            .sorted(
+                Comparator.comparingInt((RealisationRecord r) -> r.result().pointIndex())
+                    .thenComparingInt(r -> r.result().realisationIndex()))
+            .toList();
     axisLabels = Collections.unmodifiableMap(new LinkedHashMap<>(axisLabels));
   }
 

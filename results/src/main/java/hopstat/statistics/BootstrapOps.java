@@ -11,34 +11,43 @@ import java.util.SplittableRandom;
  * Non-parametric bootstrap over realisations (Efron, Ann. Stat. 7, 1 (1979); percentile interval as
  * in Efron and Tibshirani, An Introduction to the Bootstrap, Chapman and Hall 1993, ch. 13).
  *
- * <p>Determinism: every bootstrap stream is seeded with the first 8 bytes (big-endian) of
- * SHA-256 over the UTF-8 text {@code specHash + "\n" + key_1 + "\n" + key_2 ...}, where the keys name
- * what is being resampled ({@code "mean", "point=<index>", <quantity>} for the interval of a mean;
+ * <p>Determinism: every bootstrap stream is seeded with the first 8 bytes (big-endian) of SHA-256
+ * over the UTF-8 text {@code specHash + "\n" + key_1 + "\n" + key_2 ...}, where the keys name what
+ * is being resampled ({@code "mean", "point=<index>", <quantity>} for the interval of a mean;
  * {@code "boundary", "point=<index>", <quantity>} for the replicas of a point used by every
- * boundary estimate through it), and drives a
- * {@link SplittableRandom} (SplitMix64) generator. No clock, thread or host enters, so equal journals give equal
- * intervals bit for bit. Pure functions otherwise.
+ * boundary estimate through it), and drives a {@link SplittableRandom} (SplitMix64) generator. No
+ * clock, thread or host enters, so equal journals give equal intervals bit for bit. Pure functions
+ * otherwise.
  */
 public final class BootstrapOps {
 
   /** Bootstrap replicas per estimate (common practice: ≥ 1000 for 95 % percentile intervals). */
   public static final int RESAMPLES = 2000;
+
   /** Method text written into outputs. */
-  public static final String METHOD = "percentile bootstrap over realisations, " + RESAMPLES + " resamples";
+  public static final String METHOD =
+      "percentile bootstrap over realisations, " + RESAMPLES + " resamples";
+
   /** How the bootstrap seed is derived, written into outputs. */
-  public static final String SEED_RULE = "first 8 bytes of SHA-256(specHash + '\\n' + keys joined by '\\n'), keys = (mean|boundary, point=<index>, quantity); "
-      + "java.util.SplittableRandom (SplitMix64) stream";
+  public static final String SEED_RULE =
+      "first 8 bytes of SHA-256(specHash + '\\n' + keys joined by '\\n'), keys = (mean|boundary, point=<index>, quantity); "
+          + "java.util.SplittableRandom (SplitMix64) stream";
 
   private BootstrapOps() {}
 
-  /** The bootstrap seed for an estimate identified by {@code keys} within the study {@code specHash}. */
+  /**
+   * The bootstrap seed for an estimate identified by {@code keys} within the study {@code
+   * specHash}.
+   */
   public static long seed(String specHash, String... keys) {
     StringBuilder text = new StringBuilder(specHash);
     for (String k : keys) {
       text.append('\n').append(k);
     }
     try {
-      byte[] digest = MessageDigest.getInstance("SHA-256").digest(text.toString().getBytes(StandardCharsets.UTF_8));
+      byte[] digest =
+          MessageDigest.getInstance("SHA-256")
+              .digest(text.toString().getBytes(StandardCharsets.UTF_8));
       return ByteBuffer.wrap(digest, 0, Long.BYTES).getLong();
     } catch (NoSuchAlgorithmException e) {
       throw new IllegalStateException("SHA-256 is required of every JVM", e);
@@ -72,9 +81,8 @@ public final class BootstrapOps {
 
   /**
    * A uniform index in [0, n) without division in the common case (Lemire, ACM Trans. Model.
-   * Comput. Simul. 29(1), 3 (2019), "nearly divisionless" method; exact, unbiased). The
-   * {@code %}-based rejection of {@link SplittableRandom#nextInt(int)} dominated the bootstrap's
-   * cost.
+   * Comput. Simul. 29(1), 3 (2019), "nearly divisionless" method; exact, unbiased). The {@code
+   * %}-based rejection of {@link SplittableRandom#nextInt(int)} dominated the bootstrap's cost.
    *
    * @param n bound, positive
    */
@@ -115,8 +123,8 @@ public final class BootstrapOps {
   }
 
   /**
-   * The central {@link SampleStatisticsOps#CONFIDENCE} percentile interval of the first {@code count}
-   * replica values (type-7 quantiles at (1 ∓ level)/2).
+   * The central {@link SampleStatisticsOps#CONFIDENCE} percentile interval of the first {@code
+   * count} replica values (type-7 quantiles at (1 ∓ level)/2).
    *
    * @param replicas read, not modified
    * @return undefined when count is 0
@@ -128,7 +136,10 @@ public final class BootstrapOps {
     double[] sorted = Arrays.copyOf(replicas, count);
     Arrays.sort(sorted);
     double level = SampleStatisticsOps.CONFIDENCE;
-    return new Interval(SampleStatisticsOps.quantileOfSorted(sorted, (1 - level) / 2), SampleStatisticsOps.quantileOfSorted(sorted, (1 + level) / 2), level,
+    return new Interval(
+        SampleStatisticsOps.quantileOfSorted(sorted, (1 - level) / 2),
+        SampleStatisticsOps.quantileOfSorted(sorted, (1 + level) / 2),
+        level,
         METHOD);
   }
 }

@@ -10,8 +10,8 @@ import java.util.Map;
  * <p>The interval resamples the realisations of every point of the cut independently (with
  * replacement, same count), recomputes the estimate, and takes the central 95 % of the replicas in
  * which the crossing or peak exists; for crossings, a replica's estimate is its crossing nearest to
- * {@code estimate} within the window reaching halfway to the neighbouring crossings of the
- * original curve, if any. {@code existsFraction} is the fraction of replicas with such a crossing or peak.
+ * {@code estimate} within the window reaching halfway to the neighbouring crossings of the original
+ * curve, if any. {@code existsFraction} is the fraction of replicas with such a crossing or peak.
  * The interval measures disorder-sampling error only, not the error of interpolating between grid
  * points, nor finite-size shifts.
  *
@@ -25,7 +25,8 @@ import java.util.Map;
  * @param estimate position on the swept axis, in that axis' units
  * @param interval percentile-bootstrap interval of the position
  * @param existsFraction fraction of replicas in which the crossing or peak exists, in [0, 1]
- * @param resamples number of bootstrap replicas (streams seeded per grid point, see {@link BoundaryOps})
+ * @param resamples number of bootstrap replicas (streams seeded per grid point, see {@link
+ *     BoundaryOps})
  * @param nearestPoint grid index of the cut point nearest the estimate (for SIZE_CROSSING, on the
  *     larger size)
  */

@@ -10,17 +10,16 @@ import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.TreeMap;
 import java.util.SplittableRandom;
+import java.util.TreeMap;
 
 /**
  * Phase-boundary estimates along every one-dimensional cut of the grid, for every integer-valued
- * quantity, each with a percentile-bootstrap interval over realisations (see
- * {@link BoundaryEstimate} and {@link BoundaryKind} for the definitions). Pure functions of the
- * layout and the journal records; samples enter in canonical (realisation-index) order and the
- * bootstrap stream of grid point p and quantity q is seeded by {@code BootstrapOps.seed(specHash,
- * "boundary", "point=" + p, q)}, so the output is the same bit for bit for
- * equal journals.
+ * quantity, each with a percentile-bootstrap interval over realisations (see {@link
+ * BoundaryEstimate} and {@link BoundaryKind} for the definitions). Pure functions of the layout and
+ * the journal records; samples enter in canonical (realisation-index) order and the bootstrap
+ * stream of grid point p and quantity q is seeded by {@code BootstrapOps.seed(specHash, "boundary",
+ * "point=" + p, q)}, so the output is the same bit for bit for equal journals.
  *
  * <p>Cost: {@link BootstrapOps#RESAMPLES} × (realisations with samples) random draws per integer
  * quantity, plus O(RESAMPLES × points on the cut) per cut.
@@ -29,13 +28,15 @@ public final class BoundaryOps {
 
   /** Grid axis holding the linear system size. */
   public static final String SIZE_AXIS = "L";
+
   /**
    * A mean difference (or distance of the mean from a level) at most this large counts as zero, so
-   * curves that are quantised to the same integer up to round-off do not produce spurious
-   * crossings (our choice: far above the ~1e-12 round-off of a converged index, far below the 1/n
-   * resolution of a sampled mean).
+   * curves that are quantised to the same integer up to round-off do not produce spurious crossings
+   * (our choice: far above the ~1e-12 round-off of a converged index, far below the 1/n resolution
+   * of a sampled mean).
    */
   public static final double ZERO_DIFFERENCE = 1e-9;
+
   /**
    * A variance peak is reported only if the largest variance along the cut exceeds this (our
    * choice: below it the invariant is quantised to one value everywhere up to round-off).
@@ -45,7 +46,8 @@ public final class BoundaryOps {
   private BoundaryOps() {}
 
   /** All boundary estimates, in order: quantity, cut (as {@link CutOps#cuts}), kind, position. */
-  public static List<BoundaryEstimate> estimate(StudyLayout layout, List<RealisationRecord> records) {
+  public static List<BoundaryEstimate> estimate(
+      StudyLayout layout, List<RealisationRecord> records) {
     List<GridCut> cuts = CutOps.cuts(layout.gridNames(), layout.points());
     List<BoundaryEstimate> out = new ArrayList<>();
     for (Quantity q : layout.quantities()) {
@@ -56,12 +58,20 @@ public final class BoundaryOps {
       PointReplicas[] replicas = new PointReplicas[samples.length];
       Map<GridCut, CutData> data = new LinkedHashMap<>();
       for (GridCut cut : cuts) {
-        CutData d = CutData.of(cut, samples, p -> {
-          if (replicas[p] == null) {
-            replicas[p] = PointReplicas.of(samples[p], BootstrapOps.seed(layout.specHash(), "boundary", "point=" + p, q.name()));
-          }
-          return replicas[p];
-        });
+        CutData d =
+            CutData.of(
+                cut,
+                samples,
+                p -> {
+                  if (replicas[p] == null) {
+                    replicas[p] =
+                        PointReplicas.of(
+                            samples[p],
+                            BootstrapOps.seed(
+                                layout.specHash(), "boundary", "point=" + p, q.name()));
+                  }
+                  return replicas[p];
+                });
         if (d != null) {
           data.put(cut, d);
           halfIntegerCrossings(q.name(), d, out);
@@ -76,7 +86,8 @@ public final class BoundaryOps {
   }
 
   /** DONE samples of one quantity per grid point, in realisation order. */
-  static double[][] samplesByPoint(int pointCount, List<RealisationRecord> records, String quantity) {
+  static double[][] samplesByPoint(
+      int pointCount, List<RealisationRecord> records, String quantity) {
     List<List<RealisationResult>> byPoint = new ArrayList<>();
     for (int i = 0; i < pointCount; i++) {
       byPoint.add(new ArrayList<>());
@@ -89,10 +100,11 @@ public final class BoundaryOps {
     }
     double[][] x = new double[pointCount][];
     for (int i = 0; i < pointCount; i++) {
-      x[i] = byPoint.get(i).stream()
-          .sorted((a, b) -> Integer.compare(a.realisationIndex(), b.realisationIndex()))
-          .mapToDouble(res -> res.values().get(quantity))
-          .toArray();
+      x[i] =
+          byPoint.get(i).stream()
+              .sorted((a, b) -> Integer.compare(a.realisationIndex(), b.realisationIndex()))
+              .mapToDouble(res -> res.values().get(quantity))
+              .toArray();
     }
     return x;
   }
@@ -103,8 +115,8 @@ public final class BoundaryOps {
    */
   private record PointReplicas(double[] mean, double[] variance) {
     /**
-     * One pass per replica over centred samples y = x − x̄: mean = x̄ + Σy/n and variance =
-     * (Σy² − (Σy)²/n)/(n − 1), which is well conditioned because Σy is small.
+     * One pass per replica over centred samples y = x − x̄: mean = x̄ + Σy/n and variance = (Σy² −
+     * (Σy)²/n)/(n − 1), which is well conditioned because Σy is small.
      */
     static PointReplicas of(double[] x, long seed) {
       int b = BootstrapOps.RESAMPLES;
@@ -133,10 +145,18 @@ public final class BoundaryOps {
   }
 
   /** One cut's points with samples, their statistics and the bootstrap replicas of them. */
-  private record CutData(GridCut cut, int[] points, double[] t, long[] modal, double[] mean, double[] variance, double[][] replicaMean,
+  private record CutData(
+      GridCut cut,
+      int[] points,
+      double[] t,
+      long[] modal,
+      double[] mean,
+      double[] variance,
+      double[][] replicaMean,
       double[][] replicaVariance) {
 
-    static CutData of(GridCut cut, double[][] samples, java.util.function.IntFunction<PointReplicas> replicasOf) {
+    static CutData of(
+        GridCut cut, double[][] samples, java.util.function.IntFunction<PointReplicas> replicasOf) {
       List<Integer> kept = new ArrayList<>();
       for (int i = 0; i < cut.pointIndices().size(); i++) {
         if (samples[cut.pointIndices().get(i)].length > 0) {
@@ -203,9 +223,9 @@ public final class BoundaryOps {
   }
 
   /**
-   * Positions where the piecewise-linear curve through (t_i, d_i) changes sign. Values with
-   * |d| ≤ {@link #ZERO_DIFFERENCE} (and NaN) are skipped; a sign change between consecutive kept
-   * points i &lt; j gives the zero of the line through them.
+   * Positions where the piecewise-linear curve through (t_i, d_i) changes sign. Values with |d| ≤
+   * {@link #ZERO_DIFFERENCE} (and NaN) are skipped; a sign change between consecutive kept points i
+   * &lt; j gives the zero of the line through them.
    */
   static double[] zeroCrossings(double[] t, double[] d) {
     double[] found = new double[t.length];
@@ -230,7 +250,9 @@ public final class BoundaryOps {
   static double nearestWithin(double[] candidates, double target, double low, double high) {
     double best = Double.NaN;
     for (double c : candidates) {
-      if (c >= low && c <= high && (Double.isNaN(best) || Math.abs(c - target) < Math.abs(best - target))) {
+      if (c >= low
+          && c <= high
+          && (Double.isNaN(best) || Math.abs(c - target) < Math.abs(best - target))) {
         best = c;
       }
     }
@@ -273,7 +295,8 @@ public final class BoundaryOps {
         double level = k + 0.5;
         double[] all = zeroCrossings(d.t, minus(d.mean, level));
         double estimate = nearest(all, 0.5 * (d.t[j] + d.t[j + 1]));
-        if (Double.isNaN(estimate) || seen.stream().anyMatch(s -> s[0] == level && s[1] == estimate)) {
+        if (Double.isNaN(estimate)
+            || seen.stream().anyMatch(s -> s[0] == level && s[1] == estimate)) {
           continue;
         }
         seen.add(new double[] {level, estimate});
@@ -286,8 +309,20 @@ public final class BoundaryOps {
             replicas[exists++] = c;
           }
         }
-        out.add(new BoundaryEstimate(BoundaryKind.HALF_INTEGER_CROSSING, quantity, d.cut.axis(), d.cut.fixed(), level, Double.NaN, Double.NaN, estimate,
-            BootstrapOps.percentileInterval(replicas, exists), (double) exists / replicas.length, replicas.length, d.nearestPoint(estimate)));
+        out.add(
+            new BoundaryEstimate(
+                BoundaryKind.HALF_INTEGER_CROSSING,
+                quantity,
+                d.cut.axis(),
+                d.cut.fixed(),
+                level,
+                Double.NaN,
+                Double.NaN,
+                estimate,
+                BootstrapOps.percentileInterval(replicas, exists),
+                (double) exists / replicas.length,
+                replicas.length,
+                d.nearestPoint(estimate)));
       }
     }
   }
@@ -305,7 +340,11 @@ public final class BoundaryOps {
         best = j;
       }
     }
-    if (best <= 0 || best >= v.length - 1 || !(v[best] > VARIANCE_FLOOR) || Double.isNaN(v[best - 1]) || Double.isNaN(v[best + 1])) {
+    if (best <= 0
+        || best >= v.length - 1
+        || !(v[best] > VARIANCE_FLOOR)
+        || Double.isNaN(v[best - 1])
+        || Double.isNaN(v[best + 1])) {
       return Double.NaN;
     }
     double t0 = t[best - 1];
@@ -337,15 +376,28 @@ public final class BoundaryOps {
         replicas[exists++] = c;
       }
     }
-    out.add(new BoundaryEstimate(BoundaryKind.VARIANCE_PEAK, quantity, d.cut.axis(), d.cut.fixed(), Double.NaN, Double.NaN, Double.NaN, estimate,
-        BootstrapOps.percentileInterval(replicas, exists), (double) exists / replicas.length, replicas.length, d.nearestPoint(estimate)));
+    out.add(
+        new BoundaryEstimate(
+            BoundaryKind.VARIANCE_PEAK,
+            quantity,
+            d.cut.axis(),
+            d.cut.fixed(),
+            Double.NaN,
+            Double.NaN,
+            Double.NaN,
+            estimate,
+            BootstrapOps.percentileInterval(replicas, exists),
+            (double) exists / replicas.length,
+            replicas.length,
+            d.nearestPoint(estimate)));
   }
 
   /**
    * Crossings of consecutive sizes' mean curves along cuts of a non-size axis; replica r pairs
    * replica r of both sizes' (independently seeded) points.
    */
-  private static void sizeCrossings(String quantity, Map<GridCut, CutData> data, List<BoundaryEstimate> out) {
+  private static void sizeCrossings(
+      String quantity, Map<GridCut, CutData> data, List<BoundaryEstimate> out) {
     Map<String, TreeMap<Double, CutData>> families = new LinkedHashMap<>();
     for (CutData d : data.values()) {
       GridCut cut = d.cut;
@@ -385,8 +437,20 @@ public final class BoundaryOps {
               replicas[exists++] = c;
             }
           }
-          out.add(new BoundaryEstimate(BoundaryKind.SIZE_CROSSING, quantity, a.cut.axis(), fixed, Double.NaN, sizes.get(s).getKey(), sizes.get(s + 1).getKey(),
-              estimate, BootstrapOps.percentileInterval(replicas, exists), (double) exists / replicas.length, replicas.length, b.nearestPoint(estimate)));
+          out.add(
+              new BoundaryEstimate(
+                  BoundaryKind.SIZE_CROSSING,
+                  quantity,
+                  a.cut.axis(),
+                  fixed,
+                  Double.NaN,
+                  sizes.get(s).getKey(),
+                  sizes.get(s + 1).getKey(),
+                  estimate,
+                  BootstrapOps.percentileInterval(replicas, exists),
+                  (double) exists / replicas.length,
+                  replicas.length,
+                  b.nearestPoint(estimate)));
         }
       }
     }

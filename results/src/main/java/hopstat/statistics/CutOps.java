@@ -13,9 +13,10 @@ public final class CutOps {
   private CutOps() {}
 
   /**
-   * Every one-dimensional cut with at least two distinct positions: for each grid axis (grid order),
-   * the points grouped by the values of all other axes (groups in order of their first point
-   * index), sorted by the swept value. A second point at an already-seen position is left out.
+   * Every one-dimensional cut with at least two distinct positions: for each grid axis (grid
+   * order), the points grouped by the values of all other axes (groups in order of their first
+   * point index), sorted by the swept value. A second point at an already-seen position is left
+   * out.
    */
   public static List<GridCut> cuts(List<String> gridNames, List<StudyLayout.Point> points) {
     List<GridCut> cuts = new ArrayList<>();
@@ -32,7 +33,9 @@ public final class CutOps {
       }
       for (List<StudyLayout.Point> group : groups.values()) {
         List<StudyLayout.Point> sorted = new ArrayList<>(group);
-        sorted.sort(Comparator.comparingDouble((StudyLayout.Point p) -> p.coordinates().get(axis)).thenComparingInt(StudyLayout.Point::index));
+        sorted.sort(
+            Comparator.comparingDouble((StudyLayout.Point p) -> p.coordinates().get(axis))
+                .thenComparingInt(StudyLayout.Point::index));
         List<Integer> indices = new ArrayList<>();
         List<Double> positions = new ArrayList<>();
         for (StudyLayout.Point p : sorted) {

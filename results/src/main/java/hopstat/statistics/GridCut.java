@@ -13,7 +13,8 @@ import java.util.Map;
  * @param pointIndices grid point indices along the cut, ascending in the swept value
  * @param positions the swept axis' values at those points, ascending and distinct
  */
-public record GridCut(String axis, Map<String, Double> fixed, List<Integer> pointIndices, List<Double> positions) {
+public record GridCut(
+    String axis, Map<String, Double> fixed, List<Integer> pointIndices, List<Double> positions) {
   public GridCut {
     fixed = Collections.unmodifiableMap(new LinkedHashMap<>(fixed));
     pointIndices = List.copyOf(pointIndices);

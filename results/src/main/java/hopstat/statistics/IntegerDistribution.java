@@ -6,8 +6,8 @@ import java.util.SortedMap;
 import java.util.TreeMap;
 
 /**
- * Distribution of an integer-valued invariant over realisations, after rounding each sample to
- * the nearest integer.
+ * Distribution of an integer-valued invariant over realisations, after rounding each sample to the
+ * nearest integer.
  *
  * @param n number of samples
  * @param counts rounded value → count, ascending
@@ -18,8 +18,8 @@ import java.util.TreeMap;
  * @param maxDistanceToInteger largest |x − round(x)| over samples
  * @param nonQuantised samples with |x − round(x)| &gt; tolerance
  * @param tolerance the quantisation tolerance used
- * @param probabilities P(rounded value = k) with 95 % Wilson intervals, ascending in k (one entry per
- *     value in counts)
+ * @param probabilities P(rounded value = k) with 95 % Wilson intervals, ascending in k (one entry
+ *     per value in counts)
  */
 public record IntegerDistribution(
     int n,

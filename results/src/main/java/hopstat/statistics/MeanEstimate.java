@@ -13,12 +13,21 @@ package hopstat.statistics;
  * @param ciLow mean − t_{(1+level)/2, n−1}·standardError; NaN for n &lt; 2
  * @param ciHigh mean + t_{(1+level)/2, n−1}·standardError; NaN for n &lt; 2
  */
-public record MeanEstimate(int n, double mean, double standardDeviation, double standardError, double confidenceLevel, double ciLow, double ciHigh) {
+public record MeanEstimate(
+    int n,
+    double mean,
+    double standardDeviation,
+    double standardError,
+    double confidenceLevel,
+    double ciLow,
+    double ciHigh) {
 
   /** Estimator name written into outputs. */
   public static final String ESTIMATOR = "sample mean";
+
   /** Error measure written into outputs. */
   public static final String ERROR_MEASURE = "standard error s/sqrt(n), s with n-1 denominator";
+
   /** Interval method written into outputs. */
   public static final String INTERVAL = "Student t, two-sided";
 }

@@ -11,8 +11,8 @@ import java.util.Map;
  * MobilityMethod#INVARIANT_PLATEAU}: the quantised fraction with its Wilson interval).
  *
  * @param method the estimator
- * @param quantity the quantity read from the records ({@code lambda}, {@code level-ratio},
- *     {@code bott@E}, a grid-swept invariant)
+ * @param quantity the quantity read from the records ({@code lambda}, {@code level-ratio}, {@code
+ *     bott@E}, a grid-swept invariant)
  * @param axis the swept axis: a grid axis, or {@code level-ratio.e} / {@code <name>@E.energy} for
  *     per-realisation energies
  * @param fixed the other grid axes' values, without {@code L}
@@ -20,7 +20,13 @@ import java.util.Map;
  * @param plateauValue the plateau integer (INVARIANT_PLATEAU), else NaN
  * @param points ascending in position
  */
-public record MobilityCurve(MobilityMethod method, String quantity, String axis, Map<String, Double> fixed, double size, double plateauValue,
+public record MobilityCurve(
+    MobilityMethod method,
+    String quantity,
+    String axis,
+    Map<String, Double> fixed,
+    double size,
+    double plateauValue,
     List<Point> points) {
   public MobilityCurve {
     fixed = Collections.unmodifiableMap(new LinkedHashMap<>(fixed));
@@ -33,8 +39,8 @@ public record MobilityCurve(MobilityMethod method, String quantity, String axis,
    * @param mean ensemble mean (INVARIANT_PLATEAU: fraction quantised at the plateau value)
    * @param interval 95 % interval of the mean (percentile bootstrap; Wilson for fractions)
    * @param state {@code localised}, {@code extended}, {@code undecided} (size comparison with the
-   *     next smaller size, or midpoint comparison for one size), {@code quantised},
-   *     {@code not-quantised}; empty when there is nothing to compare with
+   *     next smaller size, or midpoint comparison for one size), {@code quantised}, {@code
+   *     not-quantised}; empty when there is nothing to compare with
    */
   public record Point(double position, int n, double mean, Interval interval, String state) {}
 }

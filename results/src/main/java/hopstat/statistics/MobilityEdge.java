@@ -22,8 +22,19 @@ import java.util.Map;
  * @param existsFraction fraction of replicas in which the crossing exists
  * @param resamples bootstrap replicas
  */
-public record MobilityEdge(MobilityMethod method, String quantity, String axis, Map<String, Double> fixed, String criterion, double sizeLow,
-    double sizeHigh, double level, double estimate, Interval interval, double existsFraction, int resamples) {
+public record MobilityEdge(
+    MobilityMethod method,
+    String quantity,
+    String axis,
+    Map<String, Double> fixed,
+    String criterion,
+    double sizeLow,
+    double sizeHigh,
+    double level,
+    double estimate,
+    Interval interval,
+    double existsFraction,
+    int resamples) {
   public MobilityEdge {
     fixed = Collections.unmodifiableMap(new LinkedHashMap<>(fixed));
   }

@@ -16,10 +16,10 @@ import java.util.Map;
  * @param quantity the quantity
  * @param axis the energy axis
  * @param fixed the other grid axes' values, without L
- * @param criterion how the window is bounded: {@code size-crossing} (Λ falls with M),
- *     {@code crossing-value} (larger size's ⟨r⟩ at or below its value at the robust size
- *     crossings), {@code midpoint} (⟨r⟩ at or below the Poisson–Wigner–Dyson midpoint),
- *     {@code quantised-fraction}
+ * @param criterion how the window is bounded: {@code size-crossing} (Λ falls with M), {@code
+ *     crossing-value} (larger size's ⟨r⟩ at or below its value at the robust size crossings),
+ *     {@code midpoint} (⟨r⟩ at or below the Poisson–Wigner–Dyson midpoint), {@code
+ *     quantised-fraction}
  * @param sizeLow smaller size compared (two sizes), else the size used or NaN
  * @param sizeHigh larger size compared (two sizes), else NaN
  * @param reference the reference energy (a fixed fermiEnergy inside the scan, else the scan centre)
@@ -34,9 +34,25 @@ import java.util.Map;
  * @param insideFraction fraction of replicas in which the reference lies inside a window
  * @param resamples bootstrap replicas
  */
-public record MobilityGap(MobilityMethod method, String quantity, String axis, Map<String, Double> fixed, String criterion, double sizeLow,
-    double sizeHigh, double reference, double lower, double upper, boolean lowerOpen, boolean upperOpen, double halfWidth, Interval interval,
-    Interval lowerInterval, Interval upperInterval, double insideFraction, int resamples) {
+public record MobilityGap(
+    MobilityMethod method,
+    String quantity,
+    String axis,
+    Map<String, Double> fixed,
+    String criterion,
+    double sizeLow,
+    double sizeHigh,
+    double reference,
+    double lower,
+    double upper,
+    boolean lowerOpen,
+    boolean upperOpen,
+    double halfWidth,
+    Interval interval,
+    Interval lowerInterval,
+    Interval upperInterval,
+    double insideFraction,
+    int resamples) {
   public MobilityGap {
     fixed = Collections.unmodifiableMap(new LinkedHashMap<>(fixed));
   }

@@ -14,12 +14,12 @@ public enum MobilityMethod {
    * where the Λ(M) curves of two widths cross (one-parameter scaling, common practice).
    *
    * <p>Assumptions: one-parameter scaling holds at the widths computed; Λ is monotonic in M at
-   * fixed E. Failure modes: corrections to scaling make crossings of small widths drift with M
-   * (the crossing of the two largest widths is the best estimate, still not the M → ∞ value);
-   * non-monotonic Λ(M) (reported per point as undecided when the sign of Λ(M_large) − Λ(M_small)
-   * is not resolved by its bootstrap interval); near band edges Λ is small and the crossing
-   * shallow, so its interval is wide; realisations that fail to converge (length guard) are
-   * missing, which biases Λ downwards where γ is smallest.
+   * fixed E. Failure modes: corrections to scaling make crossings of small widths drift with M (the
+   * crossing of the two largest widths is the best estimate, still not the M → ∞ value);
+   * non-monotonic Λ(M) (reported per point as undecided when the sign of Λ(M_large) − Λ(M_small) is
+   * not resolved by its bootstrap interval); near band edges Λ is small and the crossing shallow,
+   * so its interval is wide; realisations that fail to converge (length guard) are missing, which
+   * biases Λ downwards where γ is smallest.
    */
   TRANSFER_MATRIX,
   /**
@@ -41,17 +41,17 @@ public enum MobilityMethod {
    * realisations (use fixed windowMin/windowMax); the midpoint criterion is a convention whose
    * value at a true edge depends on size (the critical ⟨r⟩ lies between the two limits, not at
    * their midpoint); an unknown effective class leaves the Wigner–Dyson value, and so the midpoint
-   * criterion, undefined; where both sizes are saturated at one limit, noise produces spurious
-   * size crossings (reported, with low existence fractions).
+   * criterion, undefined; where both sizes are saturated at one limit, noise produces spurious size
+   * crossings (reported, with low existence fractions).
    */
   LEVEL_RATIO,
   /**
    * Invariant plateau: the window of Fermi energies around the reference energy where the
    * invariant's across-realisation distribution stays quantised, i.e. the fraction of realisations
    * within {@link SampleStatisticsOps#QUANTISATION_TOLERANCE} of the plateau integer is at least
-   * {@link MobilityOps#QUANTISED_FRACTION}; from {@code <name>@E<k>} quantities (e.g.
-   * {@code bott@E<k>} with energies {@code bott@E<k>.energy}) or from an integer invariant on a grid
-   * sweep of {@code fermiEnergy}. The plateau integer is the modal value at the energy nearest the
+   * {@link MobilityOps#QUANTISED_FRACTION}; from {@code <name>@E<k>} quantities (e.g. {@code
+   * bott@E<k>} with energies {@code bott@E<k>.energy}) or from an integer invariant on a grid sweep
+   * of {@code fermiEnergy}. The plateau integer is the modal value at the energy nearest the
    * reference.
    *
    * <p>Assumptions: inside a mobility gap the invariant of a finite sample is quantised in almost
@@ -59,8 +59,8 @@ public enum MobilityMethod {
    * narrower window); with few realisations the fraction is coarse (n = 20 resolves only steps of
    * 0.05); in finite samples the window shrinks as localisation lengths near the edges exceed the
    * sample, so it is a finite-size estimate; window ends are linear interpolations between energies
-   * of the scan, so the scan spacing limits the resolution; a window reaching the end of the scan is
-   * flagged open (the half-width is then a lower bound).
+   * of the scan, so the scan spacing limits the resolution; a window reaching the end of the scan
+   * is flagged open (the half-width is then a lower bound).
    */
   INVARIANT_PLATEAU
 }

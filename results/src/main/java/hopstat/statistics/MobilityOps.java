@@ -30,40 +30,50 @@ import java.util.regex.Pattern;
  * per-realisation values of all positions of that point together (so windows or Fermi energies of
  * one realisation stay paired); the stream of point p and quantity family q is seeded by {@code
  * BootstrapOps.seed(specHash, "mobility", "point=" + p, q)}. Replica r of two sizes' curves pairs
- * replica r of each. Pure functions of the layout and the records; equal journals give equal
- * output bit for bit.
+ * replica r of each. Pure functions of the layout and the records; equal journals give equal output
+ * bit for bit.
  *
  * <p>Reference energy of a gap: the {@code fermiEnergy} parameter when it is the same at every
  * point of the curve and lies inside the scanned range, otherwise the centre of the scanned range
  * (e.g. when {@code fermiEnergy} itself is swept).
  *
- * <p>Cost: {@link BootstrapOps#RESAMPLES} × (realisations × positions) per grid point and
- * quantity family.
+ * <p>Cost: {@link BootstrapOps#RESAMPLES} × (realisations × positions) per grid point and quantity
+ * family.
  */
 public final class MobilityOps {
 
   /** Grid axis of the linear size (the width M of the transfer-matrix bar). */
   public static final String SIZE_AXIS = BoundaryOps.SIZE_AXIS;
+
   /** Parameter and grid axis of the transfer-matrix energy. */
   public static final String ENERGY_AXIS = "energy";
+
   /** Parameter and grid axis of the Fermi energy. */
   public static final String FERMI_ENERGY = "fermiEnergy";
+
   /** Transfer-matrix quantity Λ = 1/(γM). */
   public static final String LAMBDA = "lambda";
-  /** Level-ratio quantity prefix: {@code level-ratio.w<k>} means, {@code level-ratio.e<k>} centres. */
+
+  /**
+   * Level-ratio quantity prefix: {@code level-ratio.w<k>} means, {@code level-ratio.e<k>} centres.
+   */
   public static final String LEVEL_RATIO = "level-ratio";
+
   /** Axis name written for level-ratio curves (per-realisation window centres). */
   public static final String LEVEL_RATIO_AXIS = LEVEL_RATIO + ".e";
 
   /** Poisson ⟨r⟩ = 2 ln 2 − 1 (derived from P(r) = 2/(1 + r)² on [0, 1] for r̃ = min/max). */
   public static final double POISSON_RATIO = 2 * Math.log(2) - 1;
+
   /**
    * GOE ⟨r⟩ (Atas, Bogomolny, Giraud, Roux, PRL 110, 084101 (2013), large-N numerics; value from
    * memory, 0.5307(1)).
    */
   public static final double GOE_RATIO = 0.5307;
+
   /** GUE ⟨r⟩ (Atas et al., PRL 110, 084101 (2013); value from memory, 0.5996(1)). */
   public static final double GUE_RATIO = 0.5996;
+
   /** GSE ⟨r⟩ (Atas et al., PRL 110, 084101 (2013); value from memory, 0.6744(1)). */
   public static final double GSE_RATIO = 0.6744;
 
@@ -74,6 +84,7 @@ public final class MobilityOps {
    * window. The Wilson interval of the fraction is reported beside it so the margin is visible.
    */
   public static final double QUANTISED_FRACTION = 0.95;
+
   /**
    * A level-ratio window enters a curve only if at least this fraction of the point's realisations
    * (and at least 2) have a ratio in it. Our choice: band-tail windows with few levels give noisy,
@@ -87,6 +98,7 @@ public final class MobilityOps {
   public static final String MIDPOINT = "midpoint";
   public static final String QUANTISED = "quantised-fraction";
   public static final String CROSSING_VALUE = "crossing-value";
+
   /**
    * A size crossing of ⟨r⟩ fixes the critical value r_c only if it exists in at least this fraction
    * of bootstrap replicas (our choice: a majority; spurious crossings from noise where both sizes
@@ -150,8 +162,14 @@ public final class MobilityOps {
       levelRatio(cx, out);
     }
     invariantPlateaus(cx, out);
-    return new MobilitySummary(layout.effectiveClass(), wignerDysonEnsemble(layout.effectiveClass()), wignerDysonRatio(layout.effectiveClass()),
-        out.curves, out.edges, out.gaps, agreements(out.gaps));
+    return new MobilitySummary(
+        layout.effectiveClass(),
+        wignerDysonEnsemble(layout.effectiveClass()),
+        wignerDysonRatio(layout.effectiveClass()),
+        out.curves,
+        out.edges,
+        out.gaps,
+        agreements(out.gaps));
   }
 
   // ---------------------------------------------------------------- estimators
@@ -164,7 +182,15 @@ public final class MobilityOps {
         for (Map.Entry<Double, List<Integer>> e : f.pointsBySize.entrySet()) {
           curves.add(cx.gridCurve(e.getKey(), axis, e.getValue(), LAMBDA));
         }
-        compareSizes(MobilityMethod.TRANSFER_MATRIX, LAMBDA, axis, f.fixed, curves, cx, out, axis.equals(ENERGY_AXIS) && cx.isGridAxis(axis));
+        compareSizes(
+            MobilityMethod.TRANSFER_MATRIX,
+            LAMBDA,
+            axis,
+            f.fixed,
+            curves,
+            cx,
+            out,
+            axis.equals(ENERGY_AXIS) && cx.isGridAxis(axis));
       }
     }
   }
@@ -181,7 +207,15 @@ public final class MobilityOps {
         }
       }
       if (curves.size() >= 2) {
-        compareSizes(MobilityMethod.LEVEL_RATIO, LEVEL_RATIO, LEVEL_RATIO_AXIS, f.fixed, curves, cx, out, true);
+        compareSizes(
+            MobilityMethod.LEVEL_RATIO,
+            LEVEL_RATIO,
+            LEVEL_RATIO_AXIS,
+            f.fixed,
+            curves,
+            cx,
+            out,
+            true);
       } else if (curves.size() == 1) {
         CurveData c = curves.get(0);
         double[] d = new double[c.m()];
@@ -193,12 +227,45 @@ public final class MobilityOps {
             rd[r][j] = c.replicas[r][j] - mid;
           }
           Interval i = c.intervals[j];
-          states[j] = Double.isNaN(mid) ? "" : i.high() < mid ? "localised" : i.low() > mid ? "extended" : "undecided";
+          states[j] =
+              Double.isNaN(mid)
+                  ? ""
+                  : i.high() < mid ? "localised" : i.low() > mid ? "extended" : "undecided";
         }
-        out.curves.add(c.toCurve(MobilityMethod.LEVEL_RATIO, LEVEL_RATIO, LEVEL_RATIO_AXIS, f.fixed, Double.NaN, states));
+        out.curves.add(
+            c.toCurve(
+                MobilityMethod.LEVEL_RATIO,
+                LEVEL_RATIO,
+                LEVEL_RATIO_AXIS,
+                f.fixed,
+                Double.NaN,
+                states));
         if (!Double.isNaN(mid)) {
-          edges(MobilityMethod.LEVEL_RATIO, LEVEL_RATIO, LEVEL_RATIO_AXIS, f.fixed, MIDPOINT, c.size, Double.NaN, mid, c.t, d, rd, out);
-          gap(MobilityMethod.LEVEL_RATIO, LEVEL_RATIO, LEVEL_RATIO_AXIS, f.fixed, MIDPOINT, c.size, Double.NaN, cx.reference(f.allPoints(), c.t), c.t, d, rd,
+          edges(
+              MobilityMethod.LEVEL_RATIO,
+              LEVEL_RATIO,
+              LEVEL_RATIO_AXIS,
+              f.fixed,
+              MIDPOINT,
+              c.size,
+              Double.NaN,
+              mid,
+              c.t,
+              d,
+              rd,
+              out);
+          gap(
+              MobilityMethod.LEVEL_RATIO,
+              LEVEL_RATIO,
+              LEVEL_RATIO_AXIS,
+              f.fixed,
+              MIDPOINT,
+              c.size,
+              Double.NaN,
+              cx.reference(f.allPoints(), c.t),
+              c.t,
+              d,
+              rd,
               out);
         }
       }
@@ -211,13 +278,21 @@ public final class MobilityOps {
     for (Quantity q : cx.layout.quantities()) {
       Matcher m = PER_ENERGY.matcher(q.name());
       if (q.integerValued() && m.matches() && names.contains(q.name() + ".energy")) {
-        perEnergy.computeIfAbsent(m.group(1), k -> new TreeMap<>()).put(Integer.parseInt(m.group(2)), q.name());
+        perEnergy
+            .computeIfAbsent(m.group(1), k -> new TreeMap<>())
+            .put(Integer.parseInt(m.group(2)), q.name());
       }
     }
     for (Map.Entry<String, TreeMap<Integer, String>> base : perEnergy.entrySet()) {
       String label = base.getKey() + "@E";
       for (Family f : cx.pointFamilies()) {
-        plateau(cx, out, label, label + ".energy", f, (size, points) -> cx.perEnergyRaw(size, points.get(0), base.getValue(), label));
+        plateau(
+            cx,
+            out,
+            label,
+            label + ".energy",
+            f,
+            (size, points) -> cx.perEnergyRaw(size, points.get(0), base.getValue(), label));
       }
     }
     if (cx.isGridAxis(FERMI_ENERGY)) {
@@ -226,7 +301,13 @@ public final class MobilityOps {
           continue;
         }
         for (Family f : cx.gridFamilies(FERMI_ENERGY)) {
-          plateau(cx, out, q.name(), FERMI_ENERGY, f, (size, points) -> cx.gridRaw(size, FERMI_ENERGY, points, q.name()));
+          plateau(
+              cx,
+              out,
+              q.name(),
+              FERMI_ENERGY,
+              f,
+              (size, points) -> cx.gridRaw(size, FERMI_ENERGY, points, q.name()));
         }
       }
     }
@@ -236,7 +317,8 @@ public final class MobilityOps {
     RawCurve raw(double size, List<Integer> points);
   }
 
-  private static void plateau(Context cx, Output out, String quantity, String axis, Family f, RawSource source) {
+  private static void plateau(
+      Context cx, Output out, String quantity, String axis, Family f, RawSource source) {
     List<RawCurve> raws = new ArrayList<>();
     for (Map.Entry<Double, List<Integer>> e : f.pointsBySize.entrySet()) {
       RawCurve raw = source.raw(e.getKey(), e.getValue());
@@ -265,8 +347,21 @@ public final class MobilityOps {
         c.intervals[j] = new Interval(w[0], w[1], SampleStatisticsOps.CONFIDENCE, "Wilson score");
         states[j] = c.mean[j] >= QUANTISED_FRACTION ? "quantised" : "not-quantised";
       }
-      out.curves.add(c.toCurve(MobilityMethod.INVARIANT_PLATEAU, quantity, axis, f.fixed, plateau, states));
-      gap(MobilityMethod.INVARIANT_PLATEAU, quantity, axis, f.fixed, QUANTISED, c.size, Double.NaN, cx.reference(f.allPoints(), c.t), c.t, d, rd, out);
+      out.curves.add(
+          c.toCurve(MobilityMethod.INVARIANT_PLATEAU, quantity, axis, f.fixed, plateau, states));
+      gap(
+          MobilityMethod.INVARIANT_PLATEAU,
+          quantity,
+          axis,
+          f.fixed,
+          QUANTISED,
+          c.size,
+          Double.NaN,
+          cx.reference(f.allPoints(), c.t),
+          c.t,
+          d,
+          rd,
+          out);
     }
   }
 
@@ -274,8 +369,15 @@ public final class MobilityOps {
    * Curves of consecutive sizes compared: states of the larger size's points, crossings, and (when
    * the axis is an energy) the gap from the two largest sizes.
    */
-  private static void compareSizes(MobilityMethod method, String quantity, String axis, Map<String, Double> fixed, List<CurveData> curves, Context cx,
-      Output out, boolean energyAxis) {
+  private static void compareSizes(
+      MobilityMethod method,
+      String quantity,
+      String axis,
+      Map<String, Double> fixed,
+      List<CurveData> curves,
+      Context cx,
+      Output out,
+      boolean energyAxis) {
     if (curves.isEmpty()) {
       return;
     }
@@ -297,14 +399,50 @@ public final class MobilityOps {
         states[p.ib[j]] = i.high() < 0 ? "localised" : i.low() > 0 ? "extended" : "undecided";
       }
       out.curves.add(b.toCurve(method, quantity, axis, fixed, Double.NaN, states));
-      List<EdgeReplicas> found = p.t.length >= 2 ? edges(method, quantity, axis, fixed, SIZE_CROSSING, a.size, b.size, Double.NaN, p.t, p.d, p.rd, out)
-          : List.of();
+      List<EdgeReplicas> found =
+          p.t.length >= 2
+              ? edges(
+                  method,
+                  quantity,
+                  axis,
+                  fixed,
+                  SIZE_CROSSING,
+                  a.size,
+                  b.size,
+                  Double.NaN,
+                  p.t,
+                  p.d,
+                  p.rd,
+                  out)
+              : List.of();
       if (energyAxis && s == curves.size() - 1 && p.t.length >= 1) {
         double reference = cx.reference(cx.pointsOf(fixed), p.t);
         if (method == MobilityMethod.LEVEL_RATIO) {
-          crossingValueGap(quantity, axis, fixed, a, b, p, found, wignerDysonRatio(cx.layout.effectiveClass()), reference, out);
+          crossingValueGap(
+              quantity,
+              axis,
+              fixed,
+              a,
+              b,
+              p,
+              found,
+              wignerDysonRatio(cx.layout.effectiveClass()),
+              reference,
+              out);
         } else {
-          gap(method, quantity, axis, fixed, SIZE_CROSSING, a.size, b.size, reference, p.t, p.d, p.rd, out);
+          gap(
+              method,
+              quantity,
+              axis,
+              fixed,
+              SIZE_CROSSING,
+              a.size,
+              b.size,
+              reference,
+              p.t,
+              p.d,
+              p.rd,
+              out);
         }
       }
     }
@@ -319,8 +457,17 @@ public final class MobilityOps {
    * difference is pure noise and its sign flips at random; the position relative to r_c does not.
    * Each replica recomputes r_c from its own matched crossings.
    */
-  private static void crossingValueGap(String quantity, String axis, Map<String, Double> fixed, CurveData a, CurveData b, Paired p,
-      List<EdgeReplicas> found, double wignerDyson, double reference, Output out) {
+  private static void crossingValueGap(
+      String quantity,
+      String axis,
+      Map<String, Double> fixed,
+      CurveData a,
+      CurveData b,
+      Paired p,
+      List<EdgeReplicas> found,
+      double wignerDyson,
+      double reference,
+      Output out) {
     int m = p.t.length;
     int resamples = p.rd.length;
     double[] average = new double[m];
@@ -368,7 +515,19 @@ public final class MobilityOps {
         rd[r][j] = b.replicas[r][p.ib[j]] - replicaCritical;
       }
     }
-    gap(MobilityMethod.LEVEL_RATIO, quantity, axis, fixed, count > 0 ? CROSSING_VALUE : MIDPOINT, a.size, b.size, reference, p.t, d, rd, out);
+    gap(
+        MobilityMethod.LEVEL_RATIO,
+        quantity,
+        axis,
+        fixed,
+        count > 0 ? CROSSING_VALUE : MIDPOINT,
+        a.size,
+        b.size,
+        reference,
+        p.t,
+        d,
+        rd,
+        out);
   }
 
   private static Interval percentileOfFinite(double[] x) {
@@ -385,8 +544,19 @@ public final class MobilityOps {
   /** Per replica, the position of one edge's matched crossing (NaN where it does not exist). */
   private record EdgeReplicas(double estimate, double existsFraction, double[] positions) {}
 
-  private static List<EdgeReplicas> edges(MobilityMethod method, String quantity, String axis, Map<String, Double> fixed, String criterion,
-      double sizeLow, double sizeHigh, double level, double[] t, double[] d, double[][] rd, Output out) {
+  private static List<EdgeReplicas> edges(
+      MobilityMethod method,
+      String quantity,
+      String axis,
+      Map<String, Double> fixed,
+      String criterion,
+      double sizeLow,
+      double sizeHigh,
+      double level,
+      double[] t,
+      double[] d,
+      double[][] rd,
+      Output out) {
     double[] all = BoundaryOps.zeroCrossings(t, d);
     List<EdgeReplicas> found = new ArrayList<>();
     for (double estimate : all) {
@@ -395,15 +565,28 @@ public final class MobilityOps {
       double[] positions = new double[rd.length];
       int exists = 0;
       for (int r = 0; r < rd.length; r++) {
-        double c = BoundaryOps.nearestWithin(BoundaryOps.zeroCrossings(t, rd[r]), estimate, w[0], w[1]);
+        double c =
+            BoundaryOps.nearestWithin(BoundaryOps.zeroCrossings(t, rd[r]), estimate, w[0], w[1]);
         positions[r] = c;
         if (!Double.isNaN(c)) {
           replicas[exists++] = c;
         }
       }
       double fraction = (double) exists / rd.length;
-      out.edges.add(new MobilityEdge(method, quantity, axis, fixed, criterion, sizeLow, sizeHigh, level, estimate,
-          BootstrapOps.percentileInterval(replicas, exists), fraction, rd.length));
+      out.edges.add(
+          new MobilityEdge(
+              method,
+              quantity,
+              axis,
+              fixed,
+              criterion,
+              sizeLow,
+              sizeHigh,
+              level,
+              estimate,
+              BootstrapOps.percentileInterval(replicas, exists),
+              fraction,
+              rd.length));
       found.add(new EdgeReplicas(estimate, fraction, positions));
     }
     return found;
@@ -419,8 +602,19 @@ public final class MobilityOps {
     return t.length == 1 && x == t[0] ? y[0] : Double.NaN;
   }
 
-  private static void gap(MobilityMethod method, String quantity, String axis, Map<String, Double> fixed, String criterion, double sizeLow,
-      double sizeHigh, double reference, double[] t, double[] d, double[][] rd, Output out) {
+  private static void gap(
+      MobilityMethod method,
+      String quantity,
+      String axis,
+      Map<String, Double> fixed,
+      String criterion,
+      double sizeLow,
+      double sizeHigh,
+      double reference,
+      double[] t,
+      double[] d,
+      double[][] rd,
+      Output out) {
     if (t.length == 0 || reference < t[0] || reference > t[t.length - 1]) {
       return;
     }
@@ -440,10 +634,26 @@ public final class MobilityOps {
         inside++;
       }
     }
-    out.gaps.add(new MobilityGap(method, quantity, axis, fixed, criterion, sizeLow, sizeHigh, reference, w == null ? Double.NaN : w[0],
-        w == null ? Double.NaN : w[1], w != null && w[2] != 0, w != null && w[3] != 0, w == null ? 0 : 0.5 * (w[1] - w[0]),
-        BootstrapOps.percentileInterval(half, half.length), BootstrapOps.percentileInterval(lows, inside), BootstrapOps.percentileInterval(highs, inside),
-        (double) inside / rd.length, rd.length));
+    out.gaps.add(
+        new MobilityGap(
+            method,
+            quantity,
+            axis,
+            fixed,
+            criterion,
+            sizeLow,
+            sizeHigh,
+            reference,
+            w == null ? Double.NaN : w[0],
+            w == null ? Double.NaN : w[1],
+            w != null && w[2] != 0,
+            w != null && w[3] != 0,
+            w == null ? 0 : 0.5 * (w[1] - w[0]),
+            BootstrapOps.percentileInterval(half, half.length),
+            BootstrapOps.percentileInterval(lows, inside),
+            BootstrapOps.percentileInterval(highs, inside),
+            (double) inside / rd.length,
+            rd.length));
   }
 
   /**
@@ -472,7 +682,10 @@ public final class MobilityOps {
     if (left < 0 || right < 0) {
       return null;
     }
-    double dRef = left == right ? d[left] : d[left] + (d[right] - d[left]) * (reference - t[left]) / (t[right] - t[left]);
+    double dRef =
+        left == right
+            ? d[left]
+            : d[left] + (d[right] - d[left]) * (reference - t[left]) / (t[right] - t[left]);
     if (!(dRef <= 0)) {
       return null;
     }
@@ -554,7 +767,9 @@ public final class MobilityOps {
   }
 
   private static double largestSize(MobilityGap g) {
-    return Double.isNaN(g.sizeHigh()) ? (Double.isNaN(g.sizeLow()) ? Double.NEGATIVE_INFINITY : g.sizeLow()) : g.sizeHigh();
+    return Double.isNaN(g.sizeHigh())
+        ? (Double.isNaN(g.sizeLow()) ? Double.NEGATIVE_INFINITY : g.sizeLow())
+        : g.sizeHigh();
   }
 
   // ---------------------------------------------------------------- data
@@ -565,7 +780,9 @@ public final class MobilityOps {
     final List<MobilityGap> gaps = new ArrayList<>();
   }
 
-  /** Points of one family: fixed other-axis values, point indices per size (ascending in the axis). */
+  /**
+   * Points of one family: fixed other-axis values, point indices per size (ascending in the axis).
+   */
   private record Family(Map<String, Double> fixed, TreeMap<Double, List<Integer>> pointsBySize) {
     List<Integer> allPoints() {
       List<Integer> all = new ArrayList<>();
@@ -611,7 +828,9 @@ public final class MobilityOps {
           }
         }
       }
-      return SampleStatisticsOps.integerDistribution(x.stream().mapToDouble(Double::doubleValue).toArray()).modalValue();
+      return SampleStatisticsOps.integerDistribution(
+              x.stream().mapToDouble(Double::doubleValue).toArray())
+          .modalValue();
     }
 
     /** 1 where a value lies within the quantisation tolerance of {@code plateau}, else 0. */
@@ -623,7 +842,10 @@ public final class MobilityOps {
           rows[i] = new double[b.columns.length];
           for (int c = 0; c < b.columns.length; c++) {
             double v = b.rows[i][c];
-            rows[i][c] = Double.isNaN(v) ? Double.NaN : Math.abs(v - plateau) <= SampleStatisticsOps.QUANTISATION_TOLERANCE ? 1 : 0;
+            rows[i][c] =
+                Double.isNaN(v)
+                    ? Double.NaN
+                    : Math.abs(v - plateau) <= SampleStatisticsOps.QUANTISATION_TOLERANCE ? 1 : 0;
           }
         }
         out.add(new Block(b.columns, rows, b.seed));
@@ -642,7 +864,14 @@ public final class MobilityOps {
     final double[][] replicas;
     final Interval[] intervals;
 
-    private CurveData(double size, double[] keys, double[] t, double[] mean, int[] n, double[][] replicas, Interval[] intervals) {
+    private CurveData(
+        double size,
+        double[] keys,
+        double[] t,
+        double[] mean,
+        int[] n,
+        double[][] replicas,
+        Interval[] intervals) {
       this.size = size;
       this.keys = keys;
       this.t = t;
@@ -704,12 +933,19 @@ public final class MobilityOps {
           replicas[r][j] = rcount[r][j] > 0 ? rsum[r][j] / rcount[r][j] : Double.NaN;
           column[r] = replicas[r][j];
         }
-        intervals[j] = n[j] >= 2 ? percentileOfFinite(column) : Interval.undefined(BootstrapOps.METHOD);
+        intervals[j] =
+            n[j] >= 2 ? percentileOfFinite(column) : Interval.undefined(BootstrapOps.METHOD);
       }
       return new CurveData(size, keys, t, mean, n, replicas, intervals);
     }
 
-    MobilityCurve toCurve(MobilityMethod method, String quantity, String axis, Map<String, Double> fixed, double plateau, String[] states) {
+    MobilityCurve toCurve(
+        MobilityMethod method,
+        String quantity,
+        String axis,
+        Map<String, Double> fixed,
+        double plateau,
+        String[] states) {
       List<MobilityCurve.Point> points = new ArrayList<>();
       for (int j = 0; j < m(); j++) {
         points.add(new MobilityCurve.Point(t[j], n[j], mean[j], intervals[j], states[j]));
@@ -770,7 +1006,10 @@ public final class MobilityOps {
       return isGridAxis(SIZE_AXIS) ? p.coordinates().get(SIZE_AXIS) : Double.NaN;
     }
 
-    /** The value of {@code axis} at a point: its grid coordinate, else the parameter of its first record. */
+    /**
+     * The value of {@code axis} at a point: its grid coordinate, else the parameter of its first
+     * record.
+     */
     double axisValue(StudyLayout.Point p, String axis) {
       if (isGridAxis(axis)) {
         return p.coordinates().get(axis);
@@ -789,12 +1028,17 @@ public final class MobilityOps {
       return key;
     }
 
-    /** Points grouped by every grid axis but {@code axis} and L, then by L, ascending in {@code axis}. */
+    /**
+     * Points grouped by every grid axis but {@code axis} and L, then by L, ascending in {@code
+     * axis}.
+     */
     List<Family> gridFamilies(String axis) {
       Map<Map<String, Double>, TreeMap<Double, List<Integer>>> groups = new LinkedHashMap<>();
       for (StudyLayout.Point p : layout.points()) {
         double size = sizeOf(p);
-        groups.computeIfAbsent(others(p, axis), k -> new TreeMap<>()).computeIfAbsent(Double.isNaN(size) ? 0 : size, k -> new ArrayList<>())
+        groups
+            .computeIfAbsent(others(p, axis), k -> new TreeMap<>())
+            .computeIfAbsent(Double.isNaN(size) ? 0 : size, k -> new ArrayList<>())
             .add(p.index());
       }
       List<Family> out = new ArrayList<>();
@@ -802,7 +1046,9 @@ public final class MobilityOps {
         TreeMap<Double, List<Integer>> sorted = new TreeMap<>();
         for (Map.Entry<Double, List<Integer>> s : e.getValue().entrySet()) {
           List<Integer> list = new ArrayList<>(s.getValue());
-          list.sort(Comparator.comparingDouble((Integer i) -> axisValue(layout.points().get(i), axis)).thenComparingInt(i -> i));
+          list.sort(
+              Comparator.comparingDouble((Integer i) -> axisValue(layout.points().get(i), axis))
+                  .thenComparingInt(i -> i));
           sorted.put(isGridAxis(SIZE_AXIS) ? s.getKey() : Double.NaN, list);
         }
         out.add(new Family(e.getKey(), sorted));
@@ -862,10 +1108,11 @@ public final class MobilityOps {
         if (Double.isNaN(position) || (!t.isEmpty() && t.get(t.size() - 1) == position)) {
           continue;
         }
-        double[][] rows = byPoint.get(p).stream()
-            .filter(r -> r.result().values().containsKey(quantity))
-            .map(r -> new double[] {r.result().values().get(quantity)})
-            .toArray(double[][]::new);
+        double[][] rows =
+            byPoint.get(p).stream()
+                .filter(r -> r.result().values().containsKey(quantity))
+                .map(r -> new double[] {r.result().values().get(quantity)})
+                .toArray(double[][]::new);
         if (rows.length == 0) {
           continue;
         }
@@ -883,7 +1130,10 @@ public final class MobilityOps {
 
     /** One column per kept level-ratio window of one point; null when none is kept. */
     CurveData windowCurve(double size, int point) {
-      List<RealisationRecord> rs = byPoint.get(point).stream().filter(r -> r.result().values().containsKey(LEVEL_RATIO)).toList();
+      List<RealisationRecord> rs =
+          byPoint.get(point).stream()
+              .filter(r -> r.result().values().containsKey(LEVEL_RATIO))
+              .toList();
       List<Integer> windows = new ArrayList<>();
       List<Double> centres = new ArrayList<>();
       for (int k = 0; k < 1000; k++) {
@@ -921,16 +1171,22 @@ public final class MobilityOps {
       }
       for (int i = 0; i < rs.size(); i++) {
         for (int j = 0; j < m; j++) {
-          rows[i][j] = rs.get(i).result().values().getOrDefault(LEVEL_RATIO + ".w" + windows.get(j), Double.NaN);
+          rows[i][j] =
+              rs.get(i)
+                  .result()
+                  .values()
+                  .getOrDefault(LEVEL_RATIO + ".w" + windows.get(j), Double.NaN);
         }
       }
       double[] keys = windows.stream().mapToDouble(Integer::doubleValue).toArray();
       double[] t = centres.stream().mapToDouble(Double::doubleValue).toArray();
-      return CurveData.of(size, keys, t, List.of(new Block(columns, rows, seed(point, LEVEL_RATIO))));
+      return CurveData.of(
+          size, keys, t, List.of(new Block(columns, rows, seed(point, LEVEL_RATIO))));
     }
 
     /** One column per Fermi energy k of {@code <base>@E<k>} at one point, ordered by energy. */
-    RawCurve perEnergyRaw(double size, int point, TreeMap<Integer, String> quantities, String family) {
+    RawCurve perEnergyRaw(
+        double size, int point, TreeMap<Integer, String> quantities, String family) {
       List<RealisationRecord> rs = byPoint.get(point);
       List<String> kept = new ArrayList<>();
       List<Double> energies = new ArrayList<>();
@@ -966,7 +1222,8 @@ public final class MobilityOps {
           rows[i][j] = rs.get(i).result().values().getOrDefault(kept.get(order[j]), Double.NaN);
         }
       }
-      return new RawCurve(size, t, t, m == 0 ? List.of() : List.of(new Block(columns, rows, seed(point, family))));
+      return new RawCurve(
+          size, t, t, m == 0 ? List.of() : List.of(new Block(columns, rows, seed(point, family))));
     }
   }
 }

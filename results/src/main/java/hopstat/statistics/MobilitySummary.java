@@ -14,8 +14,14 @@ import java.util.List;
  * @param gaps mobility-gap estimates
  * @param agreements comparisons between estimators
  */
-public record MobilitySummary(SymmetryClass effectiveClass, String wignerDysonEnsemble, double wignerDysonRatio, List<MobilityCurve> curves,
-    List<MobilityEdge> edges, List<MobilityGap> gaps, List<MobilityAgreement> agreements) {
+public record MobilitySummary(
+    SymmetryClass effectiveClass,
+    String wignerDysonEnsemble,
+    double wignerDysonRatio,
+    List<MobilityCurve> curves,
+    List<MobilityEdge> edges,
+    List<MobilityGap> gaps,
+    List<MobilityAgreement> agreements) {
   public MobilitySummary {
     curves = List.copyOf(curves);
     edges = List.copyOf(edges);

@@ -15,7 +15,13 @@ import java.util.Map;
  * @param quantities per quantity, in observable order (only those with at least one sample)
  * @param failureReasons distinct failure reasons with counts, most frequent first (at most a few)
  */
-public record PointSummary(int index, Map<String, Double> coordinates, int done, int failed, List<QuantitySummary> quantities, Map<String, Integer> failureReasons) {
+public record PointSummary(
+    int index,
+    Map<String, Double> coordinates,
+    int done,
+    int failed,
+    List<QuantitySummary> quantities,
+    Map<String, Integer> failureReasons) {
   public PointSummary {
     coordinates = Collections.unmodifiableMap(new LinkedHashMap<>(coordinates));
     quantities = List.copyOf(quantities);

@@ -15,5 +15,12 @@ package hopstat.statistics;
  *     and the quantity is not integer-valued, else null
  */
 public record QuantitySummary(
-    String name, MeanEstimate mean, double median, double min, double max, IntegerDistribution integer, Quantiles quantiles, Interval meanBootstrap,
+    String name,
+    MeanEstimate mean,
+    double median,
+    double min,
+    double max,
+    IntegerDistribution integer,
+    Quantiles quantiles,
+    Interval meanBootstrap,
     TypicalValue typical) {}

@@ -11,6 +11,7 @@ public final class SampleStatisticsOps {
 
   /** Confidence level of every interval hopstat reports. */
   public static final double CONFIDENCE = 0.95;
+
   /**
    * A sample of an integer invariant counts as quantised when it lies within this distance of an
    * integer (our choice: well above the 1e-10 noise of a converged index, well below the 0.5 that
@@ -18,20 +19,22 @@ public final class SampleStatisticsOps {
    */
   public static final double QUANTISATION_TOLERANCE = 0.05;
 
-  private static final double Z = new NormalDistribution(null, 0, 1).inverseCumulativeProbability(0.5 + CONFIDENCE / 2);
+  private static final double Z =
+      new NormalDistribution(null, 0, 1).inverseCumulativeProbability(0.5 + CONFIDENCE / 2);
 
   private SampleStatisticsOps() {}
 
   /**
-   * Mean, standard error and Student-t interval. The sum runs over {@code x} in the given order,
-   * so callers that want bit-identical results pass samples in a canonical order.
+   * Mean, standard error and Student-t interval. The sum runs over {@code x} in the given order, so
+   * callers that want bit-identical results pass samples in a canonical order.
    *
    * @param x samples; read, not modified
    */
   public static MeanEstimate mean(double[] x) {
     int n = x.length;
     if (n == 0) {
-      return new MeanEstimate(0, Double.NaN, Double.NaN, Double.NaN, CONFIDENCE, Double.NaN, Double.NaN);
+      return new MeanEstimate(
+          0, Double.NaN, Double.NaN, Double.NaN, CONFIDENCE, Double.NaN, Double.NaN);
     }
     double sum = 0;
     for (double v : x) {
@@ -87,7 +90,11 @@ public final class SampleStatisticsOps {
   public static Quantiles quantiles(double[] x) {
     double[] s = x.clone();
     Arrays.sort(s);
-    return new Quantiles(quantileOfSorted(s, 0.05), quantileOfSorted(s, 0.25), quantileOfSorted(s, 0.75), quantileOfSorted(s, 0.95));
+    return new Quantiles(
+        quantileOfSorted(s, 0.05),
+        quantileOfSorted(s, 0.25),
+        quantileOfSorted(s, 0.75),
+        quantileOfSorted(s, 0.95));
   }
 
   /**
@@ -107,7 +114,8 @@ public final class SampleStatisticsOps {
       logs[i] = Math.log(x[i]);
     }
     MeanEstimate m = mean(logs);
-    return new TypicalValue(m.n(), Math.exp(m.mean()), m.standardError(), Math.exp(m.ciLow()), Math.exp(m.ciHigh()));
+    return new TypicalValue(
+        m.n(), Math.exp(m.mean()), m.standardError(), Math.exp(m.ciLow()), Math.exp(m.ciHigh()));
   }
 
   /**
@@ -155,9 +163,19 @@ public final class SampleStatisticsOps {
     java.util.List<ValueProbability> probabilities = new java.util.ArrayList<>();
     for (var e : counts.entrySet()) {
       double[] w = wilson(e.getValue(), n);
-      probabilities.add(new ValueProbability(e.getKey(), e.getValue(), (double) e.getValue() / n, w[0], w[1]));
+      probabilities.add(
+          new ValueProbability(e.getKey(), e.getValue(), (double) e.getValue() / n, w[0], w[1]));
     }
-    return new IntegerDistribution(n, counts, modal, n == 0 ? Double.NaN : (double) best / n, ci[0], ci[1],
-        n == 0 ? Double.NaN : maxDistance, nonQuantised, QUANTISATION_TOLERANCE, probabilities);
+    return new IntegerDistribution(
+        n,
+        counts,
+        modal,
+        n == 0 ? Double.NaN : (double) best / n,
+        ci[0],
+        ci[1],
+        n == 0 ? Double.NaN : maxDistance,
+        nonQuantised,
+        QUANTISATION_TOLERANCE,
+        probabilities);
   }
 }

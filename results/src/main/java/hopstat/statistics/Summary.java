@@ -15,7 +15,15 @@ import java.util.List;
  * @param boundaries phase-boundary estimates along grid cuts ({@link BoundaryOps})
  * @param mobility mobility edges and gaps ({@link MobilityOps})
  */
-public record Summary(String name, String specHash, List<String> gridNames, int plannedPerPoint, List<String> quantityNames, List<String> integerQuantities, List<PointSummary> points, List<BoundaryEstimate> boundaries,
+public record Summary(
+    String name,
+    String specHash,
+    List<String> gridNames,
+    int plannedPerPoint,
+    List<String> quantityNames,
+    List<String> integerQuantities,
+    List<PointSummary> points,
+    List<BoundaryEstimate> boundaries,
     MobilitySummary mobility) {
   public Summary {
     gridNames = List.copyOf(gridNames);

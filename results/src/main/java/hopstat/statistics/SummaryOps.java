@@ -13,8 +13,8 @@ import java.util.Map;
 
 /**
  * Builds the {@link Summary} of a study from its layout and journal records. A pure function:
- * records are put in canonical order (point, realisation) first, so the summary is the same bit
- * for bit whatever order, thread count, resume or sharding produced the journal.
+ * records are put in canonical order (point, realisation) first, so the summary is the same bit for
+ * bit whatever order, thread count, resume or sharding produced the journal.
  */
 public final class SummaryOps {
 
@@ -35,7 +35,13 @@ public final class SummaryOps {
     for (RealisationRecord r : records) {
       int p = r.result().pointIndex();
       if (p < 0 || p >= byPoint.size()) {
-        throw new IllegalArgumentException("record " + r.result().taskId() + " names point " + p + " outside the grid of " + byPoint.size());
+        throw new IllegalArgumentException(
+            "record "
+                + r.result().taskId()
+                + " names point "
+                + p
+                + " outside the grid of "
+                + byPoint.size());
       }
       byPoint.get(p).add(r.result());
     }
@@ -51,12 +57,23 @@ public final class SummaryOps {
       results.sort(Comparator.comparingInt(RealisationResult::realisationIndex));
       points.add(summarisePoint(layout.specHash(), point, results, layout.quantities()));
     }
-    return new Summary(layout.name(), layout.specHash(), layout.gridNames(), layout.plannedPerPoint(),
-        layout.quantities().stream().map(Quantity::name).toList(), integerQuantities, points,
-        BoundaryOps.estimate(layout, records), MobilityOps.estimate(layout, records));
+    return new Summary(
+        layout.name(),
+        layout.specHash(),
+        layout.gridNames(),
+        layout.plannedPerPoint(),
+        layout.quantities().stream().map(Quantity::name).toList(),
+        integerQuantities,
+        points,
+        BoundaryOps.estimate(layout, records),
+        MobilityOps.estimate(layout, records));
   }
 
-  private static PointSummary summarisePoint(String specHash, StudyLayout.Point point, List<RealisationResult> results, List<Quantity> quantities) {
+  private static PointSummary summarisePoint(
+      String specHash,
+      StudyLayout.Point point,
+      List<RealisationResult> results,
+      List<Quantity> quantities) {
     int done = 0;
     int failed = 0;
     Map<String, Integer> reasons = new LinkedHashMap<>();
@@ -70,10 +87,11 @@ public final class SummaryOps {
     }
     List<QuantitySummary> summaries = new ArrayList<>();
     for (Quantity q : quantities) {
-      double[] x = results.stream()
-          .filter(r -> r.outcome() == Outcome.DONE && r.values().containsKey(q.name()))
-          .mapToDouble(r -> r.values().get(q.name()))
-          .toArray();
+      double[] x =
+          results.stream()
+              .filter(r -> r.outcome() == Outcome.DONE && r.values().containsKey(q.name()))
+              .mapToDouble(r -> r.values().get(q.name()))
+              .toArray();
       if (x.length == 0) {
         continue;
       }
@@ -83,16 +101,28 @@ public final class SummaryOps {
         min = Math.min(min, v);
         max = Math.max(max, v);
       }
-      summaries.add(new QuantitySummary(q.name(), SampleStatisticsOps.mean(x), SampleStatisticsOps.median(x), min, max,
-          q.integerValued() ? SampleStatisticsOps.integerDistribution(x) : null, SampleStatisticsOps.quantiles(x),
-          BootstrapOps.meanInterval(x, BootstrapOps.seed(specHash, "mean", "point=" + point.index(), q.name())),
-          q.integerValued() ? null : SampleStatisticsOps.typical(x)));
+      summaries.add(
+          new QuantitySummary(
+              q.name(),
+              SampleStatisticsOps.mean(x),
+              SampleStatisticsOps.median(x),
+              min,
+              max,
+              q.integerValued() ? SampleStatisticsOps.integerDistribution(x) : null,
+              SampleStatisticsOps.quantiles(x),
+              BootstrapOps.meanInterval(
+                  x, BootstrapOps.seed(specHash, "mean", "point=" + point.index(), q.name())),
+              q.integerValued() ? null : SampleStatisticsOps.typical(x)));
     }
     Map<String, Integer> topReasons = new LinkedHashMap<>();
     reasons.entrySet().stream()
-        .sorted(Map.Entry.<String, Integer>comparingByValue().reversed().thenComparing(Map.Entry.comparingByKey()))
+        .sorted(
+            Map.Entry.<String, Integer>comparingByValue()
+                .reversed()
+                .thenComparing(Map.Entry.comparingByKey()))
         .limit(MAX_FAILURE_REASONS)
         .forEach(e -> topReasons.put(e.getKey(), e.getValue()));
-    return new PointSummary(point.index(), point.coordinates(), done, failed, summaries, topReasons);
+    return new PointSummary(
+        point.index(), point.coordinates(), done, failed, summaries, topReasons);
   }
 }

@@ -9,4 +9,5 @@ package hopstat.statistics;
  * @param wilsonLow lower end of the 95 % Wilson score interval of the fraction
  * @param wilsonHigh upper end of the 95 % Wilson score interval of the fraction
  */
-public record ValueProbability(long value, int count, double fraction, double wilsonLow, double wilsonHigh) {}
+public record ValueProbability(
+    long value, int count, double fraction, double wilsonLow, double wilsonHigh) {}

@@ -96,7 +96,8 @@ public final class SyntheticStudy {
     }
 
     /** Values of one realisation from its grid coordinates and its own generator. */
-    public Builder values(BiFunction<Map<String, Double>, RandomGenerator, Map<String, Double>> rule) {
+    public Builder values(
+        BiFunction<Map<String, Double>, RandomGenerator, Map<String, Double>> rule) {
       this.values = rule;
       return this;
     }
@@ -128,13 +129,33 @@ public final class SyntheticStudy {
         for (int r = 0; r < realisations; r++) {
           long s = SeedOps.realisationSeed(seed, p, r);
           String reason = failure.apply(p, r);
-          RealisationResult result = reason == null
-              ? new RealisationResult("p" + p + "r" + r, p, r, s, Outcome.DONE, values.apply(coords.get(p), SeedOps.generator(s)), null, 0.01)
-              : new RealisationResult("p" + p + "r" + r, p, r, s, Outcome.FAILED, Map.of(), reason, 0.01);
-          records.add(new RealisationRecord(result, coords.get(p), coords.get(p), "0.0-test (abc1234)", linalg));
+          RealisationResult result =
+              reason == null
+                  ? new RealisationResult(
+                      "p" + p + "r" + r,
+                      p,
+                      r,
+                      s,
+                      Outcome.DONE,
+                      values.apply(coords.get(p), SeedOps.generator(s)),
+                      null,
+                      0.01)
+                  : new RealisationResult(
+                      "p" + p + "r" + r, p, r, s, Outcome.FAILED, Map.of(), reason, 0.01);
+          records.add(
+              new RealisationRecord(
+                  result, coords.get(p), coords.get(p), "0.0-test (abc1234)", linalg));
         }
       }
-      StudyLayout layout = new StudyLayout("synthetic", specHash, new ArrayList<>(axes.keySet()), points, quantities, realisations, effectiveClass);
+      StudyLayout layout =
+          new StudyLayout(
+              "synthetic",
+              specHash,
+              new ArrayList<>(axes.keySet()),
+              points,
+              quantities,
+              realisations,
+              effectiveClass);
       return new SyntheticStudy(layout, records);
     }
   }

@@ -23,21 +23,30 @@ final class ExternalTools {
   static void require(Path executable, String debianPackage) {
     boolean present = Files.isExecutable(executable);
     if ("true".equals(System.getenv("CI"))) {
-      assertThat(present).as("%s is required under CI=true (Debian package %s)", executable, debianPackage).isTrue();
+      assertThat(present)
+          .as("%s is required under CI=true (Debian package %s)", executable, debianPackage)
+          .isTrue();
     }
-    Assumptions.assumeTrue(present, executable + " not installed (Debian package " + debianPackage + ")");
+    Assumptions.assumeTrue(
+        present, executable + " not installed (Debian package " + debianPackage + ")");
   }
 
   /** Output of a finished process (stdout and stderr kept apart, both captured to files). */
   record Run(int exitCode, String stdout, String stderr) {}
 
-  static Run run(Path workDir, long timeoutSeconds, String... command) throws IOException, InterruptedException {
+  static Run run(Path workDir, long timeoutSeconds, String... command)
+      throws IOException, InterruptedException {
     Path out = Files.createTempFile(workDir, "out", ".txt");
     Path err = Files.createTempFile(workDir, "err", ".txt");
-    Process p = new ProcessBuilder(new ArrayList<>(List.of(command))).redirectOutput(out.toFile()).redirectError(err.toFile()).start();
+    Process p =
+        new ProcessBuilder(new ArrayList<>(List.of(command)))
+            .redirectOutput(out.toFile())
+            .redirectError(err.toFile())
+            .start();
     if (!p.waitFor(timeoutSeconds, TimeUnit.SECONDS)) {
       p.destroyForcibly();
-      throw new AssertionError(String.join(" ", command) + " did not finish within " + timeoutSeconds + " s");
+      throw new AssertionError(
+          String.join(" ", command) + " did not finish within " + timeoutSeconds + " s");
     }
     return new Run(p.exitValue(), Files.readString(out), Files.readString(err));
   }

@@ -38,8 +38,13 @@ class ReportFilesTest {
   static StudyReport report(Instant generated) {
     SyntheticStudy s = GoldenStudy.study();
     Summary summary = SummaryOps.summarise(s.layout(), s.records());
-    return new StudyReport(s.layout(), summary, s.records(), "{\"name\": \"synthetic\", \"note\": \"<b>escaped</b>\"}",
-        Map.of("W", "W (box strength, units of t)", "L", "L (lattice sites)"), Provenance.of(s.layout().specHash(), s.records(), generated));
+    return new StudyReport(
+        s.layout(),
+        summary,
+        s.records(),
+        "{\"name\": \"synthetic\", \"note\": \"<b>escaped</b>\"}",
+        Map.of("W", "W (box strength, units of t)", "L", "L (lattice sites)"),
+        Provenance.of(s.layout().specHash(), s.records(), generated));
   }
 
   @BeforeAll
@@ -60,9 +65,16 @@ class ReportFilesTest {
   @Test
   void everyOutputExistsAndOnlyTheHtmlAndHdf5CarryTheDate() throws IOException {
     List<Path> names = files(first);
-    assertThat(names).contains(Path.of("summary.csv"), Path.of("summary.json"), Path.of("boundaries.csv"), Path.of("report.html"), Path.of("results.h5"));
+    assertThat(names)
+        .contains(
+            Path.of("summary.csv"),
+            Path.of("summary.json"),
+            Path.of("boundaries.csv"),
+            Path.of("report.html"),
+            Path.of("results.h5"));
     assertThat(names.stream().filter(p -> p.toString().endsWith(".png"))).isNotEmpty();
-    assertThat(names.stream().filter(p -> p.toString().endsWith(".svg")).count()).isEqualTo(names.stream().filter(p -> p.toString().endsWith(".png")).count());
+    assertThat(names.stream().filter(p -> p.toString().endsWith(".svg")).count())
+        .isEqualTo(names.stream().filter(p -> p.toString().endsWith(".png")).count());
     assertThat(names).allMatch(p -> !p.toString().endsWith(".tmp"));
     assertThat(files(second)).isEqualTo(names);
     for (Path p : names) {
@@ -80,8 +92,17 @@ class ReportFilesTest {
   @Test
   void htmlIsSelfContainedAndCarriesProvenanceCaveatsAndEscapedSpec() throws IOException {
     String html = Files.readString(first.resolve("report.html"), StandardCharsets.UTF_8);
-    assertThat(html).contains(report.summary().specHash(), "2026-01-01T00:00:00Z", "java (40 records)", "0.0-test (abc1234) (40 records)", "Caveats",
-        "finite-size", "ConvergenceFailure: synthetic", "&lt;b&gt;escaped&lt;/b&gt;", "W (box strength, units of t)");
+    assertThat(html)
+        .contains(
+            report.summary().specHash(),
+            "2026-01-01T00:00:00Z",
+            "java (40 records)",
+            "0.0-test (abc1234) (40 records)",
+            "Caveats",
+            "finite-size",
+            "ConvergenceFailure: synthetic",
+            "&lt;b&gt;escaped&lt;/b&gt;",
+            "W (box strength, units of t)");
     // No external resources: nothing fetched by src/href other than inline data.
     Matcher m = Pattern.compile("(src|href)=\"([^\"]*)\"").matcher(html);
     int images = 0;
@@ -108,7 +129,10 @@ class ReportFilesTest {
         assertThat(colours.size()).as("distinct colours in %s", p).isGreaterThan(5);
       }
       if (p.toString().endsWith(".svg")) {
-        assertThat(Files.readString(first.resolve(p)).strip()).startsWith("<?xml").contains("<svg").endsWith("</svg>");
+        assertThat(Files.readString(first.resolve(p)).strip())
+            .startsWith("<?xml")
+            .contains("<svg")
+            .endsWith("</svg>");
       }
     }
   }
@@ -142,17 +166,33 @@ class ReportFilesTest {
       }
       double[] estimate = (double[]) h5.getDatasetByPath("boundaries/estimate").getData();
       assertThat(estimate).hasSize(report.summary().boundaries().size());
-      assertThat(estimate[0]).isCloseTo(report.summary().boundaries().get(0).estimate(), within(0.0));
+      assertThat(estimate[0])
+          .isCloseTo(report.summary().boundaries().get(0).estimate(), within(0.0));
     }
   }
 
   @Test
   void hdf5IsReadableByTheReferenceHdf5Tools() throws Exception {
     ExternalTools.require(Path.of("/usr/bin/h5dump"), "hdf5-tools");
-    ExternalTools.Run header = ExternalTools.run(root, 60, "/usr/bin/h5dump", "-H", first.resolve("results.h5").toString());
+    ExternalTools.Run header =
+        ExternalTools.run(
+            root, 60, "/usr/bin/h5dump", "-H", first.resolve("results.h5").toString());
     assertThat(header.exitCode()).as(header.stderr()).isZero();
-    assertThat(header.stdout()).contains("GROUP \"realisations\"", "DATASET \"seed\"", "H5T_STD_I64LE", "GROUP \"aggregates\"", "DATASET \"estimate\"");
-    ExternalTools.Run data = ExternalTools.run(root, 60, "/usr/bin/h5dump", "-d", "/points/done", first.resolve("results.h5").toString());
+    assertThat(header.stdout())
+        .contains(
+            "GROUP \"realisations\"",
+            "DATASET \"seed\"",
+            "H5T_STD_I64LE",
+            "GROUP \"aggregates\"",
+            "DATASET \"estimate\"");
+    ExternalTools.Run data =
+        ExternalTools.run(
+            root,
+            60,
+            "/usr/bin/h5dump",
+            "-d",
+            "/points/done",
+            first.resolve("results.h5").toString());
     assertThat(data.exitCode()).as(data.stderr()).isZero();
     // Eight points, five realisations each, one failure at point 2 (GoldenStudy).
     assertThat(data.stdout().replaceAll("\\s+", " ")).contains("(0): 5, 5, 4, 5, 5, 5, 5, 5");
@@ -165,15 +205,27 @@ class ReportFilesTest {
     Path profile = Files.createTempDirectory(root, "profile");
     Path shot = root.resolve("shot.png");
     String url = first.resolve("report.html").toUri().toString();
-    String[] common = {chromium.toString(), "--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update",
-        "--disable-sync", "--no-first-run", "--user-data-dir=" + profile, "--window-size=1200,2400", "--virtual-time-budget=5000"};
+    String[] common = {
+      chromium.toString(),
+      "--headless",
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+      "--no-first-run",
+      "--user-data-dir=" + profile,
+      "--window-size=1200,2400",
+      "--virtual-time-budget=5000"
+    };
     ExternalTools.Run dom = ExternalTools.run(root, 120, concat(common, "--dump-dom", url));
     assertThat(dom.exitCode()).as(dom.stderr()).isZero();
     long pngFiles = files(first).stream().filter(p -> p.toString().endsWith(".png")).count();
     assertThat(dom.stdout()).contains("<img", "Estimated phase boundaries");
     // The page's own script counts images the browser decoded (complete with a natural width).
     assertThat(dom.stdout()).contains("data-rendered-images=\"" + pngFiles + "\"");
-    ExternalTools.Run screenshot = ExternalTools.run(root, 120, concat(common, "--screenshot=" + shot, url));
+    ExternalTools.Run screenshot =
+        ExternalTools.run(root, 120, concat(common, "--screenshot=" + shot, url));
     assertThat(screenshot.exitCode()).as(screenshot.stderr()).isZero();
     BufferedImage image = ImageIO.read(shot.toFile());
     Set<Integer> colours = new HashSet<>();

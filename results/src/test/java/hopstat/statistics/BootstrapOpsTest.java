@@ -14,7 +14,8 @@ class BootstrapOpsTest {
     assertThat(BootstrapOps.seed("abc", "mean", "point=1", "bott")).isEqualTo(a);
     assertThat(BootstrapOps.seed("abc", "mean", "point=2", "bott")).isNotEqualTo(a);
     assertThat(BootstrapOps.seed("abd", "mean", "point=1", "bott")).isNotEqualTo(a);
-    // Keys are separated, so ("point=1", "bott") and ("point=1\nbott") would collide only by design.
+    // Keys are separated, so ("point=1", "bott") and ("point=1\nbott") would collide only by
+    // design.
     assertThat(BootstrapOps.seed("abc", "mean", "point=1b", "ott")).isNotEqualTo(a);
   }
 
@@ -50,7 +51,8 @@ class BootstrapOpsTest {
     assertThat(a.high()).isGreaterThan(m.mean());
     // For near-normal data the percentile interval approaches mean ± 1.96 s/sqrt(n) (common
     // practice); allow 15 % on the width for bootstrap noise and n = 60.
-    assertThat(a.high() - a.low()).isCloseTo(m.ciHigh() - m.ciLow(), within(0.15 * (m.ciHigh() - m.ciLow())));
+    assertThat(a.high() - a.low())
+        .isCloseTo(m.ciHigh() - m.ciLow(), within(0.15 * (m.ciHigh() - m.ciLow())));
     assertThat(BootstrapOps.meanInterval(new double[] {1}, 1).low()).isNaN();
   }
 }

@@ -37,7 +37,14 @@ class BoundaryOpsTest {
 
   @Test
   void cutsFixEveryAxisButOne() {
-    SyntheticStudy s = aStudy("h").axis("L", 8, 12).axis("W", 0, 1, 2).integer("c").realisations(1).values((c, r) -> Map.of("c", 0.0)).build();
+    SyntheticStudy s =
+        aStudy("h")
+            .axis("L", 8, 12)
+            .axis("W", 0, 1, 2)
+            .integer("c")
+            .realisations(1)
+            .values((c, r) -> Map.of("c", 0.0))
+            .build();
     List<GridCut> cuts = CutOps.cuts(s.layout().gridNames(), s.layout().points());
     // Along L: one cut per W (3); along W: one per L (2).
     assertThat(cuts).hasSize(5);
@@ -52,8 +59,13 @@ class BoundaryOpsTest {
   void aSharpDeterministicTransitionIsFoundWithATightInterval() {
     // Invariant 1 below W = 2.5 and 0 above in every realisation: the mean crosses 1/2 midway
     // between W = 2 and 3 (derived), with no sampling error at all.
-    SyntheticStudy s = aStudy("sharp").axis("W", 0, 1, 2, 3, 4).integer("c").realisations(5)
-        .values((c, r) -> Map.of("c", c.get("W") < 2.5 ? 1.0 : 0.0)).build();
+    SyntheticStudy s =
+        aStudy("sharp")
+            .axis("W", 0, 1, 2, 3, 4)
+            .integer("c")
+            .realisations(5)
+            .values((c, r) -> Map.of("c", c.get("W") < 2.5 ? 1.0 : 0.0))
+            .build();
     List<BoundaryEstimate> b = BoundaryOps.estimate(s.layout(), s.records());
     assertThat(b).hasSize(1);
     assertThat(b.get(0).kind()).isEqualTo(BoundaryKind.HALF_INTEGER_CROSSING);
@@ -66,10 +78,18 @@ class BoundaryOpsTest {
 
   @Test
   void estimatesAreBitIdenticalForEqualJournalsInAnyOrder() {
-    SyntheticStudy s = aStudy("order").axis("W", 0, 1, 2, 3, 4).integer("c").realisations(20)
-        .values((c, r) -> Map.of("c", r.nextDouble() < 1 / (1 + Math.exp(c.get("W") - 2)) ? 1.0 : 0.0)).build();
+    SyntheticStudy s =
+        aStudy("order")
+            .axis("W", 0, 1, 2, 3, 4)
+            .integer("c")
+            .realisations(20)
+            .values(
+                (c, r) ->
+                    Map.of("c", r.nextDouble() < 1 / (1 + Math.exp(c.get("W") - 2)) ? 1.0 : 0.0))
+            .build();
     List<hopstat.record.RealisationRecord> reversed = new java.util.ArrayList<>(s.records());
     java.util.Collections.reverse(reversed);
-    assertThat(BoundaryOps.estimate(s.layout(), reversed)).isEqualTo(BoundaryOps.estimate(s.layout(), s.records()));
+    assertThat(BoundaryOps.estimate(s.layout(), reversed))
+        .isEqualTo(BoundaryOps.estimate(s.layout(), s.records()));
   }
 }

@@ -7,14 +7,15 @@ import java.util.function.LongFunction;
 import org.junit.jupiter.api.Test;
 
 /**
- * Coverage of the mobility intervals over repeated synthetic studies with known edges
- * ({@link MobilityStudies}: the exact curves put the interpolated edges exactly on the truth, so a
- * miss is sampling error). Each check counts how often the 95 % interval contains the true value.
+ * Coverage of the mobility intervals over repeated synthetic studies with known edges ({@link
+ * MobilityStudies}: the exact curves put the interpolated edges exactly on the truth, so a miss is
+ * sampling error). Each check counts how often the 95 % interval contains the true value.
  */
 class MobilityCoverageTest {
 
   /** Studies per estimator: bounded by test time (each study costs ~0.05–0.1 s of bootstrap). */
   private static final int STUDIES = 60;
+
   /**
    * Binomial tolerance: with 60 studies and true coverage 0.95 the observed rate has standard
    * deviation √(0.95·0.05/60) = 0.028 (derived); we accept rates ≥ 0.95 − 3·0.028 = 0.866 (a
@@ -24,7 +25,9 @@ class MobilityCoverageTest {
    * conservative when the estimate is grid-limited.
    */
   private static final double LOW = 0.866;
-  // Observed with these seeds when written (2026-12-02): transfer matrix upper edge 54/60, lower edge
+
+  // Observed with these seeds when written (2026-12-02): transfer matrix upper edge 54/60, lower
+  // edge
   // 57/60, gap 57/60; level ratio edge 54/60, gap 54/60; plateau 54/60. Around 0.90-0.95: the
   // percentile bootstrap tends to under-cover a little at n = 20 realisations (its variance carries
   // the (n - 1)/n factor of the plug-in estimate; common practice).
@@ -33,7 +36,8 @@ class MobilityCoverageTest {
     return i.low() <= truth && truth <= i.high();
   }
 
-  private static double rate(LongFunction<SyntheticStudy> studies, java.util.function.Predicate<MobilitySummary> check) {
+  private static double rate(
+      LongFunction<SyntheticStudy> studies, java.util.function.Predicate<MobilitySummary> check) {
     int hits = 0;
     for (int s = 0; s < STUDIES; s++) {
       SyntheticStudy study = studies.apply(100 + s);
@@ -51,10 +55,16 @@ class MobilityCoverageTest {
     for (int s = 0; s < STUDIES; s++) {
       SyntheticStudy study = MobilityStudies.transferMatrix(100 + s, 20, edge);
       MobilitySummary m = MobilityOps.estimate(study.layout(), study.records());
-      MobilityEdge upper = m.edges().stream().filter(e -> e.estimate() > 0).max(java.util.Comparator.comparingDouble(MobilityEdge::existsFraction))
-          .orElseThrow();
-      MobilityEdge lower = m.edges().stream().filter(e -> e.estimate() < 0).max(java.util.Comparator.comparingDouble(MobilityEdge::existsFraction))
-          .orElseThrow();
+      MobilityEdge upper =
+          m.edges().stream()
+              .filter(e -> e.estimate() > 0)
+              .max(java.util.Comparator.comparingDouble(MobilityEdge::existsFraction))
+              .orElseThrow();
+      MobilityEdge lower =
+          m.edges().stream()
+              .filter(e -> e.estimate() < 0)
+              .max(java.util.Comparator.comparingDouble(MobilityEdge::existsFraction))
+              .orElseThrow();
       hits[0] += covers(upper.interval(), edge) ? 1 : 0;
       hits[1] += covers(lower.interval(), -edge) ? 1 : 0;
       hits[2] += covers(m.gaps().get(0).interval(), edge) ? 1 : 0;
@@ -71,8 +81,11 @@ class MobilityCoverageTest {
     for (int s = 0; s < STUDIES; s++) {
       SyntheticStudy study = MobilityStudies.levelRatio(100 + s, 20, edge, 8, 16);
       MobilitySummary m = MobilityOps.estimate(study.layout(), study.records());
-      MobilityEdge upper = m.edges().stream().filter(e -> e.estimate() > 0).max(java.util.Comparator.comparingDouble(MobilityEdge::existsFraction))
-          .orElseThrow();
+      MobilityEdge upper =
+          m.edges().stream()
+              .filter(e -> e.estimate() > 0)
+              .max(java.util.Comparator.comparingDouble(MobilityEdge::existsFraction))
+              .orElseThrow();
       hits[0] += covers(upper.interval(), edge) ? 1 : 0;
       hits[1] += covers(m.gaps().get(0).interval(), edge) ? 1 : 0;
     }
@@ -83,7 +96,10 @@ class MobilityCoverageTest {
 
   @Test
   void invariantPlateauIntervalsCoverTheTruth() {
-    double rate = rate(s -> MobilityStudies.plateau(s, 60), m -> covers(m.gaps().get(0).interval(), MobilityStudies.PLATEAU_EDGE));
+    double rate =
+        rate(
+            s -> MobilityStudies.plateau(s, 60),
+            m -> covers(m.gaps().get(0).interval(), MobilityStudies.PLATEAU_EDGE));
     assertThat(rate).isGreaterThanOrEqualTo(LOW);
   }
 }

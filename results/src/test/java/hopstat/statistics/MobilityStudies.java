@@ -21,6 +21,7 @@ final class MobilityStudies {
   static final double TM_SLOPE = 0.1;
   static final double NU = 1.5;
   static final double TM_NOISE = 0.03;
+
   /** Energies −2..2 in steps of 0.25. */
   static final double[] ENERGIES = range(-2, 0.25, 17);
 
@@ -29,6 +30,7 @@ final class MobilityStudies {
 
   static final int WINDOWS = 16;
   static final double LEVEL_NOISE = 0.02;
+
   /** Window k has centre −1.875 + 0.25 k. */
   static final double[] CENTRES = range(-1.875, 0.25, WINDOWS);
 
@@ -51,8 +53,8 @@ final class MobilityStudies {
   /**
    * Λ with one-parameter scaling around the edges ±E_c (a linearised scaling form as in MacKinnon
    * and Kramer, Z. Phys. B 53, 1 (1983); the shape is our choice): localised (Λ falls with M) for
-   * |E| &lt; E_c, extended outside. Λ_M(±E_c) = Λ_c for every M and Λ_8 − Λ_4 is linear in |E|,
-   * so interpolated crossings are exact (derived).
+   * |E| &lt; E_c, extended outside. Λ_M(±E_c) = Λ_c for every M and Λ_8 − Λ_4 is linear in |E|, so
+   * interpolated crossings are exact (derived).
    */
   static double lambda(double energy, double m, double edge) {
     return LAMBDA_C + TM_SLOPE * (Math.abs(energy) - edge) * Math.pow(m, 1 / NU);
@@ -60,9 +62,9 @@ final class MobilityStudies {
 
   /**
    * ⟨r⟩ in window centre E at size L: midpoint + half-span·tanh((|E| − E_c)·L/4), Poisson-like for
-   * |E| &lt; E_c and GOE-like outside (shape our choice). Odd about E_c, and E_c lies midway between
-   * two centres, so linear interpolation crosses the midpoint (and two sizes' curves cross each
-   * other) exactly at E_c (derived).
+   * |E| &lt; E_c and GOE-like outside (shape our choice). Odd about E_c, and E_c lies midway
+   * between two centres, so linear interpolation crosses the midpoint (and two sizes' curves cross
+   * each other) exactly at E_c (derived).
    */
   static double ratio(double centre, double size, double edge) {
     double mid = 0.5 * (MobilityOps.POISSON_RATIO + MobilityOps.GOE_RATIO);
@@ -93,7 +95,11 @@ final class MobilityStudies {
         .real("lambda", "1")
         .realisations(realisations)
         .seed(seed)
-        .values((c, random) -> Map.of("lambda", lambda(c.get("energy"), c.get("L"), edge) + TM_NOISE * random.nextGaussian()))
+        .values(
+            (c, random) ->
+                Map.of(
+                    "lambda",
+                    lambda(c.get("energy"), c.get("L"), edge) + TM_NOISE * random.nextGaussian()))
         .build();
   }
 
@@ -102,8 +108,13 @@ final class MobilityStudies {
    * in 70 % of the realisations (band tails with too few levels) and must be dropped.
    */
   static SyntheticStudy levelRatio(long seed, int realisations, double edge, double... sizes) {
-    SyntheticStudy.Builder b = aStudy("lr-" + seed).axis("L", sizes).real("level-ratio", "1").realisations(realisations).seed(seed)
-        .effectiveClass(SymmetryClass.AI);
+    SyntheticStudy.Builder b =
+        aStudy("lr-" + seed)
+            .axis("L", sizes)
+            .real("level-ratio", "1")
+            .realisations(realisations)
+            .seed(seed)
+            .effectiveClass(SymmetryClass.AI);
     for (int k = 0; k < WINDOWS; k++) {
       b.real("level-ratio.w" + k, "1");
     }
@@ -113,7 +124,8 @@ final class MobilityStudies {
     return b.values((c, random) -> levelValues(c.get("L"), edge, random)).build();
   }
 
-  static Map<String, Double> levelValues(double size, double edge, java.util.random.RandomGenerator random) {
+  static Map<String, Double> levelValues(
+      double size, double edge, java.util.random.RandomGenerator random) {
     Map<String, Double> v = new HashMap<>();
     double sum = 0;
     int count = 0;
@@ -131,23 +143,30 @@ final class MobilityStudies {
     return v;
   }
 
-  /** bott@E0..E20 at Fermi energies −2..2, one size; plateau value 1, non-quantised values otherwise. */
+  /**
+   * bott@E0..E20 at Fermi energies −2..2, one size; plateau value 1, non-quantised values
+   * otherwise.
+   */
   static SyntheticStudy plateau(long seed, int realisations) {
-    SyntheticStudy.Builder b = aStudy("pl-" + seed).axis("L", 12).realisations(realisations).seed(seed);
+    SyntheticStudy.Builder b =
+        aStudy("pl-" + seed).axis("L", 12).realisations(realisations).seed(seed);
     for (int k = 0; k < FERMI_ENERGIES; k++) {
       b.integer("bott@E" + k);
     }
     for (int k = 0; k < FERMI_ENERGIES; k++) {
       b.real("bott@E" + k + ".energy", "energy");
     }
-    return b.values((c, random) -> {
-      Map<String, Double> v = new HashMap<>();
-      for (int k = 0; k < FERMI_ENERGIES; k++) {
-        double u = random.nextDouble();
-        v.put("bott@E" + k, u < quantisedProbability(FERMI[k]) ? 1.0 : u < 0.5 ? 0.0 : 0.55);
-        v.put("bott@E" + k + ".energy", FERMI[k]);
-      }
-      return v;
-    }).build();
+    return b.values(
+            (c, random) -> {
+              Map<String, Double> v = new HashMap<>();
+              for (int k = 0; k < FERMI_ENERGIES; k++) {
+                double u = random.nextDouble();
+                v.put(
+                    "bott@E" + k, u < quantisedProbability(FERMI[k]) ? 1.0 : u < 0.5 ? 0.0 : 0.55);
+                v.put("bott@E" + k + ".energy", FERMI[k]);
+              }
+              return v;
+            })
+        .build();
   }
 }

@@ -18,7 +18,8 @@ class SampleStatisticsOpsTest {
     assertThat(q.q95()).isCloseTo(3.85, within(1e-12));
     // Q(0.5) is the median (derived), for odd and even n.
     double[] sorted = {1, 2, 3, 4, 10};
-    assertThat(SampleStatisticsOps.quantileOfSorted(sorted, 0.5)).isEqualTo(SampleStatisticsOps.median(sorted));
+    assertThat(SampleStatisticsOps.quantileOfSorted(sorted, 0.5))
+        .isEqualTo(SampleStatisticsOps.median(sorted));
     assertThat(SampleStatisticsOps.quantileOfSorted(new double[] {1, 2, 3, 4}, 0.5)).isEqualTo(2.5);
   }
 
@@ -27,7 +28,8 @@ class SampleStatisticsOpsTest {
     // exp(mean(ln x)) of {1, 10, 100} is 10 (derived).
     TypicalValue t = SampleStatisticsOps.typical(new double[] {1, 10, 100});
     assertThat(t.geometricMean()).isCloseTo(10, within(1e-12));
-    assertThat(Math.log(t.ciHigh()) - Math.log(10)).isCloseTo(Math.log(10) - Math.log(t.ciLow()), within(1e-12));
+    assertThat(Math.log(t.ciHigh()) - Math.log(10))
+        .isCloseTo(Math.log(10) - Math.log(t.ciLow()), within(1e-12));
     assertThat(t.ciLow()).isLessThan(10);
     assertThat(SampleStatisticsOps.typical(new double[] {1, 0})).isNull();
     assertThat(SampleStatisticsOps.typical(new double[] {1, -2})).isNull();
@@ -35,7 +37,8 @@ class SampleStatisticsOpsTest {
 
   @Test
   void everyIntegerValueCarriesItsWilsonInterval() {
-    IntegerDistribution d = SampleStatisticsOps.integerDistribution(new double[] {0, 1, 1, 1, 0.98, 2});
+    IntegerDistribution d =
+        SampleStatisticsOps.integerDistribution(new double[] {0, 1, 1, 1, 0.98, 2});
     assertThat(d.probabilities()).extracting(ValueProbability::value).containsExactly(0L, 1L, 2L);
     assertThat(d.probabilities()).extracting(ValueProbability::count).containsExactly(1, 4, 1);
     ValueProbability one = d.probabilities().get(1);
@@ -44,6 +47,7 @@ class SampleStatisticsOpsTest {
     assertThat(one.wilsonLow()).isEqualTo(d.modalWilsonLow());
     assertThat(one.wilsonHigh()).isEqualTo(d.modalWilsonHigh());
     // Fractions are a normalised distribution (source-free check).
-    assertThat(d.probabilities().stream().mapToDouble(ValueProbability::fraction).sum()).isCloseTo(1, within(1e-15));
+    assertThat(d.probabilities().stream().mapToDouble(ValueProbability::fraction).sum())
+        .isCloseTo(1, within(1e-15));
   }
 }

@@ -1,9 +1,8 @@
 package hopstat.cli;
 
-import hopstat.expand.MemoryCheck;
-
 import hopstat.expand.GridExpander;
 import hopstat.expand.GridPoint;
+import hopstat.expand.MemoryCheck;
 import hopstat.expand.PlanValidation;
 import hopstat.expand.StudyPlan;
 import hopstat.linalg.Linalg;
@@ -30,14 +29,18 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 
 /**
- * {@code hopstat bench SPEC}: calibration before a long run. For each linear size of the spec, times
- * every requested observable on its own (one untimed warm-up, then {@code --realisations} timed
- * realisations of the first grid point with that L, one thread), prints seconds per realisation
- * per observable and in all, the memory per worker, and extrapolates the run's wall time for the
- * chosen thread count. Timing other grid points at the same L is not done: cost is assumed to
- * depend on L and the observables only.
+ * {@code hopstat bench SPEC}: calibration before a long run. For each linear size of the spec,
+ * times every requested observable on its own (one untimed warm-up, then {@code --realisations}
+ * timed realisations of the first grid point with that L, one thread), prints seconds per
+ * realisation per observable and in all, the memory per worker, and extrapolates the run's wall
+ * time for the chosen thread count. Timing other grid points at the same L is not done: cost is
+ * assumed to depend on L and the observables only.
  */
-@Command(mixinStandardHelpOptions = true, name = "bench", description = "Time each observable of a spec at each size, print seconds per realisation and memory per worker, and extrapolate the run's wall time.")
+@Command(
+    mixinStandardHelpOptions = true,
+    name = "bench",
+    description =
+        "Time each observable of a spec at each size, print seconds per realisation and memory per worker, and extrapolate the run's wall time.")
 final class BenchCommand implements Callable<Integer> {
 
   @ParentCommand HopstatCommand root;
@@ -45,17 +48,32 @@ final class BenchCommand implements Callable<Integer> {
   @Parameters(index = "0", paramLabel = "SPEC", description = "Job spec (JSON).")
   Path specFile;
 
-  @Option(names = "--threads", paramLabel = "N", description = "Threads the run will use (default: all cores).")
+  @Option(
+      names = "--threads",
+      paramLabel = "N",
+      description = "Threads the run will use (default: all cores).")
   Integer threads;
 
-  @Option(names = "--linalg", paramLabel = "KIND", defaultValue = LinalgChoice.DEFAULT, description = "Dense linear algebra: auto, native, java.")
+  @Option(
+      names = "--linalg",
+      paramLabel = "KIND",
+      defaultValue = LinalgChoice.DEFAULT,
+      description = "Dense linear algebra: auto, native, java.")
   String linalg;
 
-  @Option(names = "--realisations", paramLabel = "R", defaultValue = "2", description = "Timed realisations per size and observable (default 2).")
+  @Option(
+      names = "--realisations",
+      paramLabel = "R",
+      defaultValue = "2",
+      description = "Timed realisations per size and observable (default 2).")
   int timed;
 
-  @Option(names = "--scaling", paramLabel = "S", defaultValue = "1.0",
-      description = "Throughput of N threads relative to N x one thread, e.g. 0.95 (measure it with `hopstat run --threads 1` and `--threads N`; default 1.0).")
+  @Option(
+      names = "--scaling",
+      paramLabel = "S",
+      defaultValue = "1.0",
+      description =
+          "Throughput of N threads relative to N x one thread, e.g. 0.95 (measure it with `hopstat run --threads 1` and `--threads N`; default 1.0).")
   double scaling;
 
   @Override
@@ -81,7 +99,12 @@ final class BenchCommand implements Callable<Integer> {
       bySize.putIfAbsent(p.point().linearSize(), p);
       pointsBySize.merge(p.point().linearSize(), 1L, Long::sum);
     }
-    out.printf(Locale.ROOT, "bench       %s: %d timed realisation(s) per size and observable, one thread, %s%n", spec.name(), timed, la.describe());
+    out.printf(
+        Locale.ROOT,
+        "bench       %s: %d timed realisation(s) per size and observable, one thread, %s%n",
+        spec.name(),
+        timed,
+        la.describe());
     double totalSeconds = 0;
     for (Map.Entry<Integer, GridPoint> e : bySize.entrySet()) {
       GridPoint gp = e.getValue();
@@ -89,22 +112,46 @@ final class BenchCommand implements Callable<Integer> {
       RealisationCost cost = RealisationCost.of(point);
       double perRealisation = 0;
       for (String observable : point.observables()) {
-        PointSpec single = new PointSpec(point.model(), point.parameters(), point.linearSize(), point.boundary(), point.fermiEnergy(),
-            point.disorder(), List.of(observable));
+        PointSpec single =
+            new PointSpec(
+                point.model(),
+                point.parameters(),
+                point.linearSize(),
+                point.boundary(),
+                point.fermiEnergy(),
+                point.disorder(),
+                List.of(observable));
         double seconds = time(plan, gp, single, workspace);
         perRealisation += seconds;
-        out.printf(Locale.ROOT, "L = %-6d %-20s %10.4f s per realisation%s%n", e.getKey(), observable, seconds,
+        out.printf(
+            Locale.ROOT,
+            "L = %-6d %-20s %10.4f s per realisation%s%n",
+            e.getKey(),
+            observable,
+            seconds,
             Double.isNaN(seconds) ? " (FAILED realisations)" : "");
       }
       long realisations = pointsBySize.get(e.getKey()) * (long) plannedPerPoint(spec, plan);
       totalSeconds += perRealisation * realisations;
-      out.printf(Locale.ROOT, "L = %-6d %-20s %10.4f s per realisation; N = %d; memory per worker %s heap + %s native; %d realisation(s) planned%n",
-          e.getKey(), "(all observables)", perRealisation, cost.matrixDimension(), MemoryCheck.bytes(cost.heapBytes()),
-          MemoryCheck.bytes(cost.nativeBytes()), realisations);
+      out.printf(
+          Locale.ROOT,
+          "L = %-6d %-20s %10.4f s per realisation; N = %d; memory per worker %s heap + %s native; %d realisation(s) planned%n",
+          e.getKey(),
+          "(all observables)",
+          perRealisation,
+          cost.matrixDimension(),
+          MemoryCheck.bytes(cost.heapBytes()),
+          MemoryCheck.bytes(cost.nativeBytes()),
+          realisations);
     }
     double wall = totalSeconds / (n * scaling);
-    out.printf(Locale.ROOT, "estimate    %s wall time on %d thread(s) (one-thread time / (threads x scaling %.2f)); one-thread total %s%n",
-        CheckCommand.duration(wall), n, scaling, CheckCommand.duration(totalSeconds));
+    out.printf(
+        Locale.ROOT,
+        "estimate    %s wall time on %d thread(s) (one-thread time / (threads x scaling %.2f)); one-thread total %s%n",
+        CheckCommand.duration(wall),
+        n,
+        scaling,
+        CheckCommand.duration(totalSeconds));
     return ExitCode.OK;
   }
 
@@ -113,12 +160,15 @@ final class BenchCommand implements Callable<Integer> {
   }
 
   /** Mean wall seconds of {@code timed} realisations after one warm-up; NaN if any FAILED. */
-  private double time(StudyPlan plan, GridPoint gp, PointSpec single, RealisationWorkspace workspace) {
+  private double time(
+      StudyPlan plan, GridPoint gp, PointSpec single, RealisationWorkspace workspace) {
     double sum = 0;
     boolean failed = false;
     for (int r = 0; r <= timed; r++) {
       RealisationTask base = plan.task(gp.index(), r);
-      RealisationTask task = new RealisationTask(base.taskId(), base.pointIndex(), base.realisationIndex(), base.seed(), single);
+      RealisationTask task =
+          new RealisationTask(
+              base.taskId(), base.pointIndex(), base.realisationIndex(), base.seed(), single);
       RealisationResult result = RealisationRunner.run(task, workspace);
       failed |= result.outcome() != Outcome.DONE;
       if (r > 0) {

@@ -1,10 +1,9 @@
 package hopstat.cli;
 
-import hopstat.expand.MemoryCheck;
-
 import hopstat.expand.GridExpander;
-import hopstat.expand.PlanValidation;
 import hopstat.expand.GridPoint;
+import hopstat.expand.MemoryCheck;
+import hopstat.expand.PlanValidation;
 import hopstat.expand.StudyPlan;
 import hopstat.linalg.Linalg;
 import hopstat.linalg.LinalgFactory;
@@ -26,8 +25,15 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 
-/** {@code hopstat check SPEC}: validates a spec and prints the plan, memory and an estimated wall time. */
-@Command(mixinStandardHelpOptions = true, name = "check", description = "Validate a job spec and print the plan: grid, tasks, matrix sizes, memory per worker and estimated wall time.")
+/**
+ * {@code hopstat check SPEC}: validates a spec and prints the plan, memory and an estimated wall
+ * time.
+ */
+@Command(
+    mixinStandardHelpOptions = true,
+    name = "check",
+    description =
+        "Validate a job spec and print the plan: grid, tasks, matrix sizes, memory per worker and estimated wall time.")
 final class CheckCommand implements Callable<Integer> {
 
   /** Realisations timed per linear size (after one untimed warm-up). */
@@ -38,13 +44,22 @@ final class CheckCommand implements Callable<Integer> {
   @Parameters(index = "0", paramLabel = "SPEC", description = "Job spec (JSON).")
   Path specFile;
 
-  @Option(names = "--threads", paramLabel = "N", description = "Threads the run will use (default: all cores).")
+  @Option(
+      names = "--threads",
+      paramLabel = "N",
+      description = "Threads the run will use (default: all cores).")
   Integer threads;
 
-  @Option(names = "--linalg", paramLabel = "KIND", defaultValue = LinalgChoice.DEFAULT, description = "Dense linear algebra to time: auto, native, java.")
+  @Option(
+      names = "--linalg",
+      paramLabel = "KIND",
+      defaultValue = LinalgChoice.DEFAULT,
+      description = "Dense linear algebra to time: auto, native, java.")
   String linalg;
 
-  @Option(names = "--no-timing", description = "Skip timing real realisations (no wall-time estimate).")
+  @Option(
+      names = "--no-timing",
+      description = "Skip timing real realisations (no wall-time estimate).")
   boolean noTiming;
 
   @Override
@@ -55,17 +70,38 @@ final class CheckCommand implements Callable<Integer> {
     LinalgKind kind = LinalgChoice.resolve(linalg);
     PrintStream out = root.out;
     Model model = spec.resolveModel();
-    out.printf(Locale.ROOT, "spec        %s (sha256 %s)%n", spec.name(), spec.specHash().substring(0, 16));
-    out.printf(Locale.ROOT, "model       %s: class %s, d = %d; with this disorder: class %s%n", model.name(), model.symmetryClass(), model.dimension(), spec.effectiveClass());
+    out.printf(
+        Locale.ROOT, "spec        %s (sha256 %s)%n", spec.name(), spec.specHash().substring(0, 16));
+    out.printf(
+        Locale.ROOT,
+        "model       %s: class %s, d = %d; with this disorder: class %s%n",
+        model.name(),
+        model.symmetryClass(),
+        model.dimension(),
+        spec.effectiveClass());
     out.printf(Locale.ROOT, "boundary    %s%n", spec.boundary().specName());
     out.printf(Locale.ROOT, "observables %s%n", String.join(", ", spec.observables()));
-    out.printf(Locale.ROOT, "grid        %s = %d point(s)%n", plan.gridNames().isEmpty() ? "(single point)" : String.join(" x ", plan.gridNames()), plan.points().size());
+    out.printf(
+        Locale.ROOT,
+        "grid        %s = %d point(s)%n",
+        plan.gridNames().isEmpty() ? "(single point)" : String.join(" x ", plan.gridNames()),
+        plan.points().size());
     if (spec.adaptiveSampling().isPresent()) {
       var s = spec.sampling();
-      out.printf(Locale.ROOT, "sampling    adaptive: %d to %d realisations per point in batches of %d -> %d to %d tasks%n",
-          s.minimum(), s.maximum(), s.batch(), (long) s.minimum() * plan.points().size(), plan.plannedTasks());
+      out.printf(
+          Locale.ROOT,
+          "sampling    adaptive: %d to %d realisations per point in batches of %d -> %d to %d tasks%n",
+          s.minimum(),
+          s.maximum(),
+          s.batch(),
+          (long) s.minimum() * plan.points().size(),
+          plan.plannedTasks());
     } else {
-      out.printf(Locale.ROOT, "sampling    %d realisations per point -> %d tasks%n", spec.realisations(), plan.plannedTasks());
+      out.printf(
+          Locale.ROOT,
+          "sampling    %d realisations per point -> %d tasks%n",
+          spec.realisations(),
+          plan.plannedTasks());
     }
     Map<Integer, GridPoint> bySize = new TreeMap<>();
     Map<Integer, Long> pointsBySize = new TreeMap<>();
@@ -75,12 +111,21 @@ final class CheckCommand implements Callable<Integer> {
     }
     for (Map.Entry<Integer, GridPoint> e : bySize.entrySet()) {
       RealisationCost c = RealisationCost.of(e.getValue().point());
-      out.printf(Locale.ROOT, "L = %-8d matrix dimension N = %d; memory per worker %s heap + %s native%n",
-          e.getKey(), c.matrixDimension(), MemoryCheck.bytes(c.heapBytes()), MemoryCheck.bytes(c.nativeBytes()));
+      out.printf(
+          Locale.ROOT,
+          "L = %-8d matrix dimension N = %d; memory per worker %s heap + %s native%n",
+          e.getKey(),
+          c.matrixDimension(),
+          MemoryCheck.bytes(c.heapBytes()),
+          MemoryCheck.bytes(c.nativeBytes()));
     }
     MemoryCheck.require(plan, n);
     PlanValidation.validate(plan);
-    out.printf(Locale.ROOT, "memory      fits with %d thread(s) (JVM heap limit %s)%n", n, MemoryCheck.bytes(Runtime.getRuntime().maxMemory()));
+    out.printf(
+        Locale.ROOT,
+        "memory      fits with %d thread(s) (JVM heap limit %s)%n",
+        n,
+        MemoryCheck.bytes(Runtime.getRuntime().maxMemory()));
     if (!noTiming) {
       Linalg la = LinalgFactory.create(kind);
       RealisationWorkspace workspace = new RealisationWorkspace(la);
@@ -95,10 +140,20 @@ final class CheckCommand implements Callable<Integer> {
         }
         double perRealisation = sum / TIMED_REALISATIONS;
         totalSeconds += perRealisation * pointsBySize.get(e.getKey()) * spec.realisations();
-        out.printf(Locale.ROOT, "timing      L = %d: %.4f s per realisation (%s, one thread)%n", e.getKey(), perRealisation, la.describe());
+        out.printf(
+            Locale.ROOT,
+            "timing      L = %d: %.4f s per realisation (%s, one thread)%n",
+            e.getKey(),
+            perRealisation,
+            la.describe());
       }
-      out.printf(Locale.ROOT, "estimate    %s wall time for %s%d task(s) on %d thread(s) (assumes threads scale linearly)%n",
-          duration(totalSeconds / n), spec.adaptiveSampling().isPresent() ? "at most " : "", plan.plannedTasks(), n);
+      out.printf(
+          Locale.ROOT,
+          "estimate    %s wall time for %s%d task(s) on %d thread(s) (assumes threads scale linearly)%n",
+          duration(totalSeconds / n),
+          spec.adaptiveSampling().isPresent() ? "at most " : "",
+          plan.plannedTasks(),
+          n);
     }
     out.println("ok: spec is valid");
     return ExitCode.OK;

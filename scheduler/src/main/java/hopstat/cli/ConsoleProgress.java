@@ -32,16 +32,20 @@ final class ConsoleProgress implements ProgressListener {
 
   @Override
   public synchronized void started(long scheduled, long alreadyFinished) {
-    bar = new ProgressBarBuilder()
-        .setTaskName("realisations")
-        .setInitialMax(scheduled)
-        .startsFrom(alreadyFinished, Duration.ZERO)
-        .setStyle(ProgressBarStyle.ASCII)
-        .setUpdateIntervalMillis(interactive ? 500 : NON_INTERACTIVE_INTERVAL_MILLIS)
-        .showSpeed()
-        .setUnit(" real.", 1)
-        .setConsumer(interactive ? new ConsoleProgressBarConsumer(err) : new DelegatingProgressBarConsumer(err::println))
-        .build();
+    bar =
+        new ProgressBarBuilder()
+            .setTaskName("realisations")
+            .setInitialMax(scheduled)
+            .startsFrom(alreadyFinished, Duration.ZERO)
+            .setStyle(ProgressBarStyle.ASCII)
+            .setUpdateIntervalMillis(interactive ? 500 : NON_INTERACTIVE_INTERVAL_MILLIS)
+            .showSpeed()
+            .setUnit(" real.", 1)
+            .setConsumer(
+                interactive
+                    ? new ConsoleProgressBarConsumer(err)
+                    : new DelegatingProgressBarConsumer(err::println))
+            .build();
   }
 
   @Override

@@ -16,8 +16,8 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
 /**
- * The {@code hopstat} command line. The only code that calls {@link System#exit}; exit codes are
- * in {@link ExitCode}. Errors are one readable line on stderr; stack traces only with {@code
+ * The {@code hopstat} command line. The only code that calls {@link System#exit}; exit codes are in
+ * {@link ExitCode}. Errors are one readable line on stderr; stack traces only with {@code
  * --verbose}.
  */
 @Command(
@@ -25,19 +25,37 @@ import picocli.CommandLine.Option;
     mixinStandardHelpOptions = true,
     versionProvider = HopstatCommand.Version.class,
     description = "Disorder-ensemble statistics of topological invariants, gaps and localisation.",
-    subcommands = {CheckCommand.class, BenchCommand.class, RunCommand.class, ResumeCommand.class, StatusCommand.class, ReportCommand.class, ModelsCommand.class,
-        SubmitCommand.class, ShardCommand.class, ServeCommand.class},
+    subcommands = {
+      CheckCommand.class,
+      BenchCommand.class,
+      RunCommand.class,
+      ResumeCommand.class,
+      StatusCommand.class,
+      ReportCommand.class,
+      ModelsCommand.class,
+      SubmitCommand.class,
+      ShardCommand.class,
+      ServeCommand.class
+    },
     exitCodeListHeading = "%nExit codes:%n",
     exitCodeList = {
-        "0:done", "1:runtime failure (I/O, directory in use, corrupt journal, batch system refused)", "2:bad input (spec or options)",
-        "3:finished, but some realisations FAILED", "4:stopped before complete (resume continues it)"})
+      "0:done",
+      "1:runtime failure (I/O, directory in use, corrupt journal, batch system refused)",
+      "2:bad input (spec or options)",
+      "3:finished, but some realisations FAILED",
+      "4:stopped before complete (resume continues it)"
+    })
 public final class HopstatCommand implements Runnable {
 
-  @Option(names = "--verbose", scope = CommandLine.ScopeType.INHERIT, description = "Log progress details and show stack traces.")
+  @Option(
+      names = "--verbose",
+      scope = CommandLine.ScopeType.INHERIT,
+      description = "Log progress details and show stack traces.")
   boolean verbose;
 
   final PrintStream out;
   final PrintStream err;
+
   /** Runs the batch system's commands (sbatch, squeue, scontrol); tests pass a stand-in. */
   final CommandRunner clusterCommands;
 
@@ -49,7 +67,9 @@ public final class HopstatCommand implements Runnable {
 
   @Override
   public void run() {
-    throw new CommandLine.ParameterException(new CommandLine(this), "missing command: check, run, submit, resume, status, report or models");
+    throw new CommandLine.ParameterException(
+        new CommandLine(this),
+        "missing command: check, run, submit, resume, status, report or models");
   }
 
   public static void main(String[] args) {
@@ -68,24 +88,32 @@ public final class HopstatCommand implements Runnable {
 
   /**
    * Runs the command line with the given streams, running the batch system's commands through
-   * {@code clusterCommands} (for tests of the cluster commands without a cluster); returns the
-   * exit code.
+   * {@code clusterCommands} (for tests of the cluster commands without a cluster); returns the exit
+   * code.
    */
-  public static int execute(String[] args, PrintStream out, PrintStream err, CommandRunner clusterCommands) {
+  public static int execute(
+      String[] args, PrintStream out, PrintStream err, CommandRunner clusterCommands) {
     HopstatCommand root = new HopstatCommand(out, err, clusterCommands);
     CommandLine cl = new CommandLine(root);
     cl.setOut(new PrintWriter(out, true, StandardCharsets.UTF_8));
     cl.setErr(new PrintWriter(err, true, StandardCharsets.UTF_8));
     cl.setExitCodeExceptionMapper(HopstatCommand::exitCode);
-    cl.setExecutionExceptionHandler((e, commandLine, parseResult) -> {
-      report(e, root.verbose, err);
-      return exitCode(e);
-    });
-    cl.setParameterExceptionHandler((e, args2) -> {
-      err.println("hopstat: " + e.getMessage());
-      err.println("(see `hopstat " + (e.getCommandLine().getCommandName().equals("hopstat") ? "" : e.getCommandLine().getCommandName() + " ") + "--help`)");
-      return ExitCode.BAD_INPUT;
-    });
+    cl.setExecutionExceptionHandler(
+        (e, commandLine, parseResult) -> {
+          report(e, root.verbose, err);
+          return exitCode(e);
+        });
+    cl.setParameterExceptionHandler(
+        (e, args2) -> {
+          err.println("hopstat: " + e.getMessage());
+          err.println(
+              "(see `hopstat "
+                  + (e.getCommandLine().getCommandName().equals("hopstat")
+                      ? ""
+                      : e.getCommandLine().getCommandName() + " ")
+                  + "--help`)");
+          return ExitCode.BAD_INPUT;
+        });
     return cl.execute(args);
   }
 
@@ -98,11 +126,18 @@ public final class HopstatCommand implements Runnable {
 
   private static void report(Exception e, boolean verbose, PrintStream err) {
     if (e instanceof InvalidInputException bad) {
-      err.println("hopstat: invalid input (" + bad.violations().size() + " problem" + (bad.violations().size() == 1 ? "" : "s") + "):");
+      err.println(
+          "hopstat: invalid input ("
+              + bad.violations().size()
+              + " problem"
+              + (bad.violations().size() == 1 ? "" : "s")
+              + "):");
       for (InvalidInputException.Violation v : bad.violations()) {
         err.println("  " + v.describe());
       }
-    } else if (e instanceof RunDirectoryException || e instanceof JournalCorruptException || e instanceof ClusterException) {
+    } else if (e instanceof RunDirectoryException
+        || e instanceof JournalCorruptException
+        || e instanceof ClusterException) {
       err.println("hopstat: " + e.getMessage());
     } else if (e instanceof IOException) {
       err.println("hopstat: I/O error: " + e);

@@ -4,7 +4,9 @@ import hopstat.linalg.LinalgFactory;
 import hopstat.linalg.LinalgKind;
 import hopstat.task.InvalidInputException;
 
-/** The {@code --linalg} option: {@code auto} (native where it loads), {@code native}, {@code java}. */
+/**
+ * The {@code --linalg} option: {@code auto} (native where it loads), {@code native}, {@code java}.
+ */
 final class LinalgChoice {
 
   static final String DEFAULT = "auto";

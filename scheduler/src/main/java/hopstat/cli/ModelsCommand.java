@@ -16,8 +16,15 @@ import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.ParentCommand;
 
-/** {@code hopstat models}: the built-in models, their classes, parameters and applicable observables. */
-@Command(mixinStandardHelpOptions = true, name = "models", description = "List the built-in models (class, dimension, parameters, observables) and disorder types.")
+/**
+ * {@code hopstat models}: the built-in models, their classes, parameters and applicable
+ * observables.
+ */
+@Command(
+    mixinStandardHelpOptions = true,
+    name = "models",
+    description =
+        "List the built-in models (class, dimension, parameters, observables) and disorder types.")
 final class ModelsCommand implements Callable<Integer> {
 
   @ParentCommand HopstatCommand root;
@@ -26,9 +33,20 @@ final class ModelsCommand implements Callable<Integer> {
   public Integer call() {
     PrintStream out = root.out;
     for (Model m : ModelCatalog.all()) {
-      out.printf(Locale.ROOT, "%s  (class %s, d = %d)%n  %s%n  parameters:%n", m.name(), m.symmetryClass(), m.dimension(), m.description());
+      out.printf(
+          Locale.ROOT,
+          "%s  (class %s, d = %d)%n  %s%n  parameters:%n",
+          m.name(),
+          m.symmetryClass(),
+          m.dimension(),
+          m.description());
       for (ParameterInfo p : m.parameters()) {
-        out.printf(Locale.ROOT, "    %-12s %-10s %s%n", p.name(), p.isRequired() ? "required" : "= " + p.defaultValue(), p.description());
+        out.printf(
+            Locale.ROOT,
+            "    %-12s %-10s %s%n",
+            p.name(),
+            p.isRequired() ? "required" : "= " + p.defaultValue(),
+            p.description());
       }
       List<String> applicable = new ArrayList<>();
       for (Observable o : ObservableCatalog.all()) {
@@ -44,7 +62,10 @@ final class ModelsCommand implements Callable<Integer> {
       }
       out.printf(Locale.ROOT, "  observables: %s%n%n", String.join(", ", applicable));
     }
-    out.printf(Locale.ROOT, "%s  (user-defined, d = 1..3)%n  %s%n%n", hopstat.model.CustomModel.NAME,
+    out.printf(
+        Locale.ROOT,
+        "%s  (user-defined, d = 1..3)%n  %s%n%n",
+        hopstat.model.CustomModel.NAME,
         "the spec's \"lattice\" block: orbitals, onsite, hoppings, optional BdG pairings, the AZ class and its T/C/S operators;"
             + " amplitudes may name parameters, which join the spec's parameters");
     out.println("disorder types:");

@@ -10,8 +10,15 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 
-/** {@code hopstat report DIR}: regenerates every output (summaries, figures, HTML, HDF5) from the journal alone. */
-@Command(mixinStandardHelpOptions = true, name = "report", description = "Write summary.csv, summary.json, boundaries.csv, figures/, report.html and results.h5 of a run directory from its spec and journal.")
+/**
+ * {@code hopstat report DIR}: regenerates every output (summaries, figures, HTML, HDF5) from the
+ * journal alone.
+ */
+@Command(
+    mixinStandardHelpOptions = true,
+    name = "report",
+    description =
+        "Write summary.csv, summary.json, boundaries.csv, figures/, report.html and results.h5 of a run directory from its spec and journal.")
 final class ReportCommand implements Callable<Integer> {
 
   @ParentCommand HopstatCommand root;

@@ -1,8 +1,7 @@
 package hopstat.cli;
 
-import hopstat.expand.MemoryCheck;
-
 import hopstat.expand.GridExpander;
+import hopstat.expand.MemoryCheck;
 import hopstat.expand.PlanValidation;
 import hopstat.expand.StudyPlan;
 import hopstat.linalg.LinalgKind;
@@ -19,7 +18,11 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 
 /** {@code hopstat run SPEC --out DIR}: runs every realisation on the local worker pool. */
-@Command(mixinStandardHelpOptions = true, name = "run", description = "Run a job spec on this machine's worker pool, journaling every realisation, then write the summary.")
+@Command(
+    mixinStandardHelpOptions = true,
+    name = "run",
+    description =
+        "Run a job spec on this machine's worker pool, journaling every realisation, then write the summary.")
 final class RunCommand implements Callable<Integer> {
 
   @ParentCommand HopstatCommand root;
@@ -27,13 +30,24 @@ final class RunCommand implements Callable<Integer> {
   @Parameters(index = "0", paramLabel = "SPEC", description = "Job spec (JSON).")
   Path specFile;
 
-  @Option(names = "--out", required = true, paramLabel = "DIR", description = "New run directory (journal, summaries).")
+  @Option(
+      names = "--out",
+      required = true,
+      paramLabel = "DIR",
+      description = "New run directory (journal, summaries).")
   Path out;
 
-  @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
+  @Option(
+      names = "--threads",
+      paramLabel = "N",
+      description = "Worker threads (default: all cores).")
   Integer threads;
 
-  @Option(names = "--linalg", paramLabel = "KIND", defaultValue = LinalgChoice.DEFAULT, description = "Dense linear algebra: auto (native where it loads), native, java.")
+  @Option(
+      names = "--linalg",
+      paramLabel = "KIND",
+      defaultValue = LinalgChoice.DEFAULT,
+      description = "Dense linear algebra: auto (native where it loads), native, java.")
   String linalg;
 
   @Option(names = "--quiet", description = "No progress bar or summary lines.")
@@ -48,7 +62,8 @@ final class RunCommand implements Callable<Integer> {
     LinalgKind kind = LinalgChoice.resolve(linalg);
     MemoryCheck.require(plan, n);
     PlanValidation.validate(plan);
-    RunDirectory dir = RunDirectory.create(out, text, LocalSession.runMetadata(plan, n, kind, Instant.now()));
+    RunDirectory dir =
+        RunDirectory.create(out, text, LocalSession.runMetadata(plan, n, kind, Instant.now()));
     return RunSession.execute(root, dir, plan, n, kind, quiet);
   }
 

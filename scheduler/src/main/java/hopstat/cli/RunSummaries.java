@@ -55,8 +55,14 @@ final class RunSummaries {
     StudyLayout layout = LayoutOps.layout(plan);
     List<RealisationRecord> records = records(dir);
     Summary summary = SummaryOps.summarise(layout, records);
-    StudyReport report = new StudyReport(layout, summary, records, dir.specText(), axisLabels(plan.spec()),
-        Provenance.of(layout.specHash(), records, generated));
+    StudyReport report =
+        new StudyReport(
+            layout,
+            summary,
+            records,
+            dir.specText(),
+            axisLabels(plan.spec()),
+            Provenance.of(layout.specHash(), records, generated));
     return ReportFiles.writeAll(report, dir.path());
   }
 
@@ -70,7 +76,9 @@ final class RunSummaries {
     labels.put("fermiEnergy", "fermiEnergy E_F (units of t)");
     for (DisorderSpec d : spec.disorder()) {
       if (d.strengthParameter() != null) {
-        labels.put(d.strengthParameter(), d.strengthParameter() + " (" + d.type() + " strength, units of t)");
+        labels.put(
+            d.strengthParameter(),
+            d.strengthParameter() + " (" + d.type() + " strength, units of t)");
       }
     }
     return labels;

@@ -1,8 +1,7 @@
 package hopstat.cli;
 
-import hopstat.expand.MemoryCheck;
-
 import hopstat.cluster.ShardLock;
+import hopstat.expand.MemoryCheck;
 import hopstat.expand.StudyPlan;
 import hopstat.pool.LocalPoolBackend;
 import hopstat.pool.RunOptions;
@@ -36,24 +35,43 @@ import picocli.CommandLine.ParentCommand;
  * that it is failing on purpose and exits 1 before touching the journal. The cluster tests use it
  * to stand for a crashed shard; delete the file to let the shard run again.
  */
-@Command(mixinStandardHelpOptions = true, name = "shard", hidden = true, description = "Run one shard of a cluster run (called by the job array script).")
+@Command(
+    mixinStandardHelpOptions = true,
+    name = "shard",
+    hidden = true,
+    description = "Run one shard of a cluster run (called by the job array script).")
 final class ShardCommand implements Callable<Integer> {
 
   @ParentCommand HopstatCommand root;
 
-  @Parameters(index = "0", paramLabel = "DIR", description = "Run directory made by `hopstat submit`.")
+  @Parameters(
+      index = "0",
+      paramLabel = "DIR",
+      description = "Run directory made by `hopstat submit`.")
   Path dirPath;
 
-  @Option(names = "--index", required = true, paramLabel = "K", description = "Shard index, 0 <= K < N.")
+  @Option(
+      names = "--index",
+      required = true,
+      paramLabel = "K",
+      description = "Shard index, 0 <= K < N.")
   int index;
 
   @Option(names = "--count", required = true, paramLabel = "N", description = "Number of shards.")
   int count;
 
-  @Option(names = "--threads", paramLabel = "C", defaultValue = "1", description = "Worker threads.")
+  @Option(
+      names = "--threads",
+      paramLabel = "C",
+      defaultValue = "1",
+      description = "Worker threads.")
   int threads;
 
-  @Option(names = "--linalg", paramLabel = "KIND", defaultValue = LinalgChoice.DEFAULT, description = "Dense linear algebra: auto, native, java.")
+  @Option(
+      names = "--linalg",
+      paramLabel = "KIND",
+      defaultValue = LinalgChoice.DEFAULT,
+      description = "Dense linear algebra: auto, native, java.")
   String linalg;
 
   /** The file whose presence makes shard K fail on purpose (test hook). */
@@ -64,7 +82,8 @@ final class ShardCommand implements Callable<Integer> {
   @Override
   public Integer call() throws Exception {
     if (count < 1 || index < 0 || index >= count) {
-      throw new InvalidInputException("--index", index, "need 0 <= --index < --count (" + count + ")");
+      throw new InvalidInputException(
+          "--index", index, "need 0 <= --index < --count (" + count + ")");
     }
     int n = RunCommand.threads(threads);
     Shard shard = new Shard(index, count);
@@ -72,10 +91,19 @@ final class ShardCommand implements Callable<Integer> {
     StudyPlan plan = RunSummaries.plan(dir);
     String recorded = dir.runMetadata().path("specHash").asText();
     if (!recorded.equals(plan.spec().specHash())) {
-      throw new RunDirectoryException(dir.specFile() + " no longer matches the spec this run started with (hash " + recorded + ")");
+      throw new RunDirectoryException(
+          dir.specFile()
+              + " no longer matches the spec this run started with (hash "
+              + recorded
+              + ")");
     }
     if (Files.exists(faultFile(dir.path(), index))) {
-      root.err.println("hopstat: shard " + index + ": failing on purpose before any work (test hook: " + faultFile(dir.path(), index) + " exists)");
+      root.err.println(
+          "hopstat: shard "
+              + index
+              + ": failing on purpose before any work (test hook: "
+              + faultFile(dir.path(), index)
+              + " exists)");
       return ExitCode.RUNTIME_FAILURE;
     }
     MemoryCheck.require(plan, n);
@@ -84,21 +112,33 @@ final class ShardCommand implements Callable<Integer> {
       LocalPoolBackend backend = new LocalPoolBackend(Clock.systemUTC());
       // Slurm sends SIGTERM at the time limit and SIGKILL KillWait (default 30 s) later:
       // STOP_GRACE (20 s) lets in-flight realisations finish and the journal close before that.
-      Thread hook = new Thread(() -> {
-        backend.requestStop();
-        try {
-          if (!backend.awaitEnded(RunSession.STOP_GRACE)) {
-            backend.abandon();
-          }
-        } catch (InterruptedException e) {
-          Thread.currentThread().interrupt();
-        }
-      }, "hopstat-stop");
+      Thread hook =
+          new Thread(
+              () -> {
+                backend.requestStop();
+                try {
+                  if (!backend.awaitEnded(RunSession.STOP_GRACE)) {
+                    backend.abandon();
+                  }
+                } catch (InterruptedException e) {
+                  Thread.currentThread().interrupt();
+                }
+              },
+              "hopstat-stop");
       Runtime.getRuntime().addShutdownHook(hook);
       RunResult result;
       try {
-        result = backend.execute(plan, dir, new RunOptions(n, LinalgChoice.resolve(linalg), prefix, shard, JournalWriter.DEFAULT_SYNC_INTERVAL_NANOS),
-            new ConsoleProgress(root.err));
+        result =
+            backend.execute(
+                plan,
+                dir,
+                new RunOptions(
+                    n,
+                    LinalgChoice.resolve(linalg),
+                    prefix,
+                    shard,
+                    JournalWriter.DEFAULT_SYNC_INTERVAL_NANOS),
+                new ConsoleProgress(root.err));
       } finally {
         try {
           Runtime.getRuntime().removeShutdownHook(hook);
@@ -106,10 +146,22 @@ final class ShardCommand implements Callable<Integer> {
           // the JVM is already exiting: the hook is running and finishes the journal
         }
       }
-      root.out.printf(Locale.ROOT, "shard %d of %d: %d realisation(s) this session; %d journaled in this shard, %d failed; journal %s%n",
-          index, count, result.finishedThisSession(), result.finishedTotal(), result.failedTotal(), result.journalFile());
+      root.out.printf(
+          Locale.ROOT,
+          "shard %d of %d: %d realisation(s) this session; %d journaled in this shard, %d failed; journal %s%n",
+          index,
+          count,
+          result.finishedThisSession(),
+          result.finishedTotal(),
+          result.failedTotal(),
+          result.journalFile());
       if (result.stoppedEarly()) {
-        root.err.println("hopstat: shard " + index + " stopped before it was complete; `hopstat resume " + dir.path() + "` resubmits it");
+        root.err.println(
+            "hopstat: shard "
+                + index
+                + " stopped before it was complete; `hopstat resume "
+                + dir.path()
+                + "` resubmits it");
         return ExitCode.INCOMPLETE;
       }
       return ExitCode.OK;

@@ -18,7 +18,10 @@ final class SpecFiles {
     try {
       return Files.readString(file, StandardCharsets.UTF_8);
     } catch (IOException e) {
-      throw new InvalidInputException("SPEC", file.toString(), "cannot read the spec file (" + e.getClass().getSimpleName() + ")");
+      throw new InvalidInputException(
+          "SPEC",
+          file.toString(),
+          "cannot read the spec file (" + e.getClass().getSimpleName() + ")");
     }
   }
 

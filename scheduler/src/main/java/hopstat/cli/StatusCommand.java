@@ -33,7 +33,11 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 
 /** {@code hopstat status DIR}: progress and current estimates, readable while a run is going. */
-@Command(mixinStandardHelpOptions = true, name = "status", description = "Show a run's progress per grid point, failures, current mean ± stderr and an ETA; for a cluster run also each shard's progress and Slurm job state.")
+@Command(
+    mixinStandardHelpOptions = true,
+    name = "status",
+    description =
+        "Show a run's progress per grid point, failures, current mean ± stderr and an ETA; for a cluster run also each shard's progress and Slurm job state.")
 final class StatusCommand implements Callable<Integer> {
 
   private static final Pattern SINCE = Pattern.compile("since (\\S+)");
@@ -52,10 +56,21 @@ final class StatusCommand implements Callable<Integer> {
     long finished = s.done() + s.failed();
     long planned = plan.plannedTasks();
     ClusterRun cluster = ClusterRunStore.read(dir).orElse(null);
-    List<Integer> heldShards = cluster == null ? List.of() : ShardLock.held(dir.path(), cluster.shardCount());
-    String owner = heldShards.isEmpty() ? owner(dir.path()) : "cluster shard(s) " + heldShards + " are working on it";
-    out.printf(Locale.ROOT, "run %s: %d of %s%d realisations journaled (%d failed); %s%n", s.name(), finished,
-        plan.spec().adaptiveSampling().isPresent() ? "at most " : "", planned, s.failed(), owner == null ? "no process is working on it" : "in progress: " + owner);
+    List<Integer> heldShards =
+        cluster == null ? List.of() : ShardLock.held(dir.path(), cluster.shardCount());
+    String owner =
+        heldShards.isEmpty()
+            ? owner(dir.path())
+            : "cluster shard(s) " + heldShards + " are working on it";
+    out.printf(
+        Locale.ROOT,
+        "run %s: %d of %s%d realisations journaled (%d failed); %s%n",
+        s.name(),
+        finished,
+        plan.spec().adaptiveSampling().isPresent() ? "at most " : "",
+        planned,
+        s.failed(),
+        owner == null ? "no process is working on it" : "in progress: " + owner);
     if (owner != null && heldShards.isEmpty()) {
       eta(dir, owner, planned - finished).ifPresent(out::println);
     }
@@ -73,14 +88,22 @@ final class StatusCommand implements Callable<Integer> {
     for (PointSummary p : s.points()) {
       List<String> row = new ArrayList<>();
       for (String g : s.gridNames()) {
-        row.add(java.math.BigDecimal.valueOf(p.coordinates().get(g)).stripTrailingZeros().toPlainString());
+        row.add(
+            java.math.BigDecimal.valueOf(p.coordinates().get(g))
+                .stripTrailingZeros()
+                .toPlainString());
       }
       boolean open = plan.spec().adaptiveSampling().isPresent() && !planner.isStopped(p.index());
       row.add((p.done() + p.failed()) + "/" + planner.scheduled(p.index()) + (open ? "+" : ""));
       row.add(Integer.toString(p.failed()));
       for (String q : s.quantityNames()) {
-        QuantitySummary qs = p.quantities().stream().filter(x -> x.name().equals(q)).findFirst().orElse(null);
-        row.add(qs == null ? "-" : String.format(Locale.ROOT, "%.5g ± %.2g", qs.mean().mean(), qs.mean().standardError()));
+        QuantitySummary qs =
+            p.quantities().stream().filter(x -> x.name().equals(q)).findFirst().orElse(null);
+        row.add(
+            qs == null
+                ? "-"
+                : String.format(
+                    Locale.ROOT, "%.5g ± %.2g", qs.mean().mean(), qs.mean().standardError()));
       }
       out.println(String.join("  ", row));
       for (Map.Entry<String, Integer> e : p.failureReasons().entrySet()) {
@@ -88,9 +111,15 @@ final class StatusCommand implements Callable<Integer> {
       }
     }
     if (cluster != null) {
-      SlurmBackend backend = new SlurmBackend(new SlurmClient(root.clusterCommands), Clock.systemUTC());
+      SlurmBackend backend =
+          new SlurmBackend(new SlurmClient(root.clusterCommands), Clock.systemUTC());
       List<SlurmJobState> states = ClusterView.states(backend, cluster, out);
-      ClusterView.print(out, cluster, ShardProgressOps.progress(plan, dir, cluster.shardCount()), states, heldShards);
+      ClusterView.print(
+          out,
+          cluster,
+          ShardProgressOps.progress(plan, dir, cluster.shardCount()),
+          states,
+          heldShards);
     }
     return ExitCode.OK;
   }
@@ -101,7 +130,8 @@ final class StatusCommand implements Callable<Integer> {
     if (!Files.exists(lockFile)) {
       return null;
     }
-    try (var channel = java.nio.channels.FileChannel.open(lockFile, java.nio.file.StandardOpenOption.WRITE)) {
+    try (var channel =
+        java.nio.channels.FileChannel.open(lockFile, java.nio.file.StandardOpenOption.WRITE)) {
       var lock = channel.tryLock();
       if (lock != null) {
         lock.release();
@@ -114,7 +144,8 @@ final class StatusCommand implements Callable<Integer> {
   }
 
   /** ETA from the rate of the newest journal file since its writer's start. */
-  private static java.util.Optional<String> eta(RunDirectory dir, String owner, long remaining) throws IOException {
+  private static java.util.Optional<String> eta(RunDirectory dir, String owner, long remaining)
+      throws IOException {
     Matcher m = SINCE.matcher(owner);
     if (!m.find()) {
       return java.util.Optional.empty();
@@ -136,6 +167,11 @@ final class StatusCommand implements Callable<Integer> {
       return java.util.Optional.of("rate: not measurable yet");
     }
     double rate = lines / elapsed;
-    return java.util.Optional.of(String.format(Locale.ROOT, "rate %.2f realisations/s this session; ETA %s", rate, CheckCommand.duration(remaining / rate)));
+    return java.util.Optional.of(
+        String.format(
+            Locale.ROOT,
+            "rate %.2f realisations/s this session; ETA %s",
+            rate,
+            CheckCommand.duration(remaining / rate)));
   }
 }

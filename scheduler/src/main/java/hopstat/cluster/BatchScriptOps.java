@@ -29,9 +29,18 @@ public final class BatchScriptOps {
   public static void requireSafePath(Path dir) {
     String s = dir.toString();
     for (char c : s.toCharArray()) {
-      if (Character.isWhitespace(c) || c == '%' || c == '\'' || c == '"' || c == '\\' || c == '$' || c == '`') {
-        throw new InvalidInputException("--out", s, "a cluster run directory's path must not contain whitespace, quotes, %, $, ` or backslashes"
-            + " (Slurm reads it in #SBATCH lines and file-name patterns)");
+      if (Character.isWhitespace(c)
+          || c == '%'
+          || c == '\''
+          || c == '"'
+          || c == '\\'
+          || c == '$'
+          || c == '`') {
+        throw new InvalidInputException(
+            "--out",
+            s,
+            "a cluster run directory's path must not contain whitespace, quotes, %, $, ` or backslashes"
+                + " (Slurm reads it in #SBATCH lines and file-name patterns)");
       }
     }
   }
@@ -39,30 +48,57 @@ public final class BatchScriptOps {
   /** The job array script: element {@code $SLURM_ARRAY_TASK_ID} runs that shard. */
   public static String shardScript(String jobName, Path dir, ClusterRun run, int submission) {
     SlurmSubmitSpec o = run.options();
-    List<String> lines = header(jobName, "shards of " + dir + ", submission " + submission
-        + "; element k runs shard k of " + run.shardCount() + " (the grid points p with p mod " + run.shardCount() + " = k)");
+    List<String> lines =
+        header(
+            jobName,
+            "shards of "
+                + dir
+                + ", submission "
+                + submission
+                + "; element k runs shard k of "
+                + run.shardCount()
+                + " (the grid points p with p mod "
+                + run.shardCount()
+                + " = k)");
     lines.add("#SBATCH --output=" + dir.resolve(LOG_DIR) + "/shard-%4a-job%A.out");
     lines.add("#SBATCH --nodes=1");
     lines.add("#SBATCH --ntasks=1");
     lines.add("#SBATCH --cpus-per-task=" + o.cpusPerTask());
     resources(lines, o);
     lines.add("");
-    lines.add("exec " + shellCommand(run.launcher().command(run.jvmOptions(), List.of("shard", dir.toString())))
-        + " --index \"${SLURM_ARRAY_TASK_ID}\" --count " + run.shardCount() + " --threads " + o.cpusPerTask() + " --linalg " + run.linalg());
+    lines.add(
+        "exec "
+            + shellCommand(
+                run.launcher().command(run.jvmOptions(), List.of("shard", dir.toString())))
+            + " --index \"${SLURM_ARRAY_TASK_ID}\" --count "
+            + run.shardCount()
+            + " --threads "
+            + o.cpusPerTask()
+            + " --linalg "
+            + run.linalg());
     return String.join("\n", lines) + "\n";
   }
 
   /** The report script: rebuilds summary.csv/json from whatever the journal holds. */
   public static String reportScript(String jobName, Path dir, ClusterRun run, int submission) {
-    List<String> lines = header(jobName + "-report", "summary of " + dir + " after the shard array of submission " + submission
-        + " has ended (whatever its outcome, so that a gap shows in the summary)");
+    List<String> lines =
+        header(
+            jobName + "-report",
+            "summary of "
+                + dir
+                + " after the shard array of submission "
+                + submission
+                + " has ended (whatever its outcome, so that a gap shows in the summary)");
     lines.add("#SBATCH --output=" + dir.resolve(LOG_DIR) + "/report-job%j.out");
     lines.add("#SBATCH --nodes=1");
     lines.add("#SBATCH --ntasks=1");
     lines.add("#SBATCH --cpus-per-task=1");
     resources(lines, run.options());
     lines.add("");
-    lines.add("exec " + shellCommand(run.launcher().command(run.jvmOptions(), List.of("report", dir.toString()))));
+    lines.add(
+        "exec "
+            + shellCommand(
+                run.launcher().command(run.jvmOptions(), List.of("report", dir.toString()))));
     return String.join("\n", lines) + "\n";
   }
 

@@ -16,8 +16,10 @@ public final class ClusterRunStore {
   /** File name inside the run directory. */
   public static final String FILE = "cluster.json";
 
-  private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT)
-      .disable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES);
+  private static final ObjectMapper JSON =
+      new ObjectMapper()
+          .enable(SerializationFeature.INDENT_OUTPUT)
+          .disable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES);
 
   private ClusterRunStore() {}
 

@@ -4,8 +4,8 @@ import java.util.List;
 import java.util.Objects;
 
 /**
- * One hand-off of shards to Slurm: a job array over some shard indices and the report job that
- * runs after it.
+ * One hand-off of shards to Slurm: a job array over some shard indices and the report job that runs
+ * after it.
  *
  * @param number 1-based submission number within the run
  * @param submitted ISO-8601 UTC instant of submission
@@ -15,7 +15,14 @@ import java.util.Objects;
  * @param shardScript array script, relative to the run directory
  * @param reportScript report script, relative to the run directory
  */
-public record ClusterSubmission(int number, String submitted, List<Integer> shards, String arrayJobId, String reportJobId, String shardScript, String reportScript) {
+public record ClusterSubmission(
+    int number,
+    String submitted,
+    List<Integer> shards,
+    String arrayJobId,
+    String reportJobId,
+    String shardScript,
+    String reportScript) {
   public ClusterSubmission {
     Objects.requireNonNull(submitted, "submitted");
     Objects.requireNonNull(arrayJobId, "arrayJobId");

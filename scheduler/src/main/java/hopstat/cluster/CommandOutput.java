@@ -23,6 +23,7 @@ public record CommandOutput(int exitCode, String stdout, String stderr) {
   /** Standard error, else standard output, trimmed to one line per message: for error reports. */
   public String message() {
     String text = stderr.isBlank() ? stdout : stderr;
-    return String.join(" / ", text.strip().lines().map(String::strip).filter(s -> !s.isEmpty()).toList());
+    return String.join(
+        " / ", text.strip().lines().map(String::strip).filter(s -> !s.isEmpty()).toList());
   }
 }

@@ -4,9 +4,8 @@ import java.io.IOException;
 import java.util.List;
 
 /**
- * Runs one external command and waits for it. The batch system's commands go through this
- * interface so that tests can check the exact arguments and feed back recorded outputs without a
- * cluster.
+ * Runs one external command and waits for it. The batch system's commands go through this interface
+ * so that tests can check the exact arguments and feed back recorded outputs without a cluster.
  */
 public interface CommandRunner {
 

@@ -27,14 +27,16 @@ public record JavaLauncher(String javaBinary, List<String> launch) {
 
   /**
    * The launcher of the running JVM: its own java binary ({@code java.home}), and the jar this
-   * class was loaded from; when running from class folders (development, tests) the class path
-   * and {@code mainClass} instead.
+   * class was loaded from; when running from class folders (development, tests) the class path and
+   * {@code mainClass} instead.
    */
   public static JavaLauncher current(Class<?> mainClass) {
     Path javaBin = Path.of(System.getProperty("java.home"), "bin", "java").toAbsolutePath();
     Path source;
     try {
-      source = Path.of(mainClass.getProtectionDomain().getCodeSource().getLocation().toURI()).toAbsolutePath();
+      source =
+          Path.of(mainClass.getProtectionDomain().getCodeSource().getLocation().toURI())
+              .toAbsolutePath();
     } catch (URISyntaxException e) {
       throw new IllegalStateException("cannot locate the hopstat jar: " + e.getMessage(), e);
     }
@@ -45,10 +47,15 @@ public record JavaLauncher(String javaBinary, List<String> launch) {
     for (String entry : System.getProperty("java.class.path").split(java.io.File.pathSeparator)) {
       absolute.add(Path.of(entry).toAbsolutePath().toString());
     }
-    return new JavaLauncher(javaBin.toString(), List.of("-cp", String.join(java.io.File.pathSeparator, absolute), mainClass.getName()));
+    return new JavaLauncher(
+        javaBin.toString(),
+        List.of("-cp", String.join(java.io.File.pathSeparator, absolute), mainClass.getName()));
   }
 
-  /** The command line: java, then {@code jvmOptions}, then the launch arguments, then {@code hopstatArgs}. */
+  /**
+   * The command line: java, then {@code jvmOptions}, then the launch arguments, then {@code
+   * hopstatArgs}.
+   */
   public List<String> command(List<String> jvmOptions, List<String> hopstatArgs) {
     List<String> argv = new ArrayList<>();
     argv.add(javaBinary);

@@ -16,14 +16,32 @@ public enum JobPhase {
   TIMEOUT,
   /** Cancelled by a user or an administrator, or preempted. */
   CANCELLED,
-  /** Slurm no longer knows the job (aged out of its memory) or reports a state hopstat does not map. */
+  /**
+   * Slurm no longer knows the job (aged out of its memory) or reports a state hopstat does not map.
+   */
   UNKNOWN;
 
   /** Maps Slurm's state name ({@code JobState} in scontrol, {@code %T} in squeue). */
   public static JobPhase of(String slurmState) {
     return switch (slurmState.toUpperCase(Locale.ROOT)) {
-      case "PENDING", "REQUEUED", "REQUEUE_HOLD", "REQUEUE_FED", "RESV_DEL_HOLD", "SUSPENDED", "STOPPED", "RESIZING", "SPECIAL_EXIT" -> PENDING;
-      case "RUNNING", "CONFIGURING", "COMPLETING", "SIGNALING", "STAGE_OUT", "POWER_UP_NODE", "UPDATE_DB" -> RUNNING;
+      case "PENDING",
+          "REQUEUED",
+          "REQUEUE_HOLD",
+          "REQUEUE_FED",
+          "RESV_DEL_HOLD",
+          "SUSPENDED",
+          "STOPPED",
+          "RESIZING",
+          "SPECIAL_EXIT" ->
+          PENDING;
+      case "RUNNING",
+          "CONFIGURING",
+          "COMPLETING",
+          "SIGNALING",
+          "STAGE_OUT",
+          "POWER_UP_NODE",
+          "UPDATE_DB" ->
+          RUNNING;
       case "COMPLETED" -> COMPLETED;
       case "FAILED", "NODE_FAIL", "BOOT_FAIL", "OUT_OF_MEMORY", "DEADLINE" -> FAILED;
       case "TIMEOUT" -> TIMEOUT;
@@ -32,7 +50,10 @@ public enum JobPhase {
     };
   }
 
-  /** True while the job may still run or is running: resubmitting its shard now would duplicate work. */
+  /**
+   * True while the job may still run or is running: resubmitting its shard now would duplicate
+   * work.
+   */
   public boolean isActive() {
     return this == PENDING || this == RUNNING;
   }

@@ -17,8 +17,8 @@ import java.time.Instant;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Locale;
+import java.util.Map;
 
 /**
  * What a cluster shard holds while it works: an exclusive OS lock on {@code DIR/locks/shard-KKKK}
@@ -27,15 +27,15 @@ import java.util.Locale;
  * local {@code hopstat run/resume}, which takes {@code DIR/lock} exclusively, is refused until
  * every shard has ended. The OS drops both locks when the process dies, however it dies.
  *
- * <p>Across nodes this relies on the shared file system honouring POSIX (fcntl) locks, as NFSv4
- * and Lustre mounted with {@code flock} do.
+ * <p>Across nodes this relies on the shared file system honouring POSIX (fcntl) locks, as NFSv4 and
+ * Lustre mounted with {@code flock} do.
  */
 public final class ShardLock implements AutoCloseable {
 
   /**
-   * The JVM's shared holds on run-wide lock files, counted per file. Java refuses a second lock
-   * on a file region that the same JVM already locks (even a shared one), so shards running in
-   * one JVM (tests, or a future multi-shard worker) share one hold.
+   * The JVM's shared holds on run-wide lock files, counted per file. Java refuses a second lock on
+   * a file region that the same JVM already locks (even a shared one), so shards running in one JVM
+   * (tests, or a future multi-shard worker) share one hold.
    */
   private static final Map<Path, SharedHold> SHARED = new HashMap<>();
 
@@ -66,23 +66,39 @@ public final class ShardLock implements AutoCloseable {
   }
 
   /**
-   * @throws RunDirectoryException if a local session owns the directory or another process
-   *     works on the same shard
+   * @throws RunDirectoryException if a local session owns the directory or another process works on
+   *     the same shard
    */
   public static ShardLock acquire(Path dir, Shard shard) throws IOException {
     Path runFile = holdShared(dir, shard);
     Path file = file(dir, shard.index());
     Files.createDirectories(file.getParent());
-    FileChannel own = FileChannel.open(file, StandardOpenOption.CREATE, StandardOpenOption.READ, StandardOpenOption.WRITE);
+    FileChannel own =
+        FileChannel.open(
+            file, StandardOpenOption.CREATE, StandardOpenOption.READ, StandardOpenOption.WRITE);
     FileLock exclusive = tryLock(own, false);
     if (exclusive == null) {
       String owner = new String(Files.readAllBytes(file), StandardCharsets.UTF_8).trim();
       own.close();
       releaseShared(runFile);
-      throw new RunDirectoryException("shard " + shard.index() + " of " + dir + " is already being worked on (" + (owner.isEmpty() ? "owner unknown" : owner) + ")");
+      throw new RunDirectoryException(
+          "shard "
+              + shard.index()
+              + " of "
+              + dir
+              + " is already being worked on ("
+              + (owner.isEmpty() ? "owner unknown" : owner)
+              + ")");
     }
-    String me = "pid " + ProcessHandle.current().pid() + " on " + hostName() + " since " + Instant.ofEpochMilli(ManagementFactory.getRuntimeMXBean().getStartTime())
-        + slurmJob() + "\n";
+    String me =
+        "pid "
+            + ProcessHandle.current().pid()
+            + " on "
+            + hostName()
+            + " since "
+            + Instant.ofEpochMilli(ManagementFactory.getRuntimeMXBean().getStartTime())
+            + slurmJob()
+            + "\n";
     own.truncate(0);
     own.write(ByteBuffer.wrap(me.getBytes(StandardCharsets.UTF_8)), 0);
     own.force(false);
@@ -94,13 +110,23 @@ public final class ShardLock implements AutoCloseable {
     synchronized (SHARED) {
       SharedHold hold = SHARED.get(runFile);
       if (hold == null) {
-        FileChannel run = FileChannel.open(runFile, StandardOpenOption.CREATE, StandardOpenOption.READ, StandardOpenOption.WRITE);
+        FileChannel run =
+            FileChannel.open(
+                runFile,
+                StandardOpenOption.CREATE,
+                StandardOpenOption.READ,
+                StandardOpenOption.WRITE);
         FileLock shared = tryLock(run, true);
         if (shared == null) {
           String owner = new String(Files.readAllBytes(runFile), StandardCharsets.UTF_8).trim();
           run.close();
-          throw new RunDirectoryException(dir + " is in use by a local hopstat session (" + (owner.isEmpty() ? "owner unknown" : owner)
-              + "); shard " + shard.index() + " does not start while it runs");
+          throw new RunDirectoryException(
+              dir
+                  + " is in use by a local hopstat session ("
+                  + (owner.isEmpty() ? "owner unknown" : owner)
+                  + "); shard "
+                  + shard.index()
+                  + " does not start while it runs");
         }
         hold = new SharedHold(run, shared);
         SHARED.put(runFile, hold);
@@ -137,7 +163,8 @@ public final class ShardLock implements AutoCloseable {
       if (!Files.exists(file)) {
         continue;
       }
-      try (FileChannel c = FileChannel.open(file, StandardOpenOption.READ, StandardOpenOption.WRITE)) {
+      try (FileChannel c =
+          FileChannel.open(file, StandardOpenOption.READ, StandardOpenOption.WRITE)) {
         FileLock probe = tryLock(c, false);
         if (probe == null) {
           held.add(k);

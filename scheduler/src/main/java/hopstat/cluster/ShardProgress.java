@@ -10,4 +10,5 @@ package hopstat.cluster;
  * @param scheduled realisations the sampling rule asks for so far (final once complete)
  * @param complete true when the sampling rule asks for nothing more in this shard
  */
-public record ShardProgress(int shard, int points, long finished, long failed, long scheduled, boolean complete) {}
+public record ShardProgress(
+    int shard, int points, long finished, long failed, long scheduled, boolean complete) {}

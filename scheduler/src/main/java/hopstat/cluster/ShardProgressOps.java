@@ -23,12 +23,14 @@ public final class ShardProgressOps {
   private ShardProgressOps() {}
 
   /** Progress of every shard, in shard order. */
-  public static List<ShardProgress> progress(StudyPlan plan, RunDirectory dir, int shardCount) throws IOException {
+  public static List<ShardProgress> progress(StudyPlan plan, RunDirectory dir, int shardCount)
+      throws IOException {
     return progress(plan, JournalReader.read(dir.journalDir()).records().values(), shardCount);
   }
 
   /** Progress of every shard given the journaled records. */
-  public static List<ShardProgress> progress(StudyPlan plan, Collection<RealisationRecord> journaled, int shardCount) {
+  public static List<ShardProgress> progress(
+      StudyPlan plan, Collection<RealisationRecord> journaled, int shardCount) {
     SamplingPlanner planner = new SamplingPlanner(plan);
     List<RealisationTask> left = planner.start(journaled);
     List<ShardProgress> result = new ArrayList<>();

@@ -26,9 +26,9 @@ import org.slf4j.LoggerFactory;
  * Hands a study to Slurm: the shards that the journal says are unfinished become one job array
  * (array task id = shard index; each element runs the local pool on its shard and writes its own
  * journal file on the shared file system), followed by a report job with {@code
- * --dependency=afterany:ARRAY}, which rebuilds the summary once every element has ended, however
- * it ended, so that a failed shard shows as a gap instead of blocking the summary forever (as
- * {@code afterok} would).
+ * --dependency=afterany:ARRAY}, which rebuilds the summary once every element has ended, however it
+ * ended, so that a failed shard shows as a gap instead of blocking the summary forever (as {@code
+ * afterok} would).
  *
  * <p>The run's cluster settings live in {@code DIR/cluster.json} ({@link ClusterRunStore}); {@link
  * #prepare} writes it, {@link #execute} and {@link #submit} append a submission to it.
@@ -56,9 +56,18 @@ public final class SlurmBackend implements Backend {
    *
    * @param linalg the shards' {@code --linalg} choice (auto, native, java)
    */
-  public static ClusterRun prepare(StudyPlan plan, SlurmSubmitSpec options, JavaLauncher launcher, String linalg) {
+  public static ClusterRun prepare(
+      StudyPlan plan, SlurmSubmitSpec options, JavaLauncher launcher, String linalg) {
     int shards = Math.min(options.tasks(), plan.points().size());
-    return new ClusterRun(ClusterRun.FORMAT, "slurm", shards, linalg, launcher, jvmOptions(options), options, List.of());
+    return new ClusterRun(
+        ClusterRun.FORMAT,
+        "slurm",
+        shards,
+        linalg,
+        launcher,
+        jvmOptions(options),
+        options,
+        List.of());
   }
 
   /**
@@ -76,19 +85,26 @@ public final class SlurmBackend implements Backend {
   }
 
   /**
-   * Submits the shards of the run that the journal does not hold complete. The settings come
-   * from {@code DIR/cluster.json}; {@code options} and {@code listener} are not used (threads and
-   * linear algebra per shard were fixed when the run was prepared; progress happens elsewhere).
+   * Submits the shards of the run that the journal does not hold complete. The settings come from
+   * {@code DIR/cluster.json}; {@code options} and {@code listener} are not used (threads and linear
+   * algebra per shard were fixed when the run was prepared; progress happens elsewhere).
    *
-   * @return finishedThisSession 0; stoppedEarly true when shards were handed off (the study goes
-   *     on in Slurm), false when nothing was left
+   * @return finishedThisSession 0; stoppedEarly true when shards were handed off (the study goes on
+   *     in Slurm), false when nothing was left
    * @throws IllegalStateException if the run directory has no cluster.json
    */
   @Override
-  public RunResult execute(StudyPlan plan, RunDirectory dir, RunOptions options, ProgressListener listener) throws IOException, InterruptedException {
-    ClusterRun run = ClusterRunStore.read(dir).orElseThrow(() -> new IllegalStateException(dir.path() + " has no " + ClusterRunStore.FILE));
-    List<Integer> missing = ShardProgressOps.incomplete(ShardProgressOps.progress(plan, dir, run.shardCount()));
-    Collection<RealisationRecord> journaled = JournalReader.read(dir.journalDir()).records().values();
+  public RunResult execute(
+      StudyPlan plan, RunDirectory dir, RunOptions options, ProgressListener listener)
+      throws IOException, InterruptedException {
+    ClusterRun run =
+        ClusterRunStore.read(dir)
+            .orElseThrow(
+                () -> new IllegalStateException(dir.path() + " has no " + ClusterRunStore.FILE));
+    List<Integer> missing =
+        ShardProgressOps.incomplete(ShardProgressOps.progress(plan, dir, run.shardCount()));
+    Collection<RealisationRecord> journaled =
+        JournalReader.read(dir.journalDir()).records().values();
     long failed = journaled.stream().filter(r -> r.result().outcome() == Outcome.FAILED).count();
     if (missing.isEmpty()) {
       return new RunResult(0, journaled.size(), failed, false, dir.journalDir());
@@ -104,7 +120,9 @@ public final class SlurmBackend implements Backend {
    * @throws ClusterException with sbatch's message if sbatch refuses; when the array was accepted
    *     but the report job was not, the array is still recorded, and the message says so
    */
-  public ClusterSubmission submit(StudyPlan plan, RunDirectory dir, ClusterRun run, List<Integer> shards) throws IOException, InterruptedException {
+  public ClusterSubmission submit(
+      StudyPlan plan, RunDirectory dir, ClusterRun run, List<Integer> shards)
+      throws IOException, InterruptedException {
     List<Integer> sorted = shards.stream().sorted().distinct().toList();
     for (int k : sorted) {
       if (k < 0 || k >= run.shardCount()) {
@@ -123,17 +141,28 @@ public final class SlurmBackend implements Backend {
     writeScript(reportScript, BatchScriptOps.reportScript(jobName, abs, run, number));
 
     String arrayId = slurm.submit(shardScript, arrayOptions(run, sorted));
-    LOG.info("submitted shard array {} (shards {}) for {}", arrayId, SlurmClient.indexList(sorted), abs);
+    LOG.info(
+        "submitted shard array {} (shards {}) for {}", arrayId, SlurmClient.indexList(sorted), abs);
     String reportId;
     try {
       reportId = slurm.submit(reportScript, reportOptions(run, arrayId));
     } catch (ClusterException e) {
-      ClusterSubmission partial = new ClusterSubmission(number, clock.instant().toString(), sorted, arrayId, null, shardName, reportName);
+      ClusterSubmission partial =
+          new ClusterSubmission(
+              number, clock.instant().toString(), sorted, arrayId, null, shardName, reportName);
       ClusterRunStore.write(dir, run.with(partial));
-      throw new ClusterException("shard array " + arrayId + " was submitted, but the report job was not: " + e.getMessage()
-          + "; when the array has ended run `hopstat report " + abs + "`");
+      throw new ClusterException(
+          "shard array "
+              + arrayId
+              + " was submitted, but the report job was not: "
+              + e.getMessage()
+              + "; when the array has ended run `hopstat report "
+              + abs
+              + "`");
     }
-    ClusterSubmission submission = new ClusterSubmission(number, clock.instant().toString(), sorted, arrayId, reportId, shardName, reportName);
+    ClusterSubmission submission =
+        new ClusterSubmission(
+            number, clock.instant().toString(), sorted, arrayId, reportId, shardName, reportName);
     ClusterRunStore.write(dir, run.with(submission));
     return submission;
   }
@@ -155,8 +184,8 @@ public final class SlurmBackend implements Backend {
   }
 
   /**
-   * Slurm's view of every job of the run's submissions (array elements and report jobs); jobs
-   * that Slurm has forgotten are absent.
+   * Slurm's view of every job of the run's submissions (array elements and report jobs); jobs that
+   * Slurm has forgotten are absent.
    */
   public List<SlurmJobState> states(ClusterRun run) throws IOException, InterruptedException {
     Set<String> ids = new java.util.LinkedHashSet<>();

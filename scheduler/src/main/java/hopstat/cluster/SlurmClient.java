@@ -20,7 +20,9 @@ public final class SlurmClient {
 
   private static final Pattern JOB_ID = Pattern.compile("(\\d+)(;.*)?");
   private static final Pattern SQUEUE_ID = Pattern.compile("(\\d+)(?:_(\\d+))?");
-  private static final Pattern FIELD = Pattern.compile("(?:^|\\s)(JobId|ArrayJobId|ArrayTaskId|JobState|Reason|ExitCode|StartTime|EndTime)=(\\S*)");
+  private static final Pattern FIELD =
+      Pattern.compile(
+          "(?:^|\\s)(JobId|ArrayJobId|ArrayTaskId|JobState|Reason|ExitCode|StartTime|EndTime)=(\\S*)");
 
   private final CommandRunner runner;
 
@@ -37,7 +39,8 @@ public final class SlurmClient {
     List<String> argv = submitCommand(script, options);
     CommandOutput out = runner.run(argv);
     if (!out.isSuccess()) {
-      throw new ClusterException("sbatch refused the job (exit " + out.exitCode() + "): " + out.message());
+      throw new ClusterException(
+          "sbatch refused the job (exit " + out.exitCode() + "): " + out.message());
     }
     Matcher m = JOB_ID.matcher(out.stdout().strip());
     if (!m.matches()) {
@@ -61,11 +64,23 @@ public final class SlurmClient {
    * with exit codes and times from {@code scontrol -o show job}. Jobs that Slurm no longer
    * remembers (older than its MinJobAge) are simply absent.
    */
-  public List<SlurmJobState> states(Collection<String> jobIds) throws IOException, InterruptedException {
+  public List<SlurmJobState> states(Collection<String> jobIds)
+      throws IOException, InterruptedException {
     if (jobIds.isEmpty()) {
       return List.of();
     }
-    CommandOutput q = runner.run(List.of("squeue", "-h", "-t", "all", "-r", "-j", String.join(",", jobIds), "-o", "%i %T %r"));
+    CommandOutput q =
+        runner.run(
+            List.of(
+                "squeue",
+                "-h",
+                "-t",
+                "all",
+                "-r",
+                "-j",
+                String.join(",", jobIds),
+                "-o",
+                "%i %T %r"));
     if (!q.isSuccess()) {
       if (q.message().contains("Invalid job id")) {
         return List.of();
@@ -80,14 +95,24 @@ public final class SlurmClient {
           details.put(d.displayId(), d);
         }
       } else if (!s.message().contains("Invalid job id")) {
-        throw new ClusterException("scontrol show job " + id + " failed (exit " + s.exitCode() + "): " + s.message());
+        throw new ClusterException(
+            "scontrol show job " + id + " failed (exit " + s.exitCode() + "): " + s.message());
       }
     }
     List<SlurmJobState> result = new ArrayList<>();
     for (SlurmJobState fromQueue : parseSqueue(q.stdout())) {
       SlurmJobState d = details.get(fromQueue.displayId());
-      result.add(d == null ? fromQueue
-          : new SlurmJobState(fromQueue.jobId(), fromQueue.arrayIndex(), fromQueue.slurmState(), fromQueue.reason(), d.exitCode(), d.startTime(), d.endTime()));
+      result.add(
+          d == null
+              ? fromQueue
+              : new SlurmJobState(
+                  fromQueue.jobId(),
+                  fromQueue.arrayIndex(),
+                  fromQueue.slurmState(),
+                  fromQueue.reason(),
+                  d.exitCode(),
+                  d.startTime(),
+                  d.endTime()));
     }
     return result;
   }
@@ -102,7 +127,9 @@ public final class SlurmClient {
         throw new ClusterException("unexpected squeue output line: " + line);
       }
       int index = m.group(2) == null ? -1 : Integer.parseInt(m.group(2));
-      states.add(new SlurmJobState(m.group(1), index, parts[1], parts.length > 2 ? parts[2] : "", "", null, null));
+      states.add(
+          new SlurmJobState(
+              m.group(1), index, parts[1], parts.length > 2 ? parts[2] : "", "", null, null));
     }
     return states;
   }
@@ -127,11 +154,27 @@ public final class SlurmClient {
       String arrayJob = f.get("ArrayJobId");
       String tasks = f.get("ArrayTaskId");
       if (arrayJob == null || tasks == null) {
-        states.add(new SlurmJobState(f.get("JobId"), -1, f.get("JobState"), f.get("Reason"), f.get("ExitCode"), f.get("StartTime"), f.get("EndTime")));
+        states.add(
+            new SlurmJobState(
+                f.get("JobId"),
+                -1,
+                f.get("JobState"),
+                f.get("Reason"),
+                f.get("ExitCode"),
+                f.get("StartTime"),
+                f.get("EndTime")));
         continue;
       }
       for (int index : expandIndices(tasks)) {
-        states.add(new SlurmJobState(arrayJob, index, f.get("JobState"), f.get("Reason"), f.get("ExitCode"), f.get("StartTime"), f.get("EndTime")));
+        states.add(
+            new SlurmJobState(
+                arrayJob,
+                index,
+                f.get("JobState"),
+                f.get("Reason"),
+                f.get("ExitCode"),
+                f.get("StartTime"),
+                f.get("EndTime")));
       }
     }
     return states;

@@ -13,7 +13,14 @@ import java.util.Objects;
  * @param startTime start time as Slurm prints it (local time, no zone), or {@code Unknown}
  * @param endTime end time as Slurm prints it, or {@code Unknown}
  */
-public record SlurmJobState(String jobId, int arrayIndex, String slurmState, String reason, String exitCode, String startTime, String endTime) {
+public record SlurmJobState(
+    String jobId,
+    int arrayIndex,
+    String slurmState,
+    String reason,
+    String exitCode,
+    String startTime,
+    String endTime) {
   public SlurmJobState {
     Objects.requireNonNull(jobId, "jobId");
     Objects.requireNonNull(slurmState, "slurmState");

@@ -29,16 +29,27 @@ public final class SystemCommandRunner implements CommandRunner {
   public CommandOutput run(List<String> argv) throws IOException, InterruptedException {
     Process process;
     try {
-      process = new ProcessBuilder(argv).redirectInput(ProcessBuilder.Redirect.from(new java.io.File("/dev/null"))).start();
+      process =
+          new ProcessBuilder(argv)
+              .redirectInput(ProcessBuilder.Redirect.from(new java.io.File("/dev/null")))
+              .start();
     } catch (IOException e) {
-      throw new ClusterException("cannot run `" + argv.get(0) + "` (" + e.getMessage() + "); is this a Slurm login node with the Slurm commands on PATH?");
+      throw new ClusterException(
+          "cannot run `"
+              + argv.get(0)
+              + "` ("
+              + e.getMessage()
+              + "); is this a Slurm login node with the Slurm commands on PATH?");
     }
     // Both streams are drained concurrently so a chatty command cannot block on a full pipe.
-    CompletableFuture<String> out = CompletableFuture.supplyAsync(() -> drain(process.getInputStream()));
-    CompletableFuture<String> err = CompletableFuture.supplyAsync(() -> drain(process.getErrorStream()));
+    CompletableFuture<String> out =
+        CompletableFuture.supplyAsync(() -> drain(process.getInputStream()));
+    CompletableFuture<String> err =
+        CompletableFuture.supplyAsync(() -> drain(process.getErrorStream()));
     if (!process.waitFor(timeout.toMillis(), TimeUnit.MILLISECONDS)) {
       process.destroyForcibly();
-      throw new ClusterException("`" + String.join(" ", argv) + "` did not answer within " + timeout.toSeconds() + " s");
+      throw new ClusterException(
+          "`" + String.join(" ", argv) + "` did not answer within " + timeout.toSeconds() + " s");
     }
     try {
       return new CommandOutput(process.exitValue(), out.get(), err.get());

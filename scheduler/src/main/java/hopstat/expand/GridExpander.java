@@ -36,7 +36,8 @@ public final class GridExpander {
     for (ParameterSpec p : params) {
       count *= p.values().size();
       if (count > MAX_POINTS) {
-        throw new hopstat.task.InvalidInputException("parameters", null, "the grid has more than " + MAX_POINTS + " points");
+        throw new hopstat.task.InvalidInputException(
+            "parameters", null, "the grid has more than " + MAX_POINTS + " points");
       }
     }
     int[] odometer = new int[params.size()];
@@ -66,11 +67,19 @@ public final class GridExpander {
   private static PointSpec pointSpec(JobSpec spec, Map<String, Double> values) {
     List<DisorderTerm> disorder = new ArrayList<>();
     for (DisorderSpec d : spec.disorder()) {
-      double w = d.strengthParameter() == null ? d.strengthValue() : values.get(d.strengthParameter());
+      double w =
+          d.strengthParameter() == null ? d.strengthValue() : values.get(d.strengthParameter());
       disorder.add(new DisorderTerm(d.type(), w, d.options()));
     }
     int size = (int) Math.round(values.get(SpecParser.SIZE));
-    return new PointSpec(spec.model(), new ParameterValues(values), size, spec.boundary(),
-        values.get(SpecParser.FERMI_ENERGY), disorder, spec.observables(), spec.customModel());
+    return new PointSpec(
+        spec.model(),
+        new ParameterValues(values),
+        size,
+        spec.boundary(),
+        values.get(SpecParser.FERMI_ENERGY),
+        disorder,
+        spec.observables(),
+        spec.customModel());
   }
 }

@@ -20,6 +20,13 @@ public final class LayoutOps {
     for (String name : plan.spec().observables()) {
       quantities.addAll(ObservableCatalog.find(name).orElseThrow().quantities());
     }
-    return new StudyLayout(plan.spec().name(), plan.spec().specHash(), plan.gridNames(), points, quantities, plan.spec().realisations(), plan.spec().effectiveClass());
+    return new StudyLayout(
+        plan.spec().name(),
+        plan.spec().specHash(),
+        plan.gridNames(),
+        points,
+        quantities,
+        plan.spec().realisations(),
+        plan.spec().effectiveClass());
   }
 }

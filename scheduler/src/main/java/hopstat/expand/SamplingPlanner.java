@@ -71,7 +71,9 @@ public final class SamplingPlanner {
     return tasks;
   }
 
-  /** Notes a finished record; returns the tasks of the point's next batch if the rule asks for one. */
+  /**
+   * Notes a finished record; returns the tasks of the point's next batch if the rule asks for one.
+   */
   public List<RealisationTask> onFinished(RealisationRecord record) {
     note(record);
     int p = record.result().pointIndex();
@@ -130,21 +132,27 @@ public final class SamplingPlanner {
 
   private boolean targetsMet(int p, int upTo) {
     for (SamplingSpec.Target t : sampling.targets()) {
-      double[] x = records.get(p).stream()
-          .filter(r -> r.result().realisationIndex() < upTo && r.result().outcome() == Outcome.DONE && r.result().values().containsKey(t.quantity()))
-          .sorted(java.util.Comparator.comparingInt(r -> r.result().realisationIndex()))
-          .mapToDouble(r -> r.result().values().get(t.quantity()))
-          .toArray();
-      double measured = switch (t.kind()) {
-        case STDERR -> {
-          MeanEstimate m = SampleStatisticsOps.mean(x);
-          yield m.standardError();
-        }
-        case MODAL_FRACTION_HALF_WIDTH -> {
-          var d = SampleStatisticsOps.integerDistribution(x);
-          yield 0.5 * (d.modalWilsonHigh() - d.modalWilsonLow());
-        }
-      };
+      double[] x =
+          records.get(p).stream()
+              .filter(
+                  r ->
+                      r.result().realisationIndex() < upTo
+                          && r.result().outcome() == Outcome.DONE
+                          && r.result().values().containsKey(t.quantity()))
+              .sorted(java.util.Comparator.comparingInt(r -> r.result().realisationIndex()))
+              .mapToDouble(r -> r.result().values().get(t.quantity()))
+              .toArray();
+      double measured =
+          switch (t.kind()) {
+            case STDERR -> {
+              MeanEstimate m = SampleStatisticsOps.mean(x);
+              yield m.standardError();
+            }
+            case MODAL_FRACTION_HALF_WIDTH -> {
+              var d = SampleStatisticsOps.integerDistribution(x);
+              yield 0.5 * (d.modalWilsonHigh() - d.modalWilsonLow());
+            }
+          };
       if (!(measured <= t.threshold())) {
         return false;
       }

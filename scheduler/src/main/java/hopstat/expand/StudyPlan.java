@@ -24,8 +24,12 @@ public record StudyPlan(JobSpec spec, List<String> gridNames, List<GridPoint> po
   /** The task for realisation {@code realisation} at point {@code pointIndex}. */
   public RealisationTask task(int pointIndex, int realisation) {
     GridPoint p = points.get(pointIndex);
-    return new RealisationTask(RealisationTask.idOf(pointIndex, realisation), pointIndex, realisation,
-        SeedOps.realisationSeed(spec.seed(), pointIndex, realisation), p.point());
+    return new RealisationTask(
+        RealisationTask.idOf(pointIndex, realisation),
+        pointIndex,
+        realisation,
+        SeedOps.realisationSeed(spec.seed(), pointIndex, realisation),
+        p.point());
   }
 
   /**

@@ -41,8 +41,8 @@ import org.slf4j.MDC;
 
 /**
  * Runs a study on this machine: N worker threads, each with its own pooled {@link
- * RealisationWorkspace}, claiming tasks from a journal-backed store. Parallelism comes from
- * running realisations side by side (the native BLAS runs one thread per worker).
+ * RealisationWorkspace}, claiming tasks from a journal-backed store. Parallelism comes from running
+ * realisations side by side (the native BLAS runs one thread per worker).
  *
  * <p>The journal decides what is left to do, so a fresh run and a resumed one are the same code:
  * tasks already journaled are skipped, and adaptive sampling replays its rule over them.
@@ -51,8 +51,10 @@ public final class LocalPoolBackend implements Backend {
 
   /** How often workers' claims are heartbeated. */
   public static final Duration HEARTBEAT = Duration.ofSeconds(5);
+
   /** A RUNNING task without heartbeat for this long is returned to the queue. */
   public static final Duration STALE_AFTER = Duration.ofMinutes(10);
+
   /** Claims of one task before the sweeper gives it up as FAILED. */
   public static final int MAX_ATTEMPTS = 3;
 
@@ -74,7 +76,9 @@ public final class LocalPoolBackend implements Backend {
     return "local";
   }
 
-  /** Asks the run to stop: workers finish their current realisation and exit. Safe from any thread. */
+  /**
+   * Asks the run to stop: workers finish their current realisation and exit. Safe from any thread.
+   */
   public void requestStop() {
     stopRequested = true;
     synchronized (lock) {
@@ -88,8 +92,8 @@ public final class LocalPoolBackend implements Backend {
   }
 
   /**
-   * Forces this session's journal to disk and closes it; for a shutdown hook whose grace period
-   * ran out. Realisations still running are abandoned (a resume runs them again).
+   * Forces this session's journal to disk and closes it; for a shutdown hook whose grace period ran
+   * out. Realisations still running are abandoned (a resume runs them again).
    */
   public void abandon() {
     JournalTaskStore store = activeStore;
@@ -103,7 +107,9 @@ public final class LocalPoolBackend implements Backend {
   }
 
   @Override
-  public RunResult execute(StudyPlan plan, RunDirectory dir, RunOptions options, ProgressListener listener) throws IOException, InterruptedException {
+  public RunResult execute(
+      StudyPlan plan, RunDirectory dir, RunOptions options, ProgressListener listener)
+      throws IOException, InterruptedException {
     try {
       return run(plan, dir, options, listener);
     } finally {
@@ -111,7 +117,9 @@ public final class LocalPoolBackend implements Backend {
     }
   }
 
-  private RunResult run(StudyPlan plan, RunDirectory dir, RunOptions options, ProgressListener listener) throws IOException, InterruptedException {
+  private RunResult run(
+      StudyPlan plan, RunDirectory dir, RunOptions options, ProgressListener listener)
+      throws IOException, InterruptedException {
     Linalg linalg = LinalgFactory.create(options.linalg());
     String toolVersion = BuildInfo.toolVersion();
     String linalgName = linalg.describe();
@@ -133,23 +141,55 @@ public final class LocalPoolBackend implements Backend {
         initial.add(t);
       }
     }
-    JournalWriter writer = new JournalWriter(dir.newJournalFile(options.journalPrefix()), options.syncIntervalNanos());
-    JournalTaskStore store = new JournalTaskStore(clock, (task, reason) -> record(plan, failedResult(task, reason), toolVersion, linalgName), journaled, writer);
+    JournalWriter writer =
+        new JournalWriter(dir.newJournalFile(options.journalPrefix()), options.syncIntervalNanos());
+    JournalTaskStore store =
+        new JournalTaskStore(
+            clock,
+            (task, reason) -> record(plan, failedResult(task, reason), toolVersion, linalgName),
+            journaled,
+            writer);
     activeStore = store;
     store.add(initial);
     long already = journaled.size();
     listener.started(scheduledInShard(plan, planner, options.shard()), already);
-    LOG.info("run {}: {} realisations to do, {} journaled earlier, {} thread(s), {}", plan.spec().name(), initial.size(), already, options.threads(), linalgName);
+    LOG.info(
+        "run {}: {} realisations to do, {} journaled earlier, {} thread(s), {}",
+        plan.spec().name(),
+        initial.size(),
+        already,
+        options.threads(),
+        linalgName);
 
     GenericObjectPool<RealisationWorkspace> workspaces = workspacePool(linalg, options.threads());
-    ScheduledExecutorService heartbeats = Executors.newSingleThreadScheduledExecutor(r -> daemon(r, "hopstat-heartbeat"));
+    ScheduledExecutorService heartbeats =
+        Executors.newSingleThreadScheduledExecutor(r -> daemon(r, "hopstat-heartbeat"));
     Map<String, Claim> active = new java.util.concurrent.ConcurrentHashMap<>();
-    heartbeats.scheduleAtFixedRate(() -> beat(store, active), HEARTBEAT.toMillis(), HEARTBEAT.toMillis(), TimeUnit.MILLISECONDS);
+    heartbeats.scheduleAtFixedRate(
+        () -> beat(store, active),
+        HEARTBEAT.toMillis(),
+        HEARTBEAT.toMillis(),
+        TimeUnit.MILLISECONDS);
     List<Thread> threads = new ArrayList<>();
     long[] finishedHere = new long[1];
     for (int i = 0; i < options.threads(); i++) {
       String workerId = "w" + i;
-      Thread t = new Thread(() -> work(workerId, plan, store, planner, options.shard(), workspaces, active, listener, toolVersion, linalgName, finishedHere), "hopstat-" + workerId);
+      Thread t =
+          new Thread(
+              () ->
+                  work(
+                      workerId,
+                      plan,
+                      store,
+                      planner,
+                      options.shard(),
+                      workspaces,
+                      active,
+                      listener,
+                      toolVersion,
+                      linalgName,
+                      finishedHere),
+              "hopstat-" + workerId);
       t.setDaemon(true);
       threads.add(t);
       t.start();
@@ -166,14 +206,29 @@ public final class LocalPoolBackend implements Backend {
       listener.ended();
     }
     Map<TaskState, Integer> counts = store.counts();
-    long failed = store.finished().stream().filter(r -> r.result().outcome() == Outcome.FAILED).count();
+    long failed =
+        store.finished().stream().filter(r -> r.result().outcome() == Outcome.FAILED).count();
     boolean complete = counts.get(TaskState.PENDING) == 0 && counts.get(TaskState.RUNNING) == 0;
-    return new RunResult(finishedHere[0], store.finished().size(), failed, stopRequested || !complete, writer.file());
+    return new RunResult(
+        finishedHere[0],
+        store.finished().size(),
+        failed,
+        stopRequested || !complete,
+        writer.file());
   }
 
-  private void work(String workerId, StudyPlan plan, JournalTaskStore store, SamplingPlanner planner, Shard shard,
-      GenericObjectPool<RealisationWorkspace> workspaces, Map<String, Claim> active, ProgressListener listener,
-      String toolVersion, String linalgName, long[] finishedHere) {
+  private void work(
+      String workerId,
+      StudyPlan plan,
+      JournalTaskStore store,
+      SamplingPlanner planner,
+      Shard shard,
+      GenericObjectPool<RealisationWorkspace> workspaces,
+      Map<String, Claim> active,
+      ProgressListener listener,
+      String toolVersion,
+      String linalgName,
+      long[] finishedHere) {
     RealisationWorkspace workspace;
     try {
       workspace = workspaces.borrowObject();
@@ -238,7 +293,8 @@ public final class LocalPoolBackend implements Backend {
       }
     } catch (InterruptedException e) {
       Thread.currentThread().interrupt();
-    } catch (Exception e) { // a journal write failed: stop this worker loudly, keep what is journaled
+    } catch (
+        Exception e) { // a journal write failed: stop this worker loudly, keep what is journaled
       LOG.error("worker {} stopped: {}", workerId, e.toString());
       requestStop();
     } finally {
@@ -262,13 +318,23 @@ public final class LocalPoolBackend implements Backend {
     }
   }
 
-  static RealisationRecord record(StudyPlan plan, RealisationResult result, String toolVersion, String linalg) {
+  static RealisationRecord record(
+      StudyPlan plan, RealisationResult result, String toolVersion, String linalg) {
     GridPoint p = plan.points().get(result.pointIndex());
-    return new RealisationRecord(result, p.coordinates(), p.point().parameters().values(), toolVersion, linalg);
+    return new RealisationRecord(
+        result, p.coordinates(), p.point().parameters().values(), toolVersion, linalg);
   }
 
   static RealisationResult failedResult(RealisationTask task, String reason) {
-    return new RealisationResult(task.taskId(), task.pointIndex(), task.realisationIndex(), task.seed(), Outcome.FAILED, Map.of(), reason, 0.0);
+    return new RealisationResult(
+        task.taskId(),
+        task.pointIndex(),
+        task.realisationIndex(),
+        task.seed(),
+        Outcome.FAILED,
+        Map.of(),
+        reason,
+        0.0);
   }
 
   private static GenericObjectPool<RealisationWorkspace> workspacePool(Linalg linalg, int threads) {
@@ -276,17 +342,19 @@ public final class LocalPoolBackend implements Backend {
     config.setMaxTotal(threads);
     config.setMaxIdle(threads);
     config.setJmxEnabled(false);
-    return new GenericObjectPool<>(new BasePooledObjectFactory<>() {
-      @Override
-      public RealisationWorkspace create() {
-        return new RealisationWorkspace(linalg);
-      }
+    return new GenericObjectPool<>(
+        new BasePooledObjectFactory<>() {
+          @Override
+          public RealisationWorkspace create() {
+            return new RealisationWorkspace(linalg);
+          }
 
-      @Override
-      public PooledObject<RealisationWorkspace> wrap(RealisationWorkspace w) {
-        return new DefaultPooledObject<>(w);
-      }
-    }, config);
+          @Override
+          public PooledObject<RealisationWorkspace> wrap(RealisationWorkspace w) {
+            return new DefaultPooledObject<>(w);
+          }
+        },
+        config);
   }
 
   private static Thread daemon(Runnable r, String name) {

@@ -17,8 +17,8 @@ import java.util.Map;
 
 /**
  * One local session over a run directory: take its lock, run on the local pool what the journal
- * lacks, write the summaries. The same code serves {@code hopstat run}, {@code hopstat resume}
- * and the batch service, so a run started by any of them finishes with the same files.
+ * lacks, write the summaries. The same code serves {@code hopstat run}, {@code hopstat resume} and
+ * the batch service, so a run started by any of them finishes with the same files.
  */
 public final class LocalSession {
 
@@ -29,7 +29,8 @@ public final class LocalSession {
    *
    * @param created when the run directory is created (from the caller's clock)
    */
-  public static Map<String, Object> runMetadata(StudyPlan plan, int threads, LinalgKind linalg, Instant created) {
+  public static Map<String, Object> runMetadata(
+      StudyPlan plan, int threads, LinalgKind linalg, Instant created) {
     return runMetadata(plan, threads, LinalgFactory.create(linalg).describe(), created);
   }
 
@@ -39,7 +40,8 @@ public final class LocalSession {
    *
    * @param linalgDescription {@link hopstat.linalg.Linalg#describe()} of the backend the run uses
    */
-  public static Map<String, Object> runMetadata(StudyPlan plan, int threads, String linalgDescription, Instant created) {
+  public static Map<String, Object> runMetadata(
+      StudyPlan plan, int threads, String linalgDescription, Instant created) {
     Map<String, Object> metadata = new LinkedHashMap<>();
     metadata.put("name", plan.spec().name());
     metadata.put("specHash", plan.spec().specHash());
@@ -53,12 +55,17 @@ public final class LocalSession {
   }
 
   /**
-   * Runs a session: locks {@code dir}, executes on {@code backend} (which the caller may stop
-   * with {@link LocalPoolBackend#requestStop()}), writes summary.csv/json from the whole journal.
+   * Runs a session: locks {@code dir}, executes on {@code backend} (which the caller may stop with
+   * {@link LocalPoolBackend#requestStop()}), writes summary.csv/json from the whole journal.
    *
    * @throws hopstat.queue.RunDirectoryException if another process holds the run directory
    */
-  public static SessionResult execute(RunDirectory dir, StudyPlan plan, LocalPoolBackend backend, RunOptions options, ProgressListener listener)
+  public static SessionResult execute(
+      RunDirectory dir,
+      StudyPlan plan,
+      LocalPoolBackend backend,
+      RunOptions options,
+      ProgressListener listener)
       throws IOException, InterruptedException {
     try (RunLock lock = RunLock.acquire(dir.path())) {
       RunResult result = backend.execute(plan, dir, options, listener);

@@ -5,10 +5,15 @@ import hopstat.record.RealisationRecord;
 /** Receives run progress; called from worker threads, implementations must be thread-safe. */
 public interface ProgressListener {
 
-  /** The run starts: {@code scheduled} tasks in view, {@code alreadyFinished} of them journaled earlier. */
+  /**
+   * The run starts: {@code scheduled} tasks in view, {@code alreadyFinished} of them journaled
+   * earlier.
+   */
   default void started(long scheduled, long alreadyFinished) {}
 
-  /** The number of scheduled tasks changed (adaptive sampling added a batch, or stopped a point). */
+  /**
+   * The number of scheduled tasks changed (adaptive sampling added a batch, or stopped a point).
+   */
   default void rescheduled(long scheduled) {}
 
   /** One realisation finished and was journaled. */

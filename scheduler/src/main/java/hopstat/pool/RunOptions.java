@@ -8,11 +8,13 @@ import java.util.Objects;
  *
  * @param threads worker threads, ≥ 1
  * @param linalg dense linear-algebra backend
- * @param journalPrefix prefix of this session's journal file, e.g. {@code part} or {@code shard-0003}
+ * @param journalPrefix prefix of this session's journal file, e.g. {@code part} or {@code
+ *     shard-0003}
  * @param shard which tasks this process runs
  * @param syncIntervalNanos journal fsync interval
  */
-public record RunOptions(int threads, LinalgKind linalg, String journalPrefix, Shard shard, long syncIntervalNanos) {
+public record RunOptions(
+    int threads, LinalgKind linalg, String journalPrefix, Shard shard, long syncIntervalNanos) {
   public RunOptions {
     Objects.requireNonNull(linalg, "linalg");
     Objects.requireNonNull(journalPrefix, "journalPrefix");

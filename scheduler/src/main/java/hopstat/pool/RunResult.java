@@ -9,4 +9,9 @@ package hopstat.pool;
  * @param stoppedEarly true when the session was asked to stop before the study was complete
  * @param journalFile this session's journal file
  */
-public record RunResult(long finishedThisSession, long finishedTotal, long failedTotal, boolean stoppedEarly, java.nio.file.Path journalFile) {}
+public record RunResult(
+    long finishedThisSession,
+    long finishedTotal,
+    long failedTotal,
+    boolean stoppedEarly,
+    java.nio.file.Path journalFile) {}

@@ -38,7 +38,10 @@ public final class RunSummaryOps {
     return SummaryOps.summarise(LayoutOps.layout(plan), records);
   }
 
-  /** Writes every summary format ({@link ReportFormats#writeAll}) into the run directory, each via temp + rename. */
+  /**
+   * Writes every summary format ({@link ReportFormats#writeAll}) into the run directory, each via
+   * temp + rename.
+   */
   public static List<Path> write(RunDirectory dir, StudyPlan plan) throws IOException {
     return ReportFormats.writeAll(summarise(dir, plan), dir.path());
   }

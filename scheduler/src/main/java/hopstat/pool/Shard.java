@@ -1,8 +1,8 @@
 package hopstat.pool;
 
 /**
- * A slice of a study's tasks for one of several processes (cluster array elements). Shards split
- * by grid point ({@code pointIndex mod count == index}), so adaptive sampling, which decides per
+ * A slice of a study's tasks for one of several processes (cluster array elements). Shards split by
+ * grid point ({@code pointIndex mod count == index}), so adaptive sampling, which decides per
  * point, stays inside one shard and needs no coordination.
  *
  * @param index 0-based shard index

@@ -50,7 +50,10 @@ public class InMemoryTaskStore implements TaskStore {
    * @param preloaded records finished in earlier sessions, by task id: such tasks enter as
    *     DONE/FAILED when added
    */
-  public InMemoryTaskStore(Clock clock, BiFunction<RealisationTask, String, RealisationRecord> failureRecords, Map<String, RealisationRecord> preloaded) {
+  public InMemoryTaskStore(
+      Clock clock,
+      BiFunction<RealisationTask, String, RealisationRecord> failureRecords,
+      Map<String, RealisationRecord> preloaded) {
     this.clock = clock;
     this.failureRecords = failureRecords;
     this.preloaded = new LinkedHashMap<>(preloaded);
@@ -114,11 +117,15 @@ public class InMemoryTaskStore implements TaskStore {
       return false;
     }
     if (!record.result().taskId().equals(e.task.taskId())) {
-      throw new IllegalArgumentException("record " + record.result().taskId() + " completes claim " + e.task.taskId());
+      throw new IllegalArgumentException(
+          "record " + record.result().taskId() + " completes claim " + e.task.taskId());
     }
     persist(record);
     e.record = record;
-    move(e, record.result().outcome() == Outcome.DONE ? TaskState.DONE : TaskState.FAILED, clock.instant());
+    move(
+        e,
+        record.result().outcome() == Outcome.DONE ? TaskState.DONE : TaskState.FAILED,
+        clock.instant());
     return true;
   }
 
@@ -131,7 +138,10 @@ public class InMemoryTaskStore implements TaskStore {
       }
       swept++;
       if (e.attempts >= maxAttempts) {
-        RealisationRecord failed = failureRecords.apply(e.task, "worker lost " + e.attempts + " time(s): heartbeat older than " + staleBefore);
+        RealisationRecord failed =
+            failureRecords.apply(
+                e.task,
+                "worker lost " + e.attempts + " time(s): heartbeat older than " + staleBefore);
         persist(failed);
         e.record = failed;
         move(e, TaskState.FAILED, clock.instant());
@@ -146,7 +156,9 @@ public class InMemoryTaskStore implements TaskStore {
   @Override
   public synchronized Optional<TaskView> view(String taskId) {
     Entry e = entries.get(taskId);
-    return e == null ? Optional.empty() : Optional.of(new TaskView(taskId, e.state, e.version, e.attempts, e.history));
+    return e == null
+        ? Optional.empty()
+        : Optional.of(new TaskView(taskId, e.state, e.version, e.attempts, e.history));
   }
 
   @Override
@@ -172,7 +184,9 @@ public class InMemoryTaskStore implements TaskStore {
     return out;
   }
 
-  /** Records finished in earlier sessions that no added task claimed (e.g. beyond an adaptive stop). */
+  /**
+   * Records finished in earlier sessions that no added task claimed (e.g. beyond an adaptive stop).
+   */
   public synchronized List<RealisationRecord> preloadedNotAdded() {
     List<RealisationRecord> out = new ArrayList<>();
     for (Map.Entry<String, RealisationRecord> e : preloaded.entrySet()) {

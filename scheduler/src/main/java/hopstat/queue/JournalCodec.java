@@ -86,7 +86,8 @@ public final class JournalCodec {
     String body = line.substring(0, at) + "}";
     String stored = line.substring(at + CRC_MEMBER.length(), line.length() - 2);
     if (!crcHex(body).equals(stored)) {
-      throw new IllegalArgumentException("checksum mismatch (stored " + stored + ", computed " + crcHex(body) + ")");
+      throw new IllegalArgumentException(
+          "checksum mismatch (stored " + stored + ", computed " + crcHex(body) + ")");
     }
     JsonNode n;
     try {
@@ -96,16 +97,30 @@ public final class JournalCodec {
     }
     int format = n.path("format").asInt(-1);
     if (format != FORMAT) {
-      throw new IllegalArgumentException("unsupported record format " + n.path("format") + " (this version reads " + FORMAT + ")");
+      throw new IllegalArgumentException(
+          "unsupported record format " + n.path("format") + " (this version reads " + FORMAT + ")");
     }
     Outcome outcome = Outcome.valueOf(n.get("status").asText());
-    RealisationResult result = new RealisationResult(n.get("task").asText(), n.get("point").asInt(), n.get("realisation").asInt(),
-        n.get("seed").asLong(), outcome, readMap(n.get("values")), n.get("failure").isNull() ? null : n.get("failure").asText(),
-        n.get("wallSeconds").asDouble());
-    return new RealisationRecord(result, readMap(n.get("grid")), readMap(n.get("parameters")), n.get("tool").asText(), n.get("linalg").asText());
+    RealisationResult result =
+        new RealisationResult(
+            n.get("task").asText(),
+            n.get("point").asInt(),
+            n.get("realisation").asInt(),
+            n.get("seed").asLong(),
+            outcome,
+            readMap(n.get("values")),
+            n.get("failure").isNull() ? null : n.get("failure").asText(),
+            n.get("wallSeconds").asDouble());
+    return new RealisationRecord(
+        result,
+        readMap(n.get("grid")),
+        readMap(n.get("parameters")),
+        n.get("tool").asText(),
+        n.get("linalg").asText());
   }
 
-  private static void writeMap(JsonGenerator g, String field, Map<String, Double> map) throws IOException {
+  private static void writeMap(JsonGenerator g, String field, Map<String, Double> map)
+      throws IOException {
     g.writeObjectFieldStart(field);
     for (Map.Entry<String, Double> e : map.entrySet()) {
       g.writeNumberField(e.getKey(), e.getValue());

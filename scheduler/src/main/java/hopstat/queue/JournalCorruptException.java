@@ -9,8 +9,14 @@ public final class JournalCorruptException extends RuntimeException {
   private final int line;
 
   public JournalCorruptException(Path file, int line, String reason) {
-    super("corrupt journal record at " + file + " line " + line + ": " + reason
-        + " (move the file aside or delete that line to continue; every other record is kept)");
+    super(
+        "corrupt journal record at "
+            + file
+            + " line "
+            + line
+            + ": "
+            + reason
+            + " (move the file aside or delete that line to continue; every other record is kept)");
     this.file = file;
     this.line = line;
   }

@@ -32,7 +32,8 @@ public final class JournalReader {
    * @param tornLines "file: bytes" of dropped torn tails
    * @param duplicates records that repeated a task id
    */
-  public record Contents(Map<String, RealisationRecord> records, List<String> tornLines, int duplicates) {}
+  public record Contents(
+      Map<String, RealisationRecord> records, List<String> tornLines, int duplicates) {}
 
   public static Contents read(Path journalDir) throws IOException {
     Map<String, RealisationRecord> records = new LinkedHashMap<>();
@@ -53,7 +54,12 @@ public final class JournalReader {
         int end = text.indexOf('\n', start);
         lineNo++;
         if (end < 0) {
-          torn.add(file.getFileName() + ": " + (text.length() - start) + " bytes after line " + (lineNo - 1));
+          torn.add(
+              file.getFileName()
+                  + ": "
+                  + (text.length() - start)
+                  + " bytes after line "
+                  + (lineNo - 1));
           break;
         }
         String line = text.substring(start, end);
@@ -72,7 +78,8 @@ public final class JournalReader {
           records.put(r.result().taskId(), r);
         } else {
           duplicates++;
-          if (previous.result().outcome() == Outcome.FAILED && r.result().outcome() == Outcome.DONE) {
+          if (previous.result().outcome() == Outcome.FAILED
+              && r.result().outcome() == Outcome.DONE) {
             records.put(r.result().taskId(), r);
           }
         }

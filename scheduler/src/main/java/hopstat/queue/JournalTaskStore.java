@@ -23,8 +23,11 @@ public final class JournalTaskStore extends InMemoryTaskStore {
    * @param journaled records from earlier sessions ({@link JournalReader})
    * @param writer this session's journal file
    */
-  public JournalTaskStore(Clock clock, BiFunction<RealisationTask, String, RealisationRecord> failureRecords,
-      Map<String, RealisationRecord> journaled, JournalWriter writer) {
+  public JournalTaskStore(
+      Clock clock,
+      BiFunction<RealisationTask, String, RealisationRecord> failureRecords,
+      Map<String, RealisationRecord> journaled,
+      JournalWriter writer) {
     super(clock, failureRecords, journaled);
     this.writer = writer;
   }

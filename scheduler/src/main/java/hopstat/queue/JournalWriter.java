@@ -12,8 +12,8 @@ import java.nio.file.StandardOpenOption;
  * Appends records to one journal file that this writer alone owns (created new; never reopened).
  *
  * <p>Durability policy: every record is handed to the kernel with one {@code write} of the whole
- * line, so a killed process (SIGKILL, OOM kill) loses nothing written; the file is fsync'ed when
- * at least {@code syncIntervalNanos} passed since the last sync, and on close, which bounds what a
+ * line, so a killed process (SIGKILL, OOM kill) loses nothing written; the file is fsync'ed when at
+ * least {@code syncIntervalNanos} passed since the last sync, and on close, which bounds what a
  * power cut can take to the last interval. A crash can at worst leave one torn final line, which
  * the reader drops.
  */
@@ -34,7 +34,12 @@ public final class JournalWriter implements AutoCloseable {
    */
   public JournalWriter(Path file, long syncIntervalNanos) throws IOException {
     this.file = file;
-    this.channel = FileChannel.open(file, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE, StandardOpenOption.APPEND);
+    this.channel =
+        FileChannel.open(
+            file,
+            StandardOpenOption.CREATE_NEW,
+            StandardOpenOption.WRITE,
+            StandardOpenOption.APPEND);
     this.syncIntervalNanos = syncIntervalNanos;
   }
 

@@ -30,8 +30,13 @@ public final class RunDirectory {
   /** Layout version written to run.json. */
   public static final int FORMAT = 1;
 
-  private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
-  /** The last group of digits in a journal file name: the session number of {@code prefix-NNNN.jsonl}, whatever the prefix holds. */
+  private static final ObjectMapper JSON =
+      new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+  /**
+   * The last group of digits in a journal file name: the session number of {@code
+   * prefix-NNNN.jsonl}, whatever the prefix holds.
+   */
   private static final Pattern PART = Pattern.compile("(?:.*\\D)?(\\d+)\\D*\\.jsonl");
 
   private final Path dir;
@@ -58,9 +63,14 @@ public final class RunDirectory {
    * @param metadata run.json members (spec hash, versions, provenance)
    * @throws RunDirectoryException if DIR already holds a run
    */
-  public static RunDirectory create(Path dir, String specText, Map<String, Object> metadata) throws IOException {
+  public static RunDirectory create(Path dir, String specText, Map<String, Object> metadata)
+      throws IOException {
     if (Files.exists(dir.resolve("spec.json")) || Files.exists(dir.resolve("journal"))) {
-      throw new RunDirectoryException(dir + " already holds a run; continue it with `hopstat resume " + dir + "` or choose another --out");
+      throw new RunDirectoryException(
+          dir
+              + " already holds a run; continue it with `hopstat resume "
+              + dir
+              + "` or choose another --out");
     }
     if (Files.exists(dir) && !Files.isDirectory(dir)) {
       throw new RunDirectoryException(dir + " exists and is not a directory");
@@ -80,13 +90,20 @@ public final class RunDirectory {
    * @throws RunDirectoryException if it is not a run directory of a format this version reads
    */
   public static RunDirectory open(Path dir) throws IOException {
-    if (!Files.isRegularFile(dir.resolve("spec.json")) || !Files.isRegularFile(dir.resolve("run.json"))) {
-      throw new RunDirectoryException(dir + " is not a hopstat run directory (no spec.json/run.json)");
+    if (!Files.isRegularFile(dir.resolve("spec.json"))
+        || !Files.isRegularFile(dir.resolve("run.json"))) {
+      throw new RunDirectoryException(
+          dir + " is not a hopstat run directory (no spec.json/run.json)");
     }
     JsonNode run = JSON.readTree(dir.resolve("run.json").toFile());
     int format = run.path("format").asInt(-1);
     if (format != FORMAT) {
-      throw new RunDirectoryException(dir + "/run.json has layout format " + run.path("format") + "; this hopstat reads format " + FORMAT);
+      throw new RunDirectoryException(
+          dir
+              + "/run.json has layout format "
+              + run.path("format")
+              + "; this hopstat reads format "
+              + FORMAT);
     }
     Files.createDirectories(dir.resolve("journal"));
     return new RunDirectory(dir);

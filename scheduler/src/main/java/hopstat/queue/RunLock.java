@@ -33,7 +33,9 @@ public final class RunLock implements AutoCloseable {
    */
   public static RunLock acquire(Path dir) throws IOException {
     Path file = dir.resolve("lock");
-    FileChannel channel = FileChannel.open(file, StandardOpenOption.CREATE, StandardOpenOption.READ, StandardOpenOption.WRITE);
+    FileChannel channel =
+        FileChannel.open(
+            file, StandardOpenOption.CREATE, StandardOpenOption.READ, StandardOpenOption.WRITE);
     FileLock lock;
     try {
       lock = channel.tryLock();
@@ -43,10 +45,20 @@ public final class RunLock implements AutoCloseable {
     if (lock == null) {
       String owner = new String(Files.readAllBytes(file), StandardCharsets.UTF_8).trim();
       channel.close();
-      throw new RunDirectoryException(dir + " is in use by another hopstat process (" + (owner.isEmpty() ? "owner unknown" : owner)
-          + "); wait for it to finish or stop it first");
+      throw new RunDirectoryException(
+          dir
+              + " is in use by another hopstat process ("
+              + (owner.isEmpty() ? "owner unknown" : owner)
+              + "); wait for it to finish or stop it first");
     }
-    String me = "pid " + ProcessHandle.current().pid() + " on " + hostName() + " since " + Instant.ofEpochMilli(ManagementFactory.getRuntimeMXBean().getStartTime()) + "\n";
+    String me =
+        "pid "
+            + ProcessHandle.current().pid()
+            + " on "
+            + hostName()
+            + " since "
+            + Instant.ofEpochMilli(ManagementFactory.getRuntimeMXBean().getStartTime())
+            + "\n";
     channel.truncate(0);
     channel.write(ByteBuffer.wrap(me.getBytes(StandardCharsets.UTF_8)), 0);
     channel.force(false);

@@ -22,17 +22,20 @@ public enum TaskState {
   DONE,
   FAILED;
 
-  private static final Map<TaskState, Set<TaskState>> ALLOWED = Map.of(
-      PENDING, EnumSet.of(RUNNING),
-      RUNNING, EnumSet.of(DONE, FAILED, PENDING),
-      DONE, EnumSet.noneOf(TaskState.class),
-      FAILED, EnumSet.noneOf(TaskState.class));
+  private static final Map<TaskState, Set<TaskState>> ALLOWED =
+      Map.of(
+          PENDING, EnumSet.of(RUNNING),
+          RUNNING, EnumSet.of(DONE, FAILED, PENDING),
+          DONE, EnumSet.noneOf(TaskState.class),
+          FAILED, EnumSet.noneOf(TaskState.class));
 
   public boolean canMoveTo(TaskState next) {
     return ALLOWED.get(this).contains(next);
   }
 
-  /** @throws IllegalStateException if the transition is not in the table */
+  /**
+   * @throws IllegalStateException if the transition is not in the table
+   */
   public void checkMoveTo(TaskState next) {
     if (!canMoveTo(next)) {
       throw new IllegalStateException("illegal task transition " + this + " -> " + next);

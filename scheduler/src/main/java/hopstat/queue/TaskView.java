@@ -12,7 +12,8 @@ import java.util.List;
  * @param attempts times the task was claimed
  * @param history every state entered, oldest first, with the store clock's timestamp
  */
-public record TaskView(String taskId, TaskState state, long version, int attempts, List<Transition> history) {
+public record TaskView(
+    String taskId, TaskState state, long version, int attempts, List<Transition> history) {
   public TaskView {
     history = List.copyOf(history);
   }

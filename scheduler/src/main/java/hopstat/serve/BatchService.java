@@ -40,9 +40,9 @@ import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
 /**
- * The batch service of one root directory: a durable priority queue of jobs ({@link JobStore}),
- * fed by an inbox directory and a loopback HTTP API, run one job at a time on the local pool with
- * all the service's threads.
+ * The batch service of one root directory: a durable priority queue of jobs ({@link JobStore}), fed
+ * by an inbox directory and a loopback HTTP API, run one job at a time on the local pool with all
+ * the service's threads.
  *
  * <p>Layout of the root:
  *
@@ -54,22 +54,28 @@ import org.slf4j.LoggerFactory;
  * ROOT/jobs/          the queue (see {@link JobStore})
  * </pre>
  *
- * <p>Scheduling: the QUEUED job with the highest priority, first submitted first within a
- * priority. A running job is not pre-empted by a later, higher-priority one; it finishes (or is
- * paused) first. Recovery: a job found RUNNING at start (the service was killed) goes back to
- * QUEUED and, when picked, resumes from its journal, so the result is that of an uninterrupted run.
+ * <p>Scheduling: the QUEUED job with the highest priority, first submitted first within a priority.
+ * A running job is not pre-empted by a later, higher-priority one; it finishes (or is paused)
+ * first. Recovery: a job found RUNNING at start (the service was killed) goes back to QUEUED and,
+ * when picked, resumes from its journal, so the result is that of an uninterrupted run.
  */
 public final class BatchService implements AutoCloseable {
 
   /** Time a running job gets to finish its in-flight realisations when the service stops. */
   public static final Duration STOP_GRACE = Duration.ofSeconds(20);
+
   /** Largest priority magnitude accepted. */
   public static final int MAX_PRIORITY = 1000;
 
   private static final Logger LOG = LoggerFactory.getLogger(BatchService.class);
-  private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+  private static final ObjectMapper JSON =
+      new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
-  private enum StopReason { PAUSE, CANCEL, SHUTDOWN }
+  private enum StopReason {
+    PAUSE,
+    CANCEL,
+    SHUTDOWN
+  }
 
   private final ServiceSpec spec;
   private final Clock clock;
@@ -118,7 +124,11 @@ public final class BatchService implements AutoCloseable {
       service.inbox = Inbox.start(service, spec.root(), spec.inboxPoll());
       service.writeServiceFile();
       service.scheduler.start();
-      LOG.info("hopstat service on {} for {} ({} thread(s))", service.uri(), spec.root(), spec.threads());
+      LOG.info(
+          "hopstat service on {} for {} ({} thread(s))",
+          service.uri(),
+          spec.root(),
+          spec.threads());
       return service;
     } catch (IOException | RuntimeException e) {
       if (service != null) {
@@ -133,7 +143,11 @@ public final class BatchService implements AutoCloseable {
   private void recover() throws IOException {
     for (JobRecord j : store.list()) {
       if (j.state() == JobState.RUNNING) {
-        store.transition(j.id(), JobState.QUEUED, "the service stopped while the job ran; it resumes from its journal", null);
+        store.transition(
+            j.id(),
+            JobState.QUEUED,
+            "the service stopped while the job ran; it resumes from its journal",
+            null);
       }
     }
   }
@@ -161,8 +175,8 @@ public final class BatchService implements AutoCloseable {
   }
 
   /**
-   * Validates spec text exactly as {@code hopstat run} does: parse, expand, check memory for
-   * {@code threads} workers and the plan.
+   * Validates spec text exactly as {@code hopstat run} does: parse, expand, check memory for {@code
+   * threads} workers and the plan.
    *
    * @throws InvalidInputException with every problem and its field path
    */
@@ -181,9 +195,11 @@ public final class BatchService implements AutoCloseable {
    * @param consumed an inbox file to consume atomically with the submission, or {@code null}
    * @throws InvalidInputException if the spec or the priority is bad
    */
-  public JobRecord submit(String specText, int priority, String source, Path consumed) throws IOException {
+  public JobRecord submit(String specText, int priority, String source, Path consumed)
+      throws IOException {
     if (Math.abs(priority) > MAX_PRIORITY) {
-      throw new InvalidInputException("priority", priority, "must be from -" + MAX_PRIORITY + " to " + MAX_PRIORITY);
+      throw new InvalidInputException(
+          "priority", priority, "must be from -" + MAX_PRIORITY + " to " + MAX_PRIORITY);
     }
     StudyPlan plan = validate(specText, spec.threads());
     synchronized (monitor) {
@@ -191,8 +207,10 @@ public final class BatchService implements AutoCloseable {
         throw new IllegalStateException("the service is stopping");
       }
     }
-    Map<String, Object> metadata = LocalSession.runMetadata(plan, spec.threads(), linalgDescription, clock.instant());
-    JobRecord job = store.create(specText, plan.spec().name(), priority, source, metadata, consumed);
+    Map<String, Object> metadata =
+        LocalSession.runMetadata(plan, spec.threads(), linalgDescription, clock.instant());
+    JobRecord job =
+        store.create(specText, plan.spec().name(), priority, source, metadata, consumed);
     LOG.info("queued job {} (priority {}) from {}", job.id(), priority, source);
     wake();
     return job;
@@ -242,8 +260,8 @@ public final class BatchService implements AutoCloseable {
   }
 
   /**
-   * Cancels a job. A queued or paused job is CANCELLED at once; a running one is asked to stop
-   * and becomes CANCELLED when its in-flight realisations are journaled.
+   * Cancels a job. A queued or paused job is CANCELLED at once; a running one is asked to stop and
+   * becomes CANCELLED when its in-flight realisations are journaled.
    *
    * @throws IllegalStateException if the job is already final
    */
@@ -267,10 +285,12 @@ public final class BatchService implements AutoCloseable {
   private JobRecord stop(String id, StopReason reason) throws IOException {
     JobState target = reason == StopReason.CANCEL ? JobState.CANCELLED : JobState.PAUSED;
     synchronized (monitor) {
-      JobRecord job = store.find(id).orElseThrow(() -> new IllegalArgumentException("no job " + id));
+      JobRecord job =
+          store.find(id).orElseThrow(() -> new IllegalArgumentException("no job " + id));
       if (id.equals(currentId)) {
         if (!job.state().canMoveTo(target)) {
-          throw new IllegalStateException("job " + id + " cannot go from " + job.state() + " to " + target);
+          throw new IllegalStateException(
+              "job " + id + " cannot go from " + job.state() + " to " + target);
         }
         if (stopReason != StopReason.CANCEL) { // a cancel is not downgraded to a pause
           stopReason = reason;
@@ -278,7 +298,8 @@ public final class BatchService implements AutoCloseable {
         currentBackend.requestStop();
         return job;
       }
-      return store.transition(id, target, reason == StopReason.CANCEL ? "cancelled" : "paused", null);
+      return store.transition(
+          id, target, reason == StopReason.CANCEL ? "cancelled" : "paused", null);
     }
   }
 
@@ -314,7 +335,12 @@ public final class BatchService implements AutoCloseable {
           next = closing ? Optional.empty() : store.nextQueued();
         }
         try {
-          job = store.transition(next.get().id(), JobState.RUNNING, "started on " + spec.threads() + " thread(s)", null);
+          job =
+              store.transition(
+                  next.get().id(),
+                  JobState.RUNNING,
+                  "started on " + spec.threads() + " thread(s)",
+                  null);
         } catch (IOException e) {
           LOG.error("cannot record the start of job {}: {}", next.get().id(), e.toString());
           closing = true;
@@ -339,14 +365,31 @@ public final class BatchService implements AutoCloseable {
     try {
       RunDirectory dir = RunDirectory.open(store.runDir(id));
       StudyPlan plan = RunSummaryOps.plan(dir);
-      SessionResult result = LocalSession.execute(dir, plan, backend,
-          new RunOptions(spec.threads(), spec.linalg(), "part", Shard.ALL, JournalWriter.DEFAULT_SYNC_INTERVAL_NANOS), listener);
+      SessionResult result =
+          LocalSession.execute(
+              dir,
+              plan,
+              backend,
+              new RunOptions(
+                  spec.threads(),
+                  spec.linalg(),
+                  "part",
+                  Shard.ALL,
+                  JournalWriter.DEFAULT_SYNC_INTERVAL_NANOS),
+              listener);
       synchronized (monitor) {
         if (!result.run().stoppedEarly()) {
           end = JobState.DONE;
-          reason = "finished: " + result.summary().done() + " done, " + result.summary().failed() + " failed";
+          reason =
+              "finished: "
+                  + result.summary().done()
+                  + " done, "
+                  + result.summary().failed()
+                  + " failed";
           if (result.summary().failed() > 0) {
-            message = result.summary().failed() + " realisation(s) FAILED; reasons per point are in summary.json";
+            message =
+                result.summary().failed()
+                    + " realisation(s) FAILED; reasons per point are in summary.json";
           }
         } else if (stopReason == StopReason.CANCEL) {
           end = JobState.CANCELLED;
@@ -363,7 +406,10 @@ public final class BatchService implements AutoCloseable {
       Thread.currentThread().interrupt();
       end = JobState.QUEUED;
       reason = "interrupted; the job resumes from its journal";
-    } catch (Exception e) { // the job boundary: a job that cannot run is FAILED with its reason, the service goes on
+    } catch (
+        Exception
+            e) { // the job boundary: a job that cannot run is FAILED with its reason, the service
+      // goes on
       end = JobState.FAILED;
       reason = "could not run";
       message = e.getClass().getSimpleName() + ": " + e.getMessage();
@@ -385,9 +431,9 @@ public final class BatchService implements AutoCloseable {
   }
 
   /**
-   * Stops the service: no new submissions, the running job finishes its in-flight realisations
-   * (up to {@link #STOP_GRACE}) and goes back to QUEUED, the API and inbox stop, the lock is
-   * released. Idempotent.
+   * Stops the service: no new submissions, the running job finishes its in-flight realisations (up
+   * to {@link #STOP_GRACE}) and goes back to QUEUED, the API and inbox stop, the lock is released.
+   * Idempotent.
    */
   @Override
   public void close() throws IOException {

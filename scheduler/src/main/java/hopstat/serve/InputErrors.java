@@ -26,8 +26,9 @@ public final class InputErrors {
   }
 
   /**
-   * The API's 400 body: {@code {"error":"invalid-input","violations":[{"field","value","reason","message"}]}},
-   * where {@code message} is the CLI's line for the violation.
+   * The API's 400 body: {@code
+   * {"error":"invalid-input","violations":[{"field","value","reason","message"}]}}, where {@code
+   * message} is the CLI's line for the violation.
    */
   public static ObjectNode json(InvalidInputException e) {
     ObjectNode o = JSON.createObjectNode();

@@ -4,17 +4,18 @@ import java.util.Locale;
 import java.util.regex.Pattern;
 
 /**
- * Job ids: {@code NNNNNN-name}, a zero-padded submission number and the spec name reduced to
- * {@code [A-Za-z0-9_-]} (at most {@value #NAME_LENGTH} characters). Ids are used as directory names
- * under {@code ROOT/jobs}, so anything that does not match {@link #isValid} — a slash, a dot, a
- * {@code ..}, an empty name — is refused before it comes near a path.
+ * Job ids: {@code NNNNNN-name}, a zero-padded submission number and the spec name reduced to {@code
+ * [A-Za-z0-9_-]} (at most {@value #NAME_LENGTH} characters). Ids are used as directory names under
+ * {@code ROOT/jobs}, so anything that does not match {@link #isValid} — a slash, a dot, a {@code
+ * ..}, an empty name — is refused before it comes near a path.
  */
 public final class JobIds {
 
   /** Longest name part of an id. */
   public static final int NAME_LENGTH = 40;
 
-  private static final Pattern ID = Pattern.compile("[0-9]{6,9}-[A-Za-z0-9][A-Za-z0-9_-]{0," + (NAME_LENGTH - 1) + "}");
+  private static final Pattern ID =
+      Pattern.compile("[0-9]{6,9}-[A-Za-z0-9][A-Za-z0-9_-]{0," + (NAME_LENGTH - 1) + "}");
 
   private JobIds() {}
 

@@ -20,14 +20,24 @@ import java.util.Objects;
  * @param history every change, oldest first; the first entry is the submission
  * @param message last error or note for the user, or {@code null}
  */
-public record JobRecord(int format, String id, String name, int priority, long sequence, String source, JobState state, List<JobEvent> history, String message) {
+public record JobRecord(
+    int format,
+    String id,
+    String name,
+    int priority,
+    long sequence,
+    String source,
+    JobState state,
+    List<JobEvent> history,
+    String message) {
 
   /** The job.json format this version writes and reads. */
   public static final int FORMAT = 1;
 
   public JobRecord {
     if (format != FORMAT) {
-      throw new IllegalArgumentException("job record format " + format + "; this version reads format " + FORMAT);
+      throw new IllegalArgumentException(
+          "job record format " + format + "; this version reads format " + FORMAT);
     }
     Objects.requireNonNull(id, "id");
     if (!JobIds.isValid(id)) {
@@ -41,13 +51,24 @@ public record JobRecord(int format, String id, String name, int priority, long s
     }
     history = List.copyOf(history);
     if (history.isEmpty() || history.get(history.size() - 1).to() != state) {
-      throw new IllegalArgumentException("the history of " + id + " must end in its state " + state);
+      throw new IllegalArgumentException(
+          "the history of " + id + " must end in its state " + state);
     }
   }
 
   /** A new QUEUED job. */
-  public static JobRecord submitted(String id, String name, int priority, long sequence, String source, Instant at) {
-    return new JobRecord(FORMAT, id, name, priority, sequence, source, JobState.QUEUED, List.of(new JobEvent(at, null, JobState.QUEUED, "submitted via " + source)), null);
+  public static JobRecord submitted(
+      String id, String name, int priority, long sequence, String source, Instant at) {
+    return new JobRecord(
+        FORMAT,
+        id,
+        name,
+        priority,
+        sequence,
+        source,
+        JobState.QUEUED,
+        List.of(new JobEvent(at, null, JobState.QUEUED, "submitted via " + source)),
+        null);
   }
 
   /**

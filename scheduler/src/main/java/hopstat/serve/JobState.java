@@ -28,13 +28,14 @@ public enum JobState {
   FAILED,
   CANCELLED;
 
-  private static final Map<JobState, Set<JobState>> ALLOWED = Map.of(
-      QUEUED, EnumSet.of(RUNNING, PAUSED, CANCELLED),
-      RUNNING, EnumSet.of(DONE, FAILED, PAUSED, CANCELLED, QUEUED),
-      PAUSED, EnumSet.of(QUEUED, CANCELLED),
-      DONE, EnumSet.noneOf(JobState.class),
-      FAILED, EnumSet.noneOf(JobState.class),
-      CANCELLED, EnumSet.noneOf(JobState.class));
+  private static final Map<JobState, Set<JobState>> ALLOWED =
+      Map.of(
+          QUEUED, EnumSet.of(RUNNING, PAUSED, CANCELLED),
+          RUNNING, EnumSet.of(DONE, FAILED, PAUSED, CANCELLED, QUEUED),
+          PAUSED, EnumSet.of(QUEUED, CANCELLED),
+          DONE, EnumSet.noneOf(JobState.class),
+          FAILED, EnumSet.noneOf(JobState.class),
+          CANCELLED, EnumSet.noneOf(JobState.class));
 
   /** True if the transition {@code this → next} is in the table. */
   public boolean canMoveTo(JobState next) {

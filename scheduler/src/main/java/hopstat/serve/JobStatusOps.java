@@ -25,10 +25,10 @@ import java.util.stream.Stream;
 /**
  * Builds the status documents of the API from a job's record, its journal (through {@link
  * hopstat.statistics.SummaryOps}, the same statistics as summary.csv/json) and the live progress of
- * a running session. Summaries are cached per job: a job that is not running is summarised once
- * per state change; the running job at most once per {@link #LIVE_REUSE_NANOS} and only when its
- * journal files changed size. The summary endpoints (summary.csv/json) are therefore up to that
- * age behind a running job's journal; for a job that is not running they are exact.
+ * a running session. Summaries are cached per job: a job that is not running is summarised once per
+ * state change; the running job at most once per {@link #LIVE_REUSE_NANOS} and only when its
+ * journal files changed size. The summary endpoints (summary.csv/json) are therefore up to that age
+ * behind a running job's journal; for a job that is not running they are exact.
  *
  * <p>Non-finite numbers (e.g. the standard error of a single sample) are written as {@code null}.
  */
@@ -78,12 +78,22 @@ final class JobStatusOps {
     synchronized (lock) { // one reader per job at a time; the others wait and reuse its result
       Cached c = summaries.get(id);
       boolean running = job.state() == JobState.RUNNING;
-      if (running && c != null && c.fingerprint().startsWith("running:") && System.nanoTime() - c.computedNanos() < LIVE_REUSE_NANOS) {
+      if (running
+          && c != null
+          && c.fingerprint().startsWith("running:")
+          && System.nanoTime() - c.computedNanos() < LIVE_REUSE_NANOS) {
         return c.summary();
       }
-      String key = running ? "running:" + fingerprint(store.runDir(id).resolve("journal")) : "still:" + job.history().size();
+      String key =
+          running
+              ? "running:" + fingerprint(store.runDir(id).resolve("journal"))
+              : "still:" + job.history().size();
       if (c == null || !c.fingerprint().equals(key)) {
-        c = new Cached(key, RunSummaryOps.summarise(RunDirectory.open(store.runDir(id)), plan(id)), System.nanoTime());
+        c =
+            new Cached(
+                key,
+                RunSummaryOps.summarise(RunDirectory.open(store.runDir(id)), plan(id)),
+                System.nanoTime());
       } else {
         c = new Cached(key, c.summary(), System.nanoTime());
       }
@@ -92,7 +102,10 @@ final class JobStatusOps {
     }
   }
 
-  /** The summary text ({@code csv} or {@code json}), byte for byte what summary.csv/json would hold now. */
+  /**
+   * The summary text ({@code csv} or {@code json}), byte for byte what summary.csv/json would hold
+   * now.
+   */
   String summaryText(JobRecord job, String format) throws IOException {
     ReportFormats f = ReportFormats.valueOf(format.toUpperCase(Locale.ROOT));
     StringWriter w = new StringWriter();

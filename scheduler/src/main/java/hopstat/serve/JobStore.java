@@ -37,8 +37,8 @@ import org.slf4j.LoggerFactory;
  *
  * A submission is staged completely, then committed by one rename of the staging directory. An
  * inbox file is consumed by renaming it into the staging directory just before that commit; a
- * staging directory found at open that holds {@code source.json} is committed, any other is
- * deleted (its inbox file is still in the inbox). So a crash anywhere never loses or duplicates a
+ * staging directory found at open that holds {@code source.json} is committed, any other is deleted
+ * (its inbox file is still in the inbox). So a crash anywhere never loses or duplicates a
  * submission. Every state change is stamped from the injected clock.
  *
  * <p>Thread-safe: all methods synchronise on the store.
@@ -47,13 +47,15 @@ public final class JobStore {
 
   /** Directory of jobs under the root. */
   public static final String JOBS = "jobs";
+
   static final String STAGING_PREFIX = ".new-";
   static final String SOURCE_FILE = "source.json";
   static final String RECORD_FILE = "job.json";
   static final String RUN_DIR = "run";
 
   private static final Logger LOG = LoggerFactory.getLogger(JobStore.class);
-  private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+  private static final ObjectMapper JSON =
+      new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
   private final Path jobsDir;
   private final Clock clock;
@@ -65,7 +67,10 @@ public final class JobStore {
     this.clock = clock;
   }
 
-  /** Opens (creating if needed) the store under {@code root}, finishing or discarding staged submissions. */
+  /**
+   * Opens (creating if needed) the store under {@code root}, finishing or discarding staged
+   * submissions.
+   */
   public static JobStore open(Path root, Clock clock) throws IOException {
     Path jobsDir = root.toAbsolutePath().normalize().resolve(JOBS);
     Files.createDirectories(jobsDir);
@@ -83,7 +88,10 @@ public final class JobStore {
       String name = p.getFileName().toString();
       if (name.startsWith(STAGING_PREFIX) && Files.isDirectory(p)) {
         String id = name.substring(STAGING_PREFIX.length());
-        if (JobIds.isValid(id) && Files.isRegularFile(p.resolve(SOURCE_FILE)) && Files.isRegularFile(p.resolve(RECORD_FILE)) && !Files.exists(jobsDir.resolve(id))) {
+        if (JobIds.isValid(id)
+            && Files.isRegularFile(p.resolve(SOURCE_FILE))
+            && Files.isRegularFile(p.resolve(RECORD_FILE))
+            && !Files.exists(jobsDir.resolve(id))) {
           Files.move(p, jobsDir.resolve(id), StandardCopyOption.ATOMIC_MOVE);
           LOG.info("committed submission {} staged before a crash", id);
         } else {
@@ -130,7 +138,9 @@ public final class JobStore {
   public synchronized Optional<JobRecord> nextQueued() {
     return jobs.values().stream()
         .filter(j -> j.state() == JobState.QUEUED)
-        .min(Comparator.comparingInt((JobRecord j) -> -j.priority()).thenComparingLong(JobRecord::sequence));
+        .min(
+            Comparator.comparingInt((JobRecord j) -> -j.priority())
+                .thenComparingLong(JobRecord::sequence));
   }
 
   /** The run directory of a job (which must exist in the store). */
@@ -158,11 +168,19 @@ public final class JobStore {
    * @param specText the exact spec text (already validated by the caller)
    * @param runMetadata members of the run's run.json
    */
-  public synchronized JobRecord create(String specText, String specName, int priority, String source, Map<String, Object> runMetadata, Path consumed) throws IOException {
+  public synchronized JobRecord create(
+      String specText,
+      String specName,
+      int priority,
+      String source,
+      Map<String, Object> runMetadata,
+      Path consumed)
+      throws IOException {
     long sequence = lastSequence + 1;
     String id = JobIds.of(sequence, specName);
     Path stage = jobsDir.resolve(STAGING_PREFIX + id);
-    JobRecord record = JobRecord.submitted(id, specName, priority, sequence, source, clock.instant());
+    JobRecord record =
+        JobRecord.submitted(id, specName, priority, sequence, source, clock.instant());
     try {
       if (Files.exists(stage)) {
         deleteTree(stage);
@@ -190,7 +208,8 @@ public final class JobStore {
    * @throws IllegalStateException if the transition is not allowed
    * @throws IllegalArgumentException if there is no such job
    */
-  public synchronized JobRecord transition(String id, JobState next, String reason, String message) throws IOException {
+  public synchronized JobRecord transition(String id, JobState next, String reason, String message)
+      throws IOException {
     JobRecord current = find(id).orElseThrow(() -> new IllegalArgumentException("no job " + id));
     JobRecord moved = current.moveTo(next, reason, clock.instant(), message);
     writeRecord(jobDir(id).resolve(RECORD_FILE), moved);
@@ -201,7 +220,12 @@ public final class JobStore {
   private static void writeRecord(Path target, JobRecord record) throws IOException {
     byte[] bytes = JSON.writeValueAsBytes(toJson(record));
     Path tmp = target.resolveSibling("." + target.getFileName() + ".tmp");
-    try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.CREATE, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
+    try (FileChannel ch =
+        FileChannel.open(
+            tmp,
+            StandardOpenOption.CREATE,
+            StandardOpenOption.WRITE,
+            StandardOpenOption.TRUNCATE_EXISTING)) {
       ByteBuffer b = ByteBuffer.wrap(bytes);
       while (b.hasRemaining()) {
         ch.write(b);
@@ -247,12 +271,23 @@ public final class JobStore {
     List<JobEvent> history = new ArrayList<>();
     for (JsonNode x : o.path("history")) {
       JsonNode from = x.path("from");
-      history.add(new JobEvent(Instant.parse(x.path("at").asText()), from.isNull() || from.isMissingNode() ? null : JobState.valueOf(from.asText()),
-          JobState.valueOf(x.path("to").asText()), x.path("reason").asText()));
+      history.add(
+          new JobEvent(
+              Instant.parse(x.path("at").asText()),
+              from.isNull() || from.isMissingNode() ? null : JobState.valueOf(from.asText()),
+              JobState.valueOf(x.path("to").asText()),
+              x.path("reason").asText()));
     }
     JsonNode message = o.path("message");
-    return new JobRecord(o.path("format").asInt(-1), o.path("id").asText(), o.path("name").asText(), o.path("priority").asInt(),
-        o.path("sequence").asLong(), o.path("source").asText(), JobState.valueOf(o.path("state").asText()), history,
+    return new JobRecord(
+        o.path("format").asInt(-1),
+        o.path("id").asText(),
+        o.path("name").asText(),
+        o.path("priority").asInt(),
+        o.path("sequence").asLong(),
+        o.path("source").asText(),
+        JobState.valueOf(o.path("state").asText()),
+        history,
         message.isNull() || message.isMissingNode() ? null : message.asText());
   }
 

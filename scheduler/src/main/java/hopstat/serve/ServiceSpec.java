@@ -16,12 +16,21 @@ import java.util.Objects;
  * @param port TCP port, 0 for any free port (the port taken is written to service.json)
  * @param threads worker threads; the running job gets all of them (one job at a time)
  * @param linalg dense linear algebra for the jobs
- * @param token the API token (UTF-8 bytes), or {@code null} for none; at least {@value #MIN_TOKEN_BYTES} bytes
+ * @param token the API token (UTF-8 bytes), or {@code null} for none; at least {@value
+ *     #MIN_TOKEN_BYTES} bytes
  * @param pace extra time each worker waits after a realisation (zero in normal use; slows jobs for
  *     demonstrations and for tests that must catch a job in flight)
  * @param inboxPoll how often the inbox is scanned
  */
-public record ServiceSpec(Path root, InetAddress bind, int port, int threads, LinalgKind linalg, byte[] token, Duration pace, Duration inboxPoll) {
+public record ServiceSpec(
+    Path root,
+    InetAddress bind,
+    int port,
+    int threads,
+    LinalgKind linalg,
+    byte[] token,
+    Duration pace,
+    Duration inboxPoll) {
 
   /** Shortest accepted token. */
   public static final int MIN_TOKEN_BYTES = 16;
@@ -40,10 +49,16 @@ public record ServiceSpec(Path root, InetAddress bind, int port, int threads, Li
       bad.add("--threads", threads, "must be from 1 to 4096");
     }
     if (token != null && token.length < MIN_TOKEN_BYTES) {
-      bad.add("--token-file", token.length + " bytes", "the token must be at least " + MIN_TOKEN_BYTES + " bytes");
+      bad.add(
+          "--token-file",
+          token.length + " bytes",
+          "the token must be at least " + MIN_TOKEN_BYTES + " bytes");
     }
     if (token == null && !bind.isLoopbackAddress()) {
-      bad.add("--bind", bind.getHostAddress(), "binding an address other than loopback needs a token (--token-file)");
+      bad.add(
+          "--bind",
+          bind.getHostAddress(),
+          "binding an address other than loopback needs a token (--token-file)");
     }
     if (pace.isNegative() || inboxPoll.isNegative() || inboxPoll.isZero()) {
       bad.add("--pace-ms", pace.toMillis(), "pace must be >= 0 and the inbox poll interval > 0");
@@ -65,8 +80,15 @@ public record ServiceSpec(Path root, InetAddress bind, int port, int threads, Li
 
   @Override
   public boolean equals(Object o) {
-    return o instanceof ServiceSpec s && root.equals(s.root) && bind.equals(s.bind) && port == s.port && threads == s.threads
-        && linalg == s.linalg && Arrays.equals(token, s.token) && pace.equals(s.pace) && inboxPoll.equals(s.inboxPoll);
+    return o instanceof ServiceSpec s
+        && root.equals(s.root)
+        && bind.equals(s.bind)
+        && port == s.port
+        && threads == s.threads
+        && linalg == s.linalg
+        && Arrays.equals(token, s.token)
+        && pace.equals(s.pace)
+        && inboxPoll.equals(s.inboxPoll);
   }
 
   @Override
@@ -76,7 +98,22 @@ public record ServiceSpec(Path root, InetAddress bind, int port, int threads, Li
 
   @Override
   public String toString() {
-    return "ServiceSpec[root=" + root + ", bind=" + bind.getHostAddress() + ", port=" + port + ", threads=" + threads + ", linalg=" + linalg
-        + ", token=" + (token == null ? "none" : "set") + ", pace=" + pace + ", inboxPoll=" + inboxPoll + "]";
+    return "ServiceSpec[root="
+        + root
+        + ", bind="
+        + bind.getHostAddress()
+        + ", port="
+        + port
+        + ", threads="
+        + threads
+        + ", linalg="
+        + linalg
+        + ", token="
+        + (token == null ? "none" : "set")
+        + ", pace="
+        + pace
+        + ", inboxPoll="
+        + inboxPoll
+        + "]";
   }
 }

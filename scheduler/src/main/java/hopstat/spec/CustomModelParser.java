@@ -30,10 +30,19 @@ final class CustomModelParser {
   /** Tolerance on ‖U U* ∓ 1‖_max when checking a declared T² or C² against the class. */
   static final double SQUARE_TOLERANCE = 1e-10;
 
-  private static final Set<String> KEYS = Set.of("dimension", "vectors", "orbitals", "onsite", "hoppings", "pairings", "class", "symmetries");
+  private static final Set<String> KEYS =
+      Set.of(
+          "dimension",
+          "vectors",
+          "orbitals",
+          "onsite",
+          "hoppings",
+          "pairings",
+          "class",
+          "symmetries");
   private static final Pattern ORBITAL_NAME = Pattern.compile("[A-Za-z][A-Za-z0-9_]{0,31}");
-  private static final Map<String, Symmetry> OPERATOR_KEYS = Map.of(
-      "T", Symmetry.TIME_REVERSAL, "C", Symmetry.PARTICLE_HOLE, "S", Symmetry.CHIRAL);
+  private static final Map<String, Symmetry> OPERATOR_KEYS =
+      Map.of("T", Symmetry.TIME_REVERSAL, "C", Symmetry.PARTICLE_HOLE, "S", Symmetry.CHIRAL);
 
   private final JsonNode lattice;
   private final Set<String> parameterNames;
@@ -41,7 +50,8 @@ final class CustomModelParser {
   private boolean ok = true;
   private final Map<String, Integer> orbitalIndex = new LinkedHashMap<>();
 
-  private CustomModelParser(JsonNode lattice, Set<String> parameterNames, InvalidInputException.Collector problems) {
+  private CustomModelParser(
+      JsonNode lattice, Set<String> parameterNames, InvalidInputException.Collector problems) {
     this.lattice = lattice;
     this.parameterNames = parameterNames;
     this.problems = problems;
@@ -53,7 +63,8 @@ final class CustomModelParser {
    * @param problems receives every problem found
    * @return the definition, or null if any problem was found
    */
-  static CustomModelDefinition parse(JsonNode lattice, Set<String> parameterNames, InvalidInputException.Collector problems) {
+  static CustomModelDefinition parse(
+      JsonNode lattice, Set<String> parameterNames, InvalidInputException.Collector problems) {
     return new CustomModelParser(lattice, parameterNames, problems).parse();
   }
 
@@ -64,17 +75,26 @@ final class CustomModelParser {
 
   private CustomModelDefinition parse() {
     if (!lattice.isObject()) {
-      add("lattice", lattice.toString(), "must be an object with dimension, vectors, orbitals, onsite, hoppings, class");
+      add(
+          "lattice",
+          lattice.toString(),
+          "must be an object with dimension, vectors, orbitals, onsite, hoppings, class");
       return null;
     }
     for (Iterator<String> it = lattice.fieldNames(); it.hasNext(); ) {
       String k = it.next();
       if (!KEYS.contains(k)) {
-        add("lattice." + k, null, "unknown key; allowed: " + String.join(", ", new TreeSet<>(KEYS)));
+        add(
+            "lattice." + k,
+            null,
+            "unknown key; allowed: " + String.join(", ", new TreeSet<>(KEYS)));
       }
     }
     JsonNode dimNode = lattice.get("dimension");
-    if (dimNode == null || !dimNode.isIntegralNumber() || dimNode.asInt() < 1 || dimNode.asInt() > 3) {
+    if (dimNode == null
+        || !dimNode.isIntegralNumber()
+        || dimNode.asInt() < 1
+        || dimNode.asInt() > 3) {
       add("lattice.dimension", dimNode == null ? null : dimNode.toString(), "required: 1, 2 or 3");
       return null;
     }
@@ -87,23 +107,34 @@ final class CustomModelParser {
     SymmetryClass klass = null;
     JsonNode c = lattice.get("class");
     if (c == null || !c.isTextual() || SymmetryClass.parse(c.asText()).isEmpty()) {
-      add("lattice.class", c == null ? null : c.toString(), "required: an Altland-Zirnbauer class, one of " + Arrays.toString(SymmetryClass.values()));
+      add(
+          "lattice.class",
+          c == null ? null : c.toString(),
+          "required: an Altland-Zirnbauer class, one of "
+              + Arrays.toString(SymmetryClass.values()));
     } else {
       klass = SymmetryClass.parse(c.asText()).get();
     }
     int perCell = pairings.isEmpty() ? orbitals.size() : 2 * orbitals.size();
-    List<SymmetryOperator> symmetries = klass == null || orbitals.isEmpty() ? List.of() : parseSymmetries(klass, perCell, !pairings.isEmpty());
+    List<SymmetryOperator> symmetries =
+        klass == null || orbitals.isEmpty()
+            ? List.of()
+            : parseSymmetries(klass, perCell, !pairings.isEmpty());
     if (!ok) {
       return null;
     }
-    return new CustomModelDefinition(d, vectors, orbitals, onsite, hoppings, pairings, klass, symmetries);
+    return new CustomModelDefinition(
+        d, vectors, orbitals, onsite, hoppings, pairings, klass, symmetries);
   }
 
   private List<List<Double>> parseVectors(int d) {
     JsonNode v = lattice.get("vectors");
     List<List<Double>> vectors = new ArrayList<>();
     if (v == null || !v.isArray() || v.size() != d) {
-      add("lattice.vectors", v == null ? null : v.toString(), "required: " + d + " lattice vector(s) of " + d + " number(s) each");
+      add(
+          "lattice.vectors",
+          v == null ? null : v.toString(),
+          "required: " + d + " lattice vector(s) of " + d + " number(s) each");
       return vectors;
     }
     for (int i = 0; i < d; i++) {
@@ -117,7 +148,10 @@ final class CustomModelParser {
 
   private List<Double> numbers(String path, JsonNode n, int length) {
     if (n == null || !n.isArray() || n.size() != length) {
-      add(path, n == null ? null : n.toString(), "must be a list of " + length + " number(s) (one per dimension)");
+      add(
+          path,
+          n == null ? null : n.toString(),
+          "must be a list of " + length + " number(s) (one per dimension)");
       return null;
     }
     List<Double> out = new ArrayList<>();
@@ -136,15 +170,24 @@ final class CustomModelParser {
     List<Orbital> out = new ArrayList<>();
     JsonNode n = lattice.get("orbitals");
     if (n == null || !n.isArray() || n.isEmpty()) {
-      add("lattice.orbitals", n == null ? null : n.toString(), "required: a non-empty list of {\"name\": ..., \"position\": [...]}");
+      add(
+          "lattice.orbitals",
+          n == null ? null : n.toString(),
+          "required: a non-empty list of {\"name\": ..., \"position\": [...]}");
       return out;
     }
     for (int i = 0; i < n.size(); i++) {
       String path = "lattice.orbitals[" + i + "]";
       JsonNode o = n.get(i);
       JsonNode name = o.get("name");
-      if (!o.isObject() || name == null || !name.isTextual() || !ORBITAL_NAME.matcher(name.asText()).matches()) {
-        add(path + ".name", name == null ? null : name.toString(), "required: a name of letters, digits and '_' starting with a letter");
+      if (!o.isObject()
+          || name == null
+          || !name.isTextual()
+          || !ORBITAL_NAME.matcher(name.asText()).matches()) {
+        add(
+            path + ".name",
+            name == null ? null : name.toString(),
+            "required: a name of letters, digits and '_' starting with a letter");
         continue;
       }
       for (Iterator<String> it = o.fieldNames(); it.hasNext(); ) {
@@ -157,15 +200,25 @@ final class CustomModelParser {
         add(path + ".name", name.asText(), "listed twice");
         continue;
       }
-      List<Double> position = o.has("position") ? numbers(path + ".position", o.get("position"), d) : java.util.Collections.nCopies(d, 0.0);
-      out.add(new Orbital(name.asText(), position == null ? java.util.Collections.nCopies(d, 0.0) : position));
+      List<Double> position =
+          o.has("position")
+              ? numbers(path + ".position", o.get("position"), d)
+              : java.util.Collections.nCopies(d, 0.0);
+      out.add(
+          new Orbital(
+              name.asText(), position == null ? java.util.Collections.nCopies(d, 0.0) : position));
     }
     return out;
   }
 
   private Integer orbital(String path, JsonNode n) {
     if (n == null || !n.isTextual() || !orbitalIndex.containsKey(n.asText())) {
-      add(path, n == null ? null : n.asText(), (n == null ? "required" : "unknown orbital '" + n.asText() + "'") + "; known: " + String.join(", ", orbitalIndex.keySet()));
+      add(
+          path,
+          n == null ? null : n.asText(),
+          (n == null ? "required" : "unknown orbital '" + n.asText() + "'")
+              + "; known: "
+              + String.join(", ", orbitalIndex.keySet()));
       return null;
     }
     return orbitalIndex.get(n.asText());
@@ -193,10 +246,16 @@ final class CustomModelParser {
       Integer o = orbital(path + ".orbital", e.get("orbital"));
       Amplitude a = amplitude(path + ".value", e.get("value"));
       if (o != null && !seen.add(o)) {
-        add(path + ".orbital", e.get("orbital").asText(), "listed twice; give one onsite value per orbital");
+        add(
+            path + ".orbital",
+            e.get("orbital").asText(),
+            "listed twice; give one onsite value per orbital");
       } else if (a != null && a.im() != 0.0) {
         // A diagonal entry with an imaginary part makes the onsite block non-Hermitian.
-        add(path + ".value", e.get("value").toString(), "the onsite block must be Hermitian: an onsite energy must be real (put complex couplings between orbitals in hoppings with a zero cell offset)");
+        add(
+            path + ".value",
+            e.get("value").toString(),
+            "the onsite block must be Hermitian: an onsite energy must be real (put complex couplings between orbitals in hoppings with a zero cell offset)");
       } else if (o != null && a != null) {
         out.add(new Onsite(o, a));
       }
@@ -209,12 +268,18 @@ final class CustomModelParser {
     JsonNode n = lattice.get(key);
     if (n == null) {
       if (hopping) {
-        add("lattice.hoppings", null, "required: a list of {\"cell\": [...], \"from\": orbital, \"to\": orbital, \"amplitude\": ...}");
+        add(
+            "lattice.hoppings",
+            null,
+            "required: a list of {\"cell\": [...], \"from\": orbital, \"to\": orbital, \"amplitude\": ...}");
       }
       return out;
     }
     if (!n.isArray()) {
-      add("lattice." + key, n.toString(), "must be a list of {\"cell\": [...], \"from\": orbital, \"to\": orbital, \"amplitude\": ...}");
+      add(
+          "lattice." + key,
+          n.toString(),
+          "must be a list of {\"cell\": [...], \"from\": orbital, \"to\": orbital, \"amplitude\": ...}");
       return out;
     }
     for (int i = 0; i < n.size(); i++) {
@@ -228,7 +293,10 @@ final class CustomModelParser {
       List<Integer> cell = null;
       JsonNode c = t.get("cell");
       if (c == null || !c.isArray() || c.size() != d) {
-        add(path + ".cell", c == null ? null : c.toString(), "required: " + d + " integer cell offset(s), one per dimension");
+        add(
+            path + ".cell",
+            c == null ? null : c.toString(),
+            "required: " + d + " integer cell offset(s), one per dimension");
       } else {
         cell = new ArrayList<>();
         for (int k = 0; k < d; k++) {
@@ -245,9 +313,12 @@ final class CustomModelParser {
       Amplitude a = amplitude(path + ".amplitude", t.get("amplitude"));
       if (cell != null && from != null && to != null && a != null) {
         if (from.equals(to) && cell.stream().allMatch(x -> x == 0)) {
-          add(path, t.toString(), hopping
-              ? "joins an orbital to itself in the same cell: that is an onsite energy, give it in lattice.onsite"
-              : "pairs an orbital with itself in the same cell, which vanishes by Fermi statistics");
+          add(
+              path,
+              t.toString(),
+              hopping
+                  ? "joins an orbital to itself in the same cell: that is an onsite energy, give it in lattice.onsite"
+                  : "pairs an orbital with itself in the same cell, which vanishes by Fermi statistics");
           continue;
         }
         out.add(new Term(cell, from, to, a));
@@ -260,7 +331,10 @@ final class CustomModelParser {
     for (Iterator<String> it = n.fieldNames(); it.hasNext(); ) {
       String k = it.next();
       if (!allowed.contains(k)) {
-        add(path + "." + k, null, "unknown key; allowed: " + String.join(", ", new TreeSet<>(allowed)));
+        add(
+            path + "." + k,
+            null,
+            "unknown key; allowed: " + String.join(", ", new TreeSet<>(allowed)));
       }
     }
   }
@@ -268,17 +342,25 @@ final class CustomModelParser {
   /** A number, a parameter name, {"re", "im"} or {"scale", "re", "im"}. */
   private Amplitude amplitude(String path, JsonNode n) {
     if (n == null) {
-      add(path, null, "required: a number, a parameter name, {\"re\": x, \"im\": y} or {\"scale\": name, \"re\": x, \"im\": y}");
+      add(
+          path,
+          null,
+          "required: a number, a parameter name, {\"re\": x, \"im\": y} or {\"scale\": name, \"re\": x, \"im\": y}");
       return null;
     }
     if (n.isNumber()) {
-      return Double.isFinite(n.asDouble()) ? Amplitude.of(n.asDouble(), 0.0) : invalid(path, n, "must be finite");
+      return Double.isFinite(n.asDouble())
+          ? Amplitude.of(n.asDouble(), 0.0)
+          : invalid(path, n, "must be finite");
     }
     if (n.isTextual()) {
       return parameter(path, n.asText()) ? new Amplitude(n.asText(), 1.0, 0.0) : null;
     }
     if (!n.isObject()) {
-      return invalid(path, n, "must be a number, a parameter name or an object {\"re\", \"im\"} / {\"scale\", \"re\", \"im\"}");
+      return invalid(
+          path,
+          n,
+          "must be a number, a parameter name or an object {\"re\", \"im\"} / {\"scale\", \"re\", \"im\"}");
     }
     unknownKeys(path, n, Set.of("scale", "re", "im"));
     String scale = null;
@@ -310,7 +392,12 @@ final class CustomModelParser {
 
   private boolean parameter(String path, String name) {
     if (!parameterNames.contains(name)) {
-      add(path, name, "unknown parameter name; define it in \"parameters\" (defined: " + String.join(", ", new TreeSet<>(parameterNames)) + ")");
+      add(
+          path,
+          name,
+          "unknown parameter name; define it in \"parameters\" (defined: "
+              + String.join(", ", new TreeSet<>(parameterNames))
+              + ")");
       return false;
     }
     return true;
@@ -339,7 +426,14 @@ final class CustomModelParser {
           continue;
         }
         if (!has(klass, s)) {
-          add(path, null, "class " + klass + " has no " + e.getKey() + "; remove it or declare a class that has it");
+          add(
+              path,
+              null,
+              "class "
+                  + klass
+                  + " has no "
+                  + e.getKey()
+                  + "; remove it or declare a class that has it");
           continue;
         }
         SymmetryOperator op = operator(path, s, e.getValue(), perCell, klass);
@@ -353,8 +447,16 @@ final class CustomModelParser {
       // In Nambu form C = tau_x K is structural and supplied by the model when not declared.
       boolean supplied = bdg && s == Symmetry.PARTICLE_HOLE;
       if (has(klass, s) && !declared.containsKey(s) && !supplied) {
-        add("lattice.symmetries." + key, null, "class " + klass + " has " + key
-            + ": declare its operator ({\"matrix\": [[...]], \"antiunitary\": " + (s != Symmetry.CHIRAL) + "}) so that it can be checked");
+        add(
+            "lattice.symmetries." + key,
+            null,
+            "class "
+                + klass
+                + " has "
+                + key
+                + ": declare its operator ({\"matrix\": [[...]], \"antiunitary\": "
+                + (s != Symmetry.CHIRAL)
+                + "}) so that it can be checked");
       }
     }
     out.addAll(declared.values());
@@ -369,7 +471,8 @@ final class CustomModelParser {
     };
   }
 
-  private SymmetryOperator operator(String path, Symmetry s, JsonNode n, int perCell, SymmetryClass klass) {
+  private SymmetryOperator operator(
+      String path, Symmetry s, JsonNode n, int perCell, SymmetryClass klass) {
     if (!n.isObject()) {
       invalid(path, n, "must be an object {\"matrix\": [[...]], \"antiunitary\": true|false}");
       return null;
@@ -378,13 +481,26 @@ final class CustomModelParser {
     boolean antiunitary = s != Symmetry.CHIRAL;
     JsonNode a = n.get("antiunitary");
     if (a != null && (!a.isBoolean() || a.asBoolean() != antiunitary)) {
-      invalid(path + ".antiunitary", a, s == Symmetry.CHIRAL ? "S is unitary: false" : "T and C are antiunitary (U K): true");
+      invalid(
+          path + ".antiunitary",
+          a,
+          s == Symmetry.CHIRAL ? "S is unitary: false" : "T and C are antiunitary (U K): true");
       return null;
     }
     JsonNode m = n.get("matrix");
     if (m == null || !m.isArray() || m.size() != perCell) {
-      add(path + ".matrix", m == null ? null : m.toString(), "required: a " + perCell + " x " + perCell + " matrix (one row per orbital"
-          + (perCell % 2 == 0 && lattice.has("pairings") ? " in Nambu order: particles, then holes" : "") + ")");
+      add(
+          path + ".matrix",
+          m == null ? null : m.toString(),
+          "required: a "
+              + perCell
+              + " x "
+              + perCell
+              + " matrix (one row per orbital"
+              + (perCell % 2 == 0 && lattice.has("pairings")
+                  ? " in Nambu order: particles, then holes"
+                  : "")
+              + ")");
       return null;
     }
     double[][] re = new double[perCell][perCell];
@@ -413,14 +529,26 @@ final class CustomModelParser {
     try {
       op = SymmetryOperator.local(s, re, im);
     } catch (IllegalArgumentException e) {
-      invalid(path + ".matrix", m, "not unitary (U U^dagger = 1 within " + SymmetryOperator.UNITARITY_TOLERANCE + ")");
+      invalid(
+          path + ".matrix",
+          m,
+          "not unitary (U U^dagger = 1 within " + SymmetryOperator.UNITARITY_TOLERANCE + ")");
       return null;
     }
     if (s != Symmetry.CHIRAL) {
-      int expected = s == Symmetry.TIME_REVERSAL ? klass.timeReversalSquare() : klass.particleHoleSquare();
+      int expected =
+          s == Symmetry.TIME_REVERSAL ? klass.timeReversalSquare() : klass.particleHoleSquare();
       // (U K)^2 = U U*; the class fixes it to +1 or -1 (Altland & Zirnbauer, PRB 55, 1142 (1997)).
       if (!isSquare(re, im, expected)) {
-        invalid(path + ".matrix", m, "class " + klass + " needs " + (s == Symmetry.TIME_REVERSAL ? "T" : "C") + "^2 = U U* = " + (expected > 0 ? "+1" : "-1"));
+        invalid(
+            path + ".matrix",
+            m,
+            "class "
+                + klass
+                + " needs "
+                + (s == Symmetry.TIME_REVERSAL ? "T" : "C")
+                + "^2 = U U* = "
+                + (expected > 0 ? "+1" : "-1"));
         return null;
       }
     }
@@ -438,7 +566,8 @@ final class CustomModelParser {
           sr += re[i][k] * re[k][j] + im[i][k] * im[k][j];
           si += im[i][k] * re[k][j] - re[i][k] * im[k][j];
         }
-        if (Math.abs(sr - (i == j ? sign : 0)) > SQUARE_TOLERANCE || Math.abs(si) > SQUARE_TOLERANCE) {
+        if (Math.abs(sr - (i == j ? sign : 0)) > SQUARE_TOLERANCE
+            || Math.abs(si) > SQUARE_TOLERANCE) {
           return false;
         }
       }

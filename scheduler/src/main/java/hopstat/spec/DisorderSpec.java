@@ -13,7 +13,8 @@ import java.util.TreeMap;
  * @param strengthParameter the parameter name when the spec gave a name, else null
  * @param options the remaining keys of the entry, as text
  */
-public record DisorderSpec(String type, double strengthValue, String strengthParameter, Map<String, String> options) {
+public record DisorderSpec(
+    String type, double strengthValue, String strengthParameter, Map<String, String> options) {
   public DisorderSpec {
     Objects.requireNonNull(type, "type");
     if ((strengthParameter == null) == Double.isNaN(strengthValue)) {

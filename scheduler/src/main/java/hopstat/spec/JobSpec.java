@@ -16,8 +16,8 @@ import java.util.Optional;
  * @param description free text, may be empty
  * @param seed the job seed every random number derives from
  * @param model model name
- * @param parameters the parameters block in spec order, model defaults filled in after the
- *     user's entries
+ * @param parameters the parameters block in spec order, model defaults filled in after the user's
+ *     entries
  * @param disorder disorder terms in spec order
  * @param boundary boundary condition
  * @param observables observable names in spec order
@@ -43,9 +43,33 @@ public record JobSpec(
     CustomModelDefinition customModel) {
 
   /** A spec of a built-in model. */
-  public JobSpec(String name, String description, long seed, String model, List<ParameterSpec> parameters, List<DisorderSpec> disorder,
-      Boundary boundary, List<String> observables, int realisations, SamplingSpec sampling, SymmetryClass effectiveClass, String specHash) {
-    this(name, description, seed, model, parameters, disorder, boundary, observables, realisations, sampling, effectiveClass, specHash, null);
+  public JobSpec(
+      String name,
+      String description,
+      long seed,
+      String model,
+      List<ParameterSpec> parameters,
+      List<DisorderSpec> disorder,
+      Boundary boundary,
+      List<String> observables,
+      int realisations,
+      SamplingSpec sampling,
+      SymmetryClass effectiveClass,
+      String specHash) {
+    this(
+        name,
+        description,
+        seed,
+        model,
+        parameters,
+        disorder,
+        boundary,
+        observables,
+        realisations,
+        sampling,
+        effectiveClass,
+        specHash,
+        null);
   }
 
   public JobSpec {

@@ -44,25 +44,43 @@ public final class SpecParser {
 
   /** Linear size parameter. */
   public static final String SIZE = "L";
+
   /** Fermi energy parameter (default 0). */
   public static final String FERMI_ENERGY = "fermiEnergy";
+
   /** Model name that picks anderson-1d/2d/3d by the parameter {@code dim}. */
   public static final String ANDERSON = "anderson";
+
   /** Largest accepted linear size; larger samples need the linear-scaling methods. */
   public static final int MAX_LINEAR_SIZE = 4096;
+
   /** Largest number of realisations per point. */
   public static final int MAX_REALISATIONS = 10_000_000;
+
   /** Largest number of points in a range. */
   public static final int MAX_RANGE_STEPS = 100_000;
 
-  private static final Set<String> TOP_LEVEL = Set.of(
-      "name", "description", "seed", "model", "parameters", "disorder", "boundary", "observables", "realisations", "sampling", "lattice");
+  private static final Set<String> TOP_LEVEL =
+      Set.of(
+          "name",
+          "description",
+          "seed",
+          "model",
+          "parameters",
+          "disorder",
+          "boundary",
+          "observables",
+          "realisations",
+          "sampling",
+          "lattice");
   private static final Pattern NAME = Pattern.compile("[A-Za-z0-9][A-Za-z0-9._-]{0,79}");
-  private static final ObjectMapper STRICT = new ObjectMapper()
-      .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
-      .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
-      .enable(DeserializationFeature.USE_BIG_DECIMAL_FOR_FLOATS);
-  private static final ObjectMapper CANONICAL = new ObjectMapper().enable(SerializationFeature.ORDER_MAP_ENTRIES_BY_KEYS);
+  private static final ObjectMapper STRICT =
+      new ObjectMapper()
+          .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
+          .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
+          .enable(DeserializationFeature.USE_BIG_DECIMAL_FOR_FLOATS);
+  private static final ObjectMapper CANONICAL =
+      new ObjectMapper().enable(SerializationFeature.ORDER_MAP_ENTRIES_BY_KEYS);
 
   private SpecParser() {}
 
@@ -76,11 +94,21 @@ public final class SpecParser {
     try {
       root = STRICT.readTree(text);
     } catch (JsonProcessingException e) {
-      String where = e.getLocation() == null ? "" : " at line " + e.getLocation().getLineNr() + ", column " + e.getLocation().getColumnNr();
-      throw new InvalidInputException("", null, "not valid JSON" + where + ": " + e.getOriginalMessage());
+      String where =
+          e.getLocation() == null
+              ? ""
+              : " at line "
+                  + e.getLocation().getLineNr()
+                  + ", column "
+                  + e.getLocation().getColumnNr();
+      throw new InvalidInputException(
+          "", null, "not valid JSON" + where + ": " + e.getOriginalMessage());
     }
     if (root == null || !root.isObject()) {
-      throw new InvalidInputException("", root == null ? "empty" : root.getNodeType().toString().toLowerCase(Locale.ROOT), "a job spec is a JSON object");
+      throw new InvalidInputException(
+          "",
+          root == null ? "empty" : root.getNodeType().toString().toLowerCase(Locale.ROOT),
+          "a job spec is a JSON object");
     }
     return new SpecParser.Run(root).parse();
   }
@@ -109,12 +137,16 @@ public final class SpecParser {
       for (Iterator<String> it = root.fieldNames(); it.hasNext(); ) {
         String key = it.next();
         if (!TOP_LEVEL.contains(key)) {
-          problems.add(key, null, "unknown key; allowed: " + String.join(", ", new TreeSet<>(TOP_LEVEL)));
+          problems.add(
+              key, null, "unknown key; allowed: " + String.join(", ", new TreeSet<>(TOP_LEVEL)));
         }
       }
       String name = requiredText("name");
       if (name != null && !NAME.matcher(name).matches()) {
-        problems.add("name", name, "1-80 characters from letters, digits, '.', '_', '-', starting with a letter or digit");
+        problems.add(
+            "name",
+            name,
+            "1-80 characters from letters, digits, '.', '_', '-', starting with a letter or digit");
       }
       String description = root.has("description") ? optionalText("description") : "";
       Long seed = requiredLong("seed");
@@ -127,7 +159,8 @@ public final class SpecParser {
       if (modelName != null && !custom) {
         model = ModelCatalog.find(modelName).orElse(null);
         if (model == null) {
-          List<String> known = new ArrayList<>(ModelCatalog.all().stream().map(Model::name).toList());
+          List<String> known =
+              new ArrayList<>(ModelCatalog.all().stream().map(Model::name).toList());
           known.add(CustomModel.NAME);
           problems.add("model", modelName, "unknown model; known: " + String.join(", ", known));
         }
@@ -141,7 +174,8 @@ public final class SpecParser {
       CustomModelDefinition customModel = null;
       if (custom) {
         if (!root.has("lattice")) {
-          problems.add("lattice", null, "required by model custom: the unit cell, its terms and its class");
+          problems.add(
+              "lattice", null, "required by model custom: the unit cell, its terms and its class");
         } else {
           Set<String> defined = new LinkedHashSet<>();
           parameters.forEach(p -> defined.add(p.name()));
@@ -155,7 +189,10 @@ public final class SpecParser {
       if (root.has("sampling")) {
         sampling = parseSampling(observables);
         if (root.has("realisations")) {
-          problems.add("realisations", root.get("realisations").toString(), "omit it when \"sampling\" is given (sampling.maximum sets the largest count)");
+          problems.add(
+              "realisations",
+              root.get("realisations").toString(),
+              "omit it when \"sampling\" is given (sampling.maximum sets the largest count)");
         }
         realisations = sampling == null ? null : sampling.maximum();
       } else {
@@ -166,26 +203,50 @@ public final class SpecParser {
       if (model != null) {
         effective = effectiveClass(model, disorder);
         parameters = checkParameters(model, observables, disorder, parameters);
-        checkObservables(model, boundary, effective, observables, disorder.stream().map(DisorderSpec::type).toList());
+        checkObservables(
+            model,
+            boundary,
+            effective,
+            observables,
+            disorder.stream().map(DisorderSpec::type).toList());
         checkObservablesWithDisorder(observables, disorder, parameters);
       }
       problems.throwIfAny();
-      return new JobSpec(name, description, seed, modelName, parameters, disorder, boundary,
-          observables.stream().map(Observable::name).toList(), realisations, sampling, effective, canonicalHash(root), customModel);
+      return new JobSpec(
+          name,
+          description,
+          seed,
+          modelName,
+          parameters,
+          disorder,
+          boundary,
+          observables.stream().map(Observable::name).toList(),
+          realisations,
+          sampling,
+          effective,
+          canonicalHash(root),
+          customModel);
     }
 
     /**
-     * {@code "model": "anderson"} with the parameter {@code dim} (1, 2 or 3, one value) stands for the
-     * model {@code anderson-<dim>d}; {@code dim} stays a recorded parameter of the point.
+     * {@code "model": "anderson"} with the parameter {@code dim} (1, 2 or 3, one value) stands for
+     * the model {@code anderson-<dim>d}; {@code dim} stays a recorded parameter of the point.
      */
     private String andersonByDimension() {
       JsonNode dim = root.path("parameters").get("dim");
       if (dim == null) {
-        problems.add("parameters.dim", null, "required by model anderson: the dimension, 1, 2 or 3");
+        problems.add(
+            "parameters.dim", null, "required by model anderson: the dimension, 1, 2 or 3");
         return null;
       }
-      if (!dim.isNumber() || dim.asDouble() != Math.rint(dim.asDouble()) || dim.asInt() < 1 || dim.asInt() > 3) {
-        problems.add("parameters.dim", dim.toString(), "must be one number: 1, 2 or 3 (a grid over dimensions needs separate jobs)");
+      if (!dim.isNumber()
+          || dim.asDouble() != Math.rint(dim.asDouble())
+          || dim.asInt() < 1
+          || dim.asInt() > 3) {
+        problems.add(
+            "parameters.dim",
+            dim.toString(),
+            "must be one number: 1, 2 or 3 (a grid over dimensions needs separate jobs)");
         return null;
       }
       return ANDERSON + "-" + dim.asInt() + "d";
@@ -279,7 +340,12 @@ public final class SpecParser {
         }
         Observable obs = ObservableCatalog.find(o.asText()).orElse(null);
         if (obs == null) {
-          problems.add(path, o.asText(), "unknown observable; known: " + String.join(", ", ObservableCatalog.all().stream().map(Observable::name).toList()));
+          problems.add(
+              path,
+              o.asText(),
+              "unknown observable; known: "
+                  + String.join(
+                      ", ", ObservableCatalog.all().stream().map(Observable::name).toList()));
         } else if (!seen.add(obs.name())) {
           problems.add(path, o.asText(), "listed twice");
         } else {
@@ -293,11 +359,15 @@ public final class SpecParser {
       List<ParameterSpec> found = new ArrayList<>();
       JsonNode n = root.get("parameters");
       if (n == null) {
-        problems.add("parameters", null, "required: an object of parameter values (at least \"L\")");
+        problems.add(
+            "parameters", null, "required: an object of parameter values (at least \"L\")");
         return found;
       }
       if (!n.isObject()) {
-        problems.add("parameters", n.toString(), "must be an object mapping names to a number, a list of numbers or a range");
+        problems.add(
+            "parameters",
+            n.toString(),
+            "must be an object mapping names to a number, a list of numbers or a range");
         return found;
       }
       for (Iterator<Map.Entry<String, JsonNode>> it = n.fields(); it.hasNext(); ) {
@@ -335,7 +405,10 @@ public final class SpecParser {
       if (v.isObject()) {
         return parseRange(path, name, v);
       }
-      problems.add(path, v.toString(), "must be a number, a list of numbers or a range {\"from\": a, \"to\": b, \"steps\": n}");
+      problems.add(
+          path,
+          v.toString(),
+          "must be a number, a list of numbers or a range {\"from\": a, \"to\": b, \"steps\": n}");
       return null;
     }
 
@@ -353,7 +426,10 @@ public final class SpecParser {
       for (String k : List.of("from", "to")) {
         JsonNode x = v.get(k);
         if (x == null || !x.isNumber()) {
-          problems.add(path + "." + k, x == null ? null : x.toString(), x == null ? "required in a range" : "must be a number");
+          problems.add(
+              path + "." + k,
+              x == null ? null : x.toString(),
+              x == null ? "required in a range" : "must be a number");
           ok = false;
         } else if (k.equals("from")) {
           from = finite(path + ".from", x);
@@ -375,8 +451,18 @@ public final class SpecParser {
       java.math.BigDecimal b = v.get("to").decimalValue();
       List<Double> values = new ArrayList<>();
       for (int i = 0; i < steps; i++) {
-        double x = i == 0 ? from : i == steps - 1 ? to
-            : a.add(b.subtract(a).multiply(java.math.BigDecimal.valueOf(i)).divide(java.math.BigDecimal.valueOf(steps - 1), java.math.MathContext.DECIMAL64)).doubleValue();
+        double x =
+            i == 0
+                ? from
+                : i == steps - 1
+                    ? to
+                    : a.add(
+                            b.subtract(a)
+                                .multiply(java.math.BigDecimal.valueOf(i))
+                                .divide(
+                                    java.math.BigDecimal.valueOf(steps - 1),
+                                    java.math.MathContext.DECIMAL64))
+                        .doubleValue();
         values.add(x);
       }
       return new ParameterSpec(name, values, true);
@@ -400,7 +486,10 @@ public final class SpecParser {
         return found;
       }
       if (!n.isArray()) {
-        problems.add("disorder", n.toString(), "must be a list of {\"type\": ..., \"strength\": ...} objects");
+        problems.add(
+            "disorder",
+            n.toString(),
+            "must be a list of {\"type\": ..., \"strength\": ...} objects");
         return found;
       }
       for (int i = 0; i < n.size(); i++) {
@@ -413,18 +502,27 @@ public final class SpecParser {
         JsonNode type = d.get("type");
         DisorderKind kind = null;
         if (type == null || !type.isTextual()) {
-          problems.add(path + ".type", type == null ? null : type.toString(), "required: a disorder type name");
+          problems.add(
+              path + ".type",
+              type == null ? null : type.toString(),
+              "required: a disorder type name");
         } else {
           kind = DisorderCatalog.find(type.asText()).orElse(null);
           if (kind == null) {
-            problems.add(path + ".type", type.asText(), "unknown disorder type; known: " + String.join(", ", DisorderCatalog.all().stream().map(DisorderKind::name).toList()));
+            problems.add(
+                path + ".type",
+                type.asText(),
+                "unknown disorder type; known: "
+                    + String.join(
+                        ", ", DisorderCatalog.all().stream().map(DisorderKind::name).toList()));
           }
         }
         double value = Double.NaN;
         String parameter = null;
         JsonNode s = d.get("strength");
         if (s == null) {
-          problems.add(path + ".strength", null, "required: a number >= 0 or the name of a parameter");
+          problems.add(
+              path + ".strength", null, "required: a number >= 0 or the name of a parameter");
         } else if (s.isNumber()) {
           Double v = finite(path + ".strength", s);
           if (v != null && v < 0) {
@@ -433,24 +531,41 @@ public final class SpecParser {
             value = v;
             if (kind != null) {
               String text = s.toString();
-              kind.whyNotValidStrength(v).ifPresent(reason -> problems.add(path + ".strength", text, reason));
+              kind.whyNotValidStrength(v)
+                  .ifPresent(reason -> problems.add(path + ".strength", text, reason));
             }
           }
         } else if (s.isTextual()) {
           parameter = s.asText();
-          ParameterSpec p = parameters.stream().filter(q -> q.name().equals(s.asText())).findFirst().orElse(null);
+          ParameterSpec p =
+              parameters.stream().filter(q -> q.name().equals(s.asText())).findFirst().orElse(null);
           if (p == null) {
-            problems.add(path + ".strength", s.asText(), "names no entry of \"parameters\"; define it there or give a number");
+            problems.add(
+                path + ".strength",
+                s.asText(),
+                "names no entry of \"parameters\"; define it there or give a number");
             parameter = null;
           } else if (p.values().stream().anyMatch(x -> x < 0)) {
-            problems.add("parameters." + p.name(), p.values().toString(), "used as a disorder strength, so every value must be >= 0");
+            problems.add(
+                "parameters." + p.name(),
+                p.values().toString(),
+                "used as a disorder strength, so every value must be >= 0");
           } else if (kind != null) {
             DisorderKind k = kind;
-            p.values().stream().map(k::whyNotValidStrength).flatMap(Optional::stream).findFirst()
-                .ifPresent(reason -> problems.add("parameters." + p.name(), p.values().toString(), "used as the strength of " + path + ": " + reason));
+            p.values().stream()
+                .map(k::whyNotValidStrength)
+                .flatMap(Optional::stream)
+                .findFirst()
+                .ifPresent(
+                    reason ->
+                        problems.add(
+                            "parameters." + p.name(),
+                            p.values().toString(),
+                            "used as the strength of " + path + ": " + reason));
           }
         } else {
-          problems.add(path + ".strength", s.toString(), "must be a number >= 0 or the name of a parameter");
+          problems.add(
+              path + ".strength", s.toString(), "must be a number >= 0 or the name of a parameter");
         }
         Map<String, String> options = new LinkedHashMap<>();
         for (Iterator<Map.Entry<String, JsonNode>> it = d.fields(); it.hasNext(); ) {
@@ -461,17 +576,29 @@ public final class SpecParser {
           Set<String> allowed = kind.options().get(e.getKey());
           String optPath = path + "." + e.getKey();
           if (allowed == null) {
-            problems.add(optPath, null, "unknown option of " + kind.name() + "; allowed: "
-                + (kind.options().isEmpty() ? "none" : String.join(", ", new TreeSet<>(kind.options().keySet()))));
-          } else if (!e.getValue().isTextual() || (!allowed.isEmpty() && !allowed.contains(e.getValue().asText()))) {
-            problems.add(optPath, e.getValue().toString(), "allowed values: " + String.join(", ", new TreeSet<>(allowed)));
+            problems.add(
+                optPath,
+                null,
+                "unknown option of "
+                    + kind.name()
+                    + "; allowed: "
+                    + (kind.options().isEmpty()
+                        ? "none"
+                        : String.join(", ", new TreeSet<>(kind.options().keySet()))));
+          } else if (!e.getValue().isTextual()
+              || (!allowed.isEmpty() && !allowed.contains(e.getValue().asText()))) {
+            problems.add(
+                optPath,
+                e.getValue().toString(),
+                "allowed values: " + String.join(", ", new TreeSet<>(allowed)));
           } else {
             options.put(e.getKey(), e.getValue().asText());
           }
         }
         if (kind != null && model != null) {
           DisorderKind k = kind;
-          k.whyNotApplicable(model).ifPresent(reason -> problems.add(path + ".type", k.name(), reason));
+          k.whyNotApplicable(model)
+              .ifPresent(reason -> problems.add(path + ".type", k.name(), reason));
         }
         if (kind != null && (parameter != null || !Double.isNaN(value))) {
           found.add(new DisorderSpec(kind.name(), value, parameter, options));
@@ -496,13 +623,15 @@ public final class SpecParser {
     private SamplingSpec parseSampling(List<Observable> observables) {
       JsonNode n = root.get("sampling");
       if (!n.isObject()) {
-        problems.add("sampling", n.toString(), "must be an object with minimum, maximum, batch and targets");
+        problems.add(
+            "sampling", n.toString(), "must be an object with minimum, maximum, batch and targets");
         return null;
       }
       for (Iterator<String> it = n.fieldNames(); it.hasNext(); ) {
         String k = it.next();
         if (!Set.of("minimum", "maximum", "batch", "targets").contains(k)) {
-          problems.add("sampling." + k, null, "unknown key; allowed: batch, maximum, minimum, targets");
+          problems.add(
+              "sampling." + k, null, "unknown key; allowed: batch, maximum, minimum, targets");
         }
       }
       Integer batch = intAt(n.get("batch"), "sampling.batch", 1, MAX_REALISATIONS, true);
@@ -510,11 +639,17 @@ public final class SpecParser {
       Integer max = intAt(n.get("maximum"), "sampling.maximum", 1, MAX_REALISATIONS, true);
       boolean ok = batch != null && min != null && max != null;
       if (ok && (min < batch || min % batch != 0)) {
-        problems.add("sampling.minimum", min.toString(), "must be a positive multiple of sampling.batch (" + batch + ")");
+        problems.add(
+            "sampling.minimum",
+            min.toString(),
+            "must be a positive multiple of sampling.batch (" + batch + ")");
         ok = false;
       }
       if (ok && (max < min || max % batch != 0)) {
-        problems.add("sampling.maximum", max.toString(), "must be a multiple of sampling.batch and >= sampling.minimum");
+        problems.add(
+            "sampling.maximum",
+            max.toString(),
+            "must be a multiple of sampling.batch and >= sampling.minimum");
         ok = false;
       }
       Set<String> quantities = new LinkedHashSet<>();
@@ -530,11 +665,15 @@ public final class SpecParser {
       List<SamplingSpec.Target> targets = new ArrayList<>();
       JsonNode t = n.get("targets");
       if (t == null || !t.isArray() || t.isEmpty()) {
-        problems.add("sampling.targets", t == null ? null : t.toString(), "required: a non-empty list of targets such as {\"quantity\": \"bott\", \"stderr\": 0.01}");
+        problems.add(
+            "sampling.targets",
+            t == null ? null : t.toString(),
+            "required: a non-empty list of targets such as {\"quantity\": \"bott\", \"stderr\": 0.01}");
         ok = false;
       } else {
         for (int i = 0; i < t.size(); i++) {
-          SamplingSpec.Target target = parseTarget("sampling.targets[" + i + "]", t.get(i), quantities, integerQuantities);
+          SamplingSpec.Target target =
+              parseTarget("sampling.targets[" + i + "]", t.get(i), quantities, integerQuantities);
           if (target == null) {
             ok = false;
           } else {
@@ -545,17 +684,28 @@ public final class SpecParser {
       return ok ? new SamplingSpec(min, max, batch, targets) : null;
     }
 
-    private SamplingSpec.Target parseTarget(String path, JsonNode t, Set<String> quantities, Set<String> integerQuantities) {
+    private SamplingSpec.Target parseTarget(
+        String path, JsonNode t, Set<String> quantities, Set<String> integerQuantities) {
       if (!t.isObject()) {
-        problems.add(path, t.toString(), "must be an object: {\"quantity\": name, \"stderr\": x} or {\"quantity\": name, \"modalFractionHalfWidth\": x}");
+        problems.add(
+            path,
+            t.toString(),
+            "must be an object: {\"quantity\": name, \"stderr\": x} or {\"quantity\": name, \"modalFractionHalfWidth\": x}");
         return null;
       }
       JsonNode q = t.get("quantity");
       String quantity = null;
       if (q == null || !q.isTextual()) {
-        problems.add(path + ".quantity", q == null ? null : q.toString(), "required: the name of a measured quantity");
+        problems.add(
+            path + ".quantity",
+            q == null ? null : q.toString(),
+            "required: the name of a measured quantity");
       } else if (!quantities.contains(q.asText())) {
-        problems.add(path + ".quantity", q.asText(), "not produced by the requested observables; produced: " + String.join(", ", quantities));
+        problems.add(
+            path + ".quantity",
+            q.asText(),
+            "not produced by the requested observables; produced: "
+                + String.join(", ", quantities));
       } else {
         quantity = q.asText();
       }
@@ -565,10 +715,13 @@ public final class SpecParser {
       for (Iterator<String> it = t.fieldNames(); it.hasNext(); ) {
         String k = it.next();
         switch (k) {
-          case "quantity" -> { }
+          case "quantity" -> {}
           case "stderr", "modalFractionHalfWidth" -> {
             kinds++;
-            kind = k.equals("stderr") ? SamplingSpec.TargetKind.STDERR : SamplingSpec.TargetKind.MODAL_FRACTION_HALF_WIDTH;
+            kind =
+                k.equals("stderr")
+                    ? SamplingSpec.TargetKind.STDERR
+                    : SamplingSpec.TargetKind.MODAL_FRACTION_HALF_WIDTH;
             JsonNode x = t.get(k);
             if (!x.isNumber() || !(x.asDouble() > 0) || !Double.isFinite(x.asDouble())) {
               problems.add(path + "." + k, x.toString(), "must be a positive number");
@@ -576,18 +729,31 @@ public final class SpecParser {
               threshold = x.asDouble();
             }
           }
-          default -> problems.add(path + "." + k, null, "unknown key; allowed: quantity, stderr, modalFractionHalfWidth");
+          default ->
+              problems.add(
+                  path + "." + k,
+                  null,
+                  "unknown key; allowed: quantity, stderr, modalFractionHalfWidth");
         }
       }
       if (kinds != 1) {
-        problems.add(path, t.toString(), "give exactly one of \"stderr\" and \"modalFractionHalfWidth\"");
+        problems.add(
+            path, t.toString(), "give exactly one of \"stderr\" and \"modalFractionHalfWidth\"");
         return null;
       }
-      if (kind == SamplingSpec.TargetKind.MODAL_FRACTION_HALF_WIDTH && quantity != null && !integerQuantities.contains(quantity)) {
-        problems.add(path + ".quantity", quantity, "modalFractionHalfWidth needs an integer-valued invariant; those requested: " + String.join(", ", integerQuantities));
+      if (kind == SamplingSpec.TargetKind.MODAL_FRACTION_HALF_WIDTH
+          && quantity != null
+          && !integerQuantities.contains(quantity)) {
+        problems.add(
+            path + ".quantity",
+            quantity,
+            "modalFractionHalfWidth needs an integer-valued invariant; those requested: "
+                + String.join(", ", integerQuantities));
         return null;
       }
-      return quantity == null || threshold == null ? null : new SamplingSpec.Target(kind, quantity, threshold);
+      return quantity == null || threshold == null
+          ? null
+          : new SamplingSpec.Target(kind, quantity, threshold);
     }
 
     private SymmetryClass effectiveClass(Model model, List<DisorderSpec> disorder) {
@@ -604,7 +770,11 @@ public final class SpecParser {
     }
 
     /** Checks names, required parameters and L; appends model and observable defaults. */
-    private List<ParameterSpec> checkParameters(Model model, List<Observable> observables, List<DisorderSpec> disorder, List<ParameterSpec> given) {
+    private List<ParameterSpec> checkParameters(
+        Model model,
+        List<Observable> observables,
+        List<DisorderSpec> disorder,
+        List<ParameterSpec> given) {
       Map<String, ParameterInfo> known = new LinkedHashMap<>();
       for (ParameterInfo p : model.parameters()) {
         known.put(p.name(), p);
@@ -615,9 +785,14 @@ public final class SpecParser {
         }
       }
       known.put(SIZE, new ParameterInfo(SIZE, null, "linear size L in unit cells (integer >= 2)"));
-      known.put(FERMI_ENERGY, new ParameterInfo(FERMI_ENERGY, 0.0, "Fermi energy in the model's energy unit"));
+      known.put(
+          FERMI_ENERGY,
+          new ParameterInfo(FERMI_ENERGY, 0.0, "Fermi energy in the model's energy unit"));
       if (model.name().startsWith(ANDERSON + "-")) {
-        known.put("dim", new ParameterInfo("dim", (double) model.dimension(), "dimension of the anderson model (1, 2 or 3)"));
+        known.put(
+            "dim",
+            new ParameterInfo(
+                "dim", (double) model.dimension(), "dimension of the anderson model (1, 2 or 3)"));
       }
       Set<String> strengthNames = new LinkedHashSet<>();
       for (DisorderSpec d : disorder) {
@@ -630,14 +805,22 @@ public final class SpecParser {
         givenNames.add(p.name());
         if (!known.containsKey(p.name()) && !strengthNames.contains(p.name())) {
           List<String> allowed = new ArrayList<>(known.keySet());
-          problems.add("parameters." + p.name(), null, "not a parameter of model " + model.name()
-              + " or of the requested observables, and no disorder strength refers to it; allowed: " + String.join(", ", allowed));
+          problems.add(
+              "parameters." + p.name(),
+              null,
+              "not a parameter of model "
+                  + model.name()
+                  + " or of the requested observables, and no disorder strength refers to it; allowed: "
+                  + String.join(", ", allowed));
         }
         if (p.name().equals(SIZE)) {
           for (int i = 0; i < p.values().size(); i++) {
             double v = p.values().get(i);
             if (v != Math.rint(v) || v < 2 || v > MAX_LINEAR_SIZE) {
-              problems.add(p.swept() ? "parameters.L[" + i + "]" : "parameters.L", Double.toString(v), "must be an integer from 2 to " + MAX_LINEAR_SIZE);
+              problems.add(
+                  p.swept() ? "parameters.L[" + i + "]" : "parameters.L",
+                  Double.toString(v),
+                  "must be an integer from 2 to " + MAX_LINEAR_SIZE);
             }
           }
         }
@@ -648,7 +831,13 @@ public final class SpecParser {
           continue;
         }
         if (info.isRequired()) {
-          problems.add("parameters." + info.name(), null, "required by " + (info.name().equals(SIZE) ? "every job" : "model " + model.name()) + ": " + info.description());
+          problems.add(
+              "parameters." + info.name(),
+              null,
+              "required by "
+                  + (info.name().equals(SIZE) ? "every job" : "model " + model.name())
+                  + ": "
+                  + info.description());
         } else if (!Double.isNaN(info.defaultValue())) {
           // NaN marks an optional parameter with no value: it stays absent from the point.
           all.add(new ParameterSpec(info.name(), List.of(info.defaultValue()), false));
@@ -657,8 +846,12 @@ public final class SpecParser {
       return all;
     }
 
-    /** Each observable against each disorder kind ({@link Observable#whyNotApplicableWith}), e.g. vacancies' far-away levels. */
-    private void checkObservablesWithDisorder(List<Observable> observables, List<DisorderSpec> disorder, List<ParameterSpec> parameters) {
+    /**
+     * Each observable against each disorder kind ({@link Observable#whyNotApplicableWith}), e.g.
+     * vacancies' far-away levels.
+     */
+    private void checkObservablesWithDisorder(
+        List<Observable> observables, List<DisorderSpec> disorder, List<ParameterSpec> parameters) {
       Map<String, List<Double>> values = new LinkedHashMap<>();
       for (ParameterSpec p : parameters) {
         values.put(p.name(), p.values());
@@ -675,12 +868,19 @@ public final class SpecParser {
         Set<String> reported = new LinkedHashSet<>();
         for (DisorderSpec d : disorder) {
           DisorderKind kind = DisorderCatalog.find(d.type()).orElseThrow();
-          o.whyNotApplicableWith(kind, values).filter(reported::add).ifPresent(reason -> problems.add(path, o.name(), reason));
+          o.whyNotApplicableWith(kind, values)
+              .filter(reported::add)
+              .ifPresent(reason -> problems.add(path, o.name(), reason));
         }
       }
     }
 
-    private void checkObservables(Model model, Boundary boundary, SymmetryClass effective, List<Observable> observables, List<String> disorderTypes) {
+    private void checkObservables(
+        Model model,
+        Boundary boundary,
+        SymmetryClass effective,
+        List<Observable> observables,
+        List<String> disorderTypes) {
       JsonNode list = root.get("observables");
       for (Observable o : observables) {
         int index = 0;
@@ -690,16 +890,22 @@ public final class SpecParser {
           }
         }
         String path = "observables[" + index + "]";
-        o.whyNotApplicable(model, boundary, effective, disorderTypes).ifPresent(reason -> problems.add(path, o.name(), reason));
+        o.whyNotApplicable(model, boundary, effective, disorderTypes)
+            .ifPresent(reason -> problems.add(path, o.name(), reason));
       }
     }
   }
 
-  /** Canonical JSON text of a spec (keys sorted, no whitespace); what {@link JobSpec#specHash} hashes. */
+  /**
+   * Canonical JSON text of a spec (keys sorted, no whitespace); what {@link JobSpec#specHash}
+   * hashes.
+   */
   public static String canonicalText(String text) {
     try {
       JsonNode root = STRICT.readTree(text);
-      return new String(CANONICAL.writeValueAsBytes(CANONICAL.treeToValue(root, Object.class)), StandardCharsets.UTF_8);
+      return new String(
+          CANONICAL.writeValueAsBytes(CANONICAL.treeToValue(root, Object.class)),
+          StandardCharsets.UTF_8);
     } catch (JsonProcessingException e) {
       throw new InvalidInputException("", null, "not valid JSON: " + e.getOriginalMessage());
     }

@@ -14,7 +14,12 @@ class CommandsTest {
 
   @Test
   void checkPrintsThePlanMemoryAndAnEstimate() {
-    Path spec = aQwzSpec().sweep("W", 0, 1, 2).sizes(4, 6).realisations(10).writeTo(tmp.resolve("spec.json"));
+    Path spec =
+        aQwzSpec()
+            .sweep("W", 0, 1, 2)
+            .sizes(4, 6)
+            .realisations(10)
+            .writeTo(tmp.resolve("spec.json"));
     Cli.Outcome o = Cli.run("check", spec.toString(), "--threads", "2");
     assertThat(o.exitCode()).as(o.err()).isEqualTo(ExitCode.OK);
     assertThat(o.out())
@@ -39,12 +44,16 @@ class CommandsTest {
   void modelsListsEveryModelWithItsClass() {
     Cli.Outcome o = Cli.run("models");
     assertThat(o.exitCode()).isEqualTo(ExitCode.OK);
-    assertThat(o.out()).contains("qwz  (class A, d = 2)").contains("bott (periodic)").contains("onsite-box");
+    assertThat(o.out())
+        .contains("qwz  (class A, d = 2)")
+        .contains("bott (periodic)")
+        .contains("onsite-box");
   }
 
   @Test
   void everyCommandHasHelp() {
-    for (String command : new String[] {"check", "run", "resume", "status", "report", "models", "bench", "submit"}) {
+    for (String command :
+        new String[] {"check", "run", "resume", "status", "report", "models", "bench", "submit"}) {
       Cli.Outcome o = Cli.run(command, "--help");
       assertThat(o.exitCode()).as(command).isEqualTo(ExitCode.OK);
       assertThat(o.out()).as(command).contains("Usage: hopstat " + command);
@@ -65,7 +74,9 @@ class CommandsTest {
     assertThat(o.err()).contains("is not a hopstat run directory").contains("at hopstat.");
   }
 
-  /** The CLI's logging configuration must parse (a broken one prints a stack trace on every start). */
+  /**
+   * The CLI's logging configuration must parse (a broken one prints a stack trace on every start).
+   */
   @Test
   void loggingConfigurationIsWellFormedXml() throws Exception {
     try (var in = HopstatCommand.class.getResourceAsStream("/logback.xml")) {

@@ -25,7 +25,8 @@ class MobilityReportTest {
 
   @TempDir Path tmp;
 
-  private static final String SPEC = """
+  private static final String SPEC =
+      """
       {
         "name": "mobility-it",
         "seed": 7,
@@ -44,7 +45,8 @@ class MobilityReportTest {
     Path spec = tmp.resolve("spec.json");
     Files.writeString(spec, SPEC);
     Path out = tmp.resolve("run");
-    Cli.Outcome run = Cli.run("run", spec.toString(), "--out", out.toString(), "--threads", "2", "--quiet");
+    Cli.Outcome run =
+        Cli.run("run", spec.toString(), "--out", out.toString(), "--threads", "2", "--quiet");
     assertThat(run.exitCode()).as(run.err()).isEqualTo(ExitCode.OK);
 
     JsonNode m = new ObjectMapper().readTree(out.resolve("summary.json").toFile()).get("mobility");
@@ -70,21 +72,28 @@ class MobilityReportTest {
 
     List<JsonNode> gaps = new ArrayList<>();
     m.get("gaps").forEach(gaps::add);
-    // energy is not a grid axis, so only level statistics give a gap (the transfer matrix classifies E = 0)
-    assertThat(gaps).singleElement().satisfies(g -> {
-      assertThat(g.get("method").asText()).isEqualTo("LEVEL_RATIO");
-      assertThat(g.get("sizeLow").asDouble()).isEqualTo(4.0);
-      assertThat(g.get("sizeHigh").asDouble()).isEqualTo(6.0);
-    });
+    // energy is not a grid axis, so only level statistics give a gap (the transfer matrix
+    // classifies E = 0)
+    assertThat(gaps)
+        .singleElement()
+        .satisfies(
+            g -> {
+              assertThat(g.get("method").asText()).isEqualTo("LEVEL_RATIO");
+              assertThat(g.get("sizeLow").asDouble()).isEqualTo(4.0);
+              assertThat(g.get("sizeHigh").asDouble()).isEqualTo(6.0);
+            });
     for (JsonNode g : gaps) {
       assertThat(g.get("reference").asDouble()).isEqualTo(0.0);
       double half = g.get("halfWidth").asDouble();
       assertThat(half).isGreaterThanOrEqualTo(0);
-      assertThat(g.get("halfWidthCi95").get(0).asDouble()).isLessThanOrEqualTo(g.get("halfWidthCi95").get(1).asDouble());
+      assertThat(g.get("halfWidthCi95").get(0).asDouble())
+          .isLessThanOrEqualTo(g.get("halfWidthCi95").get(1).asDouble());
       assertThat(g.get("insideFraction").asDouble()).isBetween(0.0, 1.0);
     }
-    // W = 12 lies below the critical disorder W_c ≈ 16.5 of the 3D orthogonal Anderson model at E = 0
-    // (Slevin & Ohtsuki, PRL 82, 382 (1999)), so E = 0 is not localised: Λ must not fall with M there
+    // W = 12 lies below the critical disorder W_c ≈ 16.5 of the 3D orthogonal Anderson model at E =
+    // 0
+    // (Slevin & Ohtsuki, PRL 82, 382 (1999)), so E = 0 is not localised: Λ must not fall with M
+    // there
     // with a resolved interval.
     JsonNode largeLambda = null;
     for (JsonNode c : m.get("curves")) {
@@ -93,10 +102,13 @@ class MobilityReportTest {
       }
     }
     assertThat(largeLambda).isNotNull();
-    assertThat(largeLambda.get("points")).singleElement().satisfies(p -> {
-      assertThat(p.get("position").asDouble()).isEqualTo(0.0);
-      assertThat(p.get("state").asText()).isIn("extended", "undecided");
-    });
+    assertThat(largeLambda.get("points"))
+        .singleElement()
+        .satisfies(
+            p -> {
+              assertThat(p.get("position").asDouble()).isEqualTo(0.0);
+              assertThat(p.get("state").asText()).isIn("extended", "undecided");
+            });
 
     List<String> csv = Files.readAllLines(out.resolve("mobility.csv"));
     assertThat(csv.get(0)).startsWith("record,method,quantity,axis,fixed,criterion");
@@ -104,9 +116,12 @@ class MobilityReportTest {
 
     Cli.Outcome report = Cli.run("report", out.toString());
     assertThat(report.exitCode()).as(report.err()).isEqualTo(ExitCode.OK);
-    assertThat(Files.readString(out.resolve("report.html"))).contains("Mobility edges and mobility gap").contains("LEVEL_RATIO");
+    assertThat(Files.readString(out.resolve("report.html")))
+        .contains("Mobility edges and mobility gap")
+        .contains("LEVEL_RATIO");
     try (Stream<Path> figures = Files.list(out.resolve("figures"))) {
-      assertThat(figures.map(p -> p.getFileName().toString())).anyMatch(n -> n.startsWith("mobility-") && n.endsWith(".png"));
+      assertThat(figures.map(p -> p.getFileName().toString()))
+          .anyMatch(n -> n.startsWith("mobility-") && n.endsWith(".png"));
     }
   }
 }

@@ -7,17 +7,18 @@ import java.util.List;
 import java.util.function.Function;
 
 /**
- * A stand-in for Slurm's commands: records every command line and answers from a queue of
- * scripted outputs (or a function of the command line), so tests check exactly what hopstat asks
- * Slurm without a cluster.
+ * A stand-in for Slurm's commands: records every command line and answers from a queue of scripted
+ * outputs (or a function of the command line), so tests check exactly what hopstat asks Slurm
+ * without a cluster.
  */
 final class FakeSlurm implements CommandRunner {
 
   final List<List<String>> calls = new ArrayList<>();
   private final Deque<CommandOutput> scripted = new ArrayDeque<>();
-  private Function<List<String>, CommandOutput> fallback = argv -> {
-    throw new AssertionError("unexpected command " + argv);
-  };
+  private Function<List<String>, CommandOutput> fallback =
+      argv -> {
+        throw new AssertionError("unexpected command " + argv);
+      };
 
   static FakeSlurm create() {
     return new FakeSlurm();

@@ -24,17 +24,21 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * hopstat on a real Slurm: the shaded jar is submitted with {@code hopstat submit}, runs as array
- * elements under slurmd, and is watched and recovered with {@code status} and {@code resume},
- * all as separate processes as a user would run them. Needs a reachable Slurm whose jobs can read
- * this machine's /tmp (the single-node cluster of {@code .ci/slurm-up.sh}). With {@code CI=true}
- * an unreachable Slurm fails the tests; elsewhere they are skipped with the reason.
+ * elements under slurmd, and is watched and recovered with {@code status} and {@code resume}, all
+ * as separate processes as a user would run them. Needs a reachable Slurm whose jobs can read this
+ * machine's /tmp (the single-node cluster of {@code .ci/slurm-up.sh}). With {@code CI=true} an
+ * unreachable Slurm fails the tests; elsewhere they are skipped with the reason.
  *
  * <p>Run with {@code mvn -Pslurm verify} (failsafe, after the jar is packaged).
  */
 class SlurmClusterIT {
 
-  /** QWZ at L = 6, three disorder strengths, 8 realisations: ~1 s of work per shard, so Slurm's scheduling dominates. */
-  static final String SPEC = """
+  /**
+   * QWZ at L = 6, three disorder strengths, 8 realisations: ~1 s of work per shard, so Slurm's
+   * scheduling dominates.
+   */
+  static final String SPEC =
+      """
       {
         "name": "slurm-it-qwz",
         "description": "Cluster integration test: QWZ L=6 under onsite box disorder at three W.",
@@ -65,30 +69,41 @@ class SlurmClusterIT {
   static void needsSlurmAndTheJar() throws Exception {
     String reason = slurmProblem();
     if (reason != null) {
-      unavailable = "Slurm is not reachable (" + reason + "); start the test cluster with `bash .ci/slurm-up.sh`";
+      unavailable =
+          "Slurm is not reachable ("
+              + reason
+              + "); start the test cluster with `bash .ci/slurm-up.sh`";
       if ("true".equals(System.getenv("CI"))) {
         fail(unavailable);
       }
       return;
     }
     String jarProperty = System.getProperty("hopstat.jar");
-    assertThat(jarProperty).as("system property hopstat.jar (set by the slurm profile)").isNotNull();
+    assertThat(jarProperty)
+        .as("system property hopstat.jar (set by the slurm profile)")
+        .isNotNull();
     jar = Path.of(jarProperty).toAbsolutePath();
     assertThat(jar).as("the shaded jar; the slurm profile runs after package").isRegularFile();
     spec = tmp.resolve("spec.json");
     Files.writeString(spec, SPEC);
     local = tmp.resolve("local");
-    Result run = hopstat("run", spec.toString(), "--out", local.toString(), "--threads", "1", "--quiet");
+    Result run =
+        hopstat("run", spec.toString(), "--out", local.toString(), "--threads", "1", "--quiet");
     assertThat(run.exit()).as(run.err()).isZero();
   }
 
-  /** Outside CI, each test is reported as skipped with the reason (an abort in @BeforeAll would hide it). */
+  /**
+   * Outside CI, each test is reported as skipped with the reason (an abort in @BeforeAll would hide
+   * it).
+   */
   @BeforeEach
   void skipWithoutSlurm() {
     Assumptions.assumeTrue(unavailable == null, unavailable);
   }
 
-  /** Null if {@code scontrol ping} says the controller is up and a partition is up, else why not. */
+  /**
+   * Null if {@code scontrol ping} says the controller is up and a partition is up, else why not.
+   */
   static String slurmProblem() {
     try {
       Result ping = exec(List.of("scontrol", "ping"));
@@ -111,7 +126,16 @@ class SlurmClusterIT {
   @Test
   void clusterSummaryEqualsTheLocalRunByteForByteAndTheReportRunsAfterTheArray() throws Exception {
     Path dir = tmp.resolve("clean");
-    Result submit = hopstat("submit", spec.toString(), "--out", dir.toString(), "--tasks", "3", "--time", "00:05:00");
+    Result submit =
+        hopstat(
+            "submit",
+            spec.toString(),
+            "--out",
+            dir.toString(),
+            "--tasks",
+            "3",
+            "--time",
+            "00:05:00");
     assertThat(submit.exit()).as(submit.err()).isZero();
     JsonNode sub = cluster(dir).path("submissions").get(0);
     assertThat(sub.path("shards").toString()).isEqualTo("[0,1,2]");
@@ -121,21 +145,28 @@ class SlurmClusterIT {
 
     awaitEnded(report, dir);
     assertThat(state(report)).isEqualTo("COMPLETED");
-    assertThat(Files.readAllBytes(dir.resolve("summary.csv"))).isEqualTo(Files.readAllBytes(local.resolve("summary.csv")));
-    assertThat(Files.readAllBytes(dir.resolve("summary.json"))).isEqualTo(Files.readAllBytes(local.resolve("summary.json")));
+    assertThat(Files.readAllBytes(dir.resolve("summary.csv")))
+        .isEqualTo(Files.readAllBytes(local.resolve("summary.csv")));
+    assertThat(Files.readAllBytes(dir.resolve("summary.json")))
+        .isEqualTo(Files.readAllBytes(local.resolve("summary.json")));
     // afterany: the report job started no earlier than the last array element ended.
     LocalDateTime reportStart = LocalDateTime.parse(field(report, "StartTime").get(0));
     for (String end : field(array, "EndTime")) {
       assertThat(reportStart).isAfterOrEqualTo(LocalDateTime.parse(end));
     }
     try (Stream<Path> journals = Files.list(dir.resolve("journal"))) {
-      assertThat(journals.map(p -> p.getFileName().toString().substring(0, "shard-0000".length())).sorted().toList())
+      assertThat(
+              journals
+                  .map(p -> p.getFileName().toString().substring(0, "shard-0000".length()))
+                  .sorted()
+                  .toList())
           .containsExactly("shard-0000", "shard-0001", "shard-0002");
     }
     Result status = hopstat("status", dir.toString());
     assertThat(status.exit()).as(status.err()).isZero();
     assertThat(status.out()).contains("24 of 24 realisations journaled");
-    assertThat(rows(status.out())).allSatisfy(row -> assertThat(row).contains("8/8", "yes", "completed", "0:0"));
+    assertThat(rows(status.out()))
+        .allSatisfy(row -> assertThat(row).contains("8/8", "yes", "completed", "0:0"));
   }
 
   @Test
@@ -145,7 +176,16 @@ class SlurmClusterIT {
     Files.createDirectories(dir.resolve("cluster"));
     Path fault = dir.resolve("cluster/fault-shard-0001");
     Files.createFile(fault);
-    Result submit = hopstat("submit", spec.toString(), "--out", dir.toString(), "--tasks", "3", "--time", "00:05:00");
+    Result submit =
+        hopstat(
+            "submit",
+            spec.toString(),
+            "--out",
+            dir.toString(),
+            "--tasks",
+            "3",
+            "--time",
+            "00:05:00");
     assertThat(submit.exit()).as(submit.err()).isZero();
     JsonNode first = cluster(dir).path("submissions").get(0);
     String array = first.path("arrayJobId").asText();
@@ -162,14 +202,19 @@ class SlurmClusterIT {
     }
 
     awaitEnded(report, dir);
-    assertThat(state(report)).as("the report job runs although a shard failed (afterany)").isEqualTo("COMPLETED");
+    assertThat(state(report))
+        .as("the report job runs although a shard failed (afterany)")
+        .isEqualTo("COMPLETED");
     Result status = hopstat("status", dir.toString());
     assertThat(status.out()).contains("16 of 24 realisations journaled");
     String shard1 = rows(status.out()).get(1);
-    assertThat(shard1.split("\\s+")).containsSubsequence("1", "1", "0/8", "0", "no", array + "_1", "failed", "1:0", "NonZeroExitCode");
+    assertThat(shard1.split("\\s+"))
+        .containsSubsequence(
+            "1", "1", "0/8", "0", "no", array + "_1", "failed", "1:0", "NonZeroExitCode");
     assertThat(status.out()).contains("shard(s) [1] are incomplete");
     // The summary written after the failure shows the gap: no realisations at the shard's point.
-    assertThat(Files.readString(dir.resolve("summary.csv"))).isNotEqualTo(Files.readString(local.resolve("summary.csv")));
+    assertThat(Files.readString(dir.resolve("summary.csv")))
+        .isNotEqualTo(Files.readString(local.resolve("summary.csv")));
 
     Files.delete(fault);
     Result resume = hopstat("resume", dir.toString());
@@ -179,17 +224,24 @@ class SlurmClusterIT {
     assertThat(resume.out()).contains("array indices 1", "submission 2");
     awaitEnded(second.path("reportJobId").asText(), dir);
 
-    assertThat(Files.readAllBytes(dir.resolve("summary.csv"))).isEqualTo(Files.readAllBytes(local.resolve("summary.csv")));
-    assertThat(Files.readAllBytes(dir.resolve("summary.json"))).isEqualTo(Files.readAllBytes(local.resolve("summary.json")));
+    assertThat(Files.readAllBytes(dir.resolve("summary.csv")))
+        .isEqualTo(Files.readAllBytes(local.resolve("summary.csv")));
+    assertThat(Files.readAllBytes(dir.resolve("summary.json")))
+        .isEqualTo(Files.readAllBytes(local.resolve("summary.json")));
     Result after = hopstat("status", dir.toString());
-    assertThat(rows(after.out())).allSatisfy(row -> assertThat(row).contains("8/8", "yes", "completed"));
+    assertThat(rows(after.out()))
+        .allSatisfy(row -> assertThat(row).contains("8/8", "yes", "completed"));
     Result nothingLeft = hopstat("resume", dir.toString());
     assertThat(nothingLeft.exit()).isZero();
     assertThat(nothingLeft.out()).contains("nothing to resubmit");
   }
 
-  /** One point at L = 16 with 30 realisations: several seconds of work, long enough to cancel the shard midway. */
-  static final String SLOW_SPEC = """
+  /**
+   * One point at L = 16 with 30 realisations: several seconds of work, long enough to cancel the
+   * shard midway.
+   */
+  static final String SLOW_SPEC =
+      """
       {
         "name": "slurm-it-cancel",
         "seed": 777,
@@ -212,7 +264,8 @@ class SlurmClusterIT {
     JsonNode first = cluster(dir).path("submissions").get(0);
     String array = first.path("arrayJobId").asText();
 
-    // Cancel once the shard has journaled some realisations (scancel: SIGTERM, then SIGKILL after KillWait).
+    // Cancel once the shard has journaled some realisations (scancel: SIGTERM, then SIGKILL after
+    // KillWait).
     long deadline = System.nanoTime() + JOB_WAIT.toNanos();
     while (journalLines(dir) < 3) {
       if (System.nanoTime() > deadline || !isActive(array)) {
@@ -231,23 +284,40 @@ class SlurmClusterIT {
     assertThat(shard0).contains("cancelled", "no");
     Result resume = hopstat("resume", dir.toString());
     assertThat(resume.exit()).as(resume.err()).isZero();
-    assertThat(resume.out()).contains("shard 0: " + kept + " of 30 realisation(s) journaled; resubmitting");
+    assertThat(resume.out())
+        .contains("shard 0: " + kept + " of 30 realisation(s) journaled; resubmitting");
     awaitEnded(cluster(dir).path("submissions").get(1).path("reportJobId").asText(), dir);
 
     Path reference = tmp.resolve("slow-local");
-    Result run = hopstat("run", slowSpec.toString(), "--out", reference.toString(), "--threads", "2", "--quiet");
+    Result run =
+        hopstat(
+            "run", slowSpec.toString(), "--out", reference.toString(), "--threads", "2", "--quiet");
     assertThat(run.exit()).as(run.err()).isZero();
-    assertThat(Files.readAllBytes(dir.resolve("summary.csv"))).isEqualTo(Files.readAllBytes(reference.resolve("summary.csv")));
-    assertThat(Files.readAllBytes(dir.resolve("summary.json"))).isEqualTo(Files.readAllBytes(reference.resolve("summary.json")));
+    assertThat(Files.readAllBytes(dir.resolve("summary.csv")))
+        .isEqualTo(Files.readAllBytes(reference.resolve("summary.csv")));
+    assertThat(Files.readAllBytes(dir.resolve("summary.json")))
+        .isEqualTo(Files.readAllBytes(reference.resolve("summary.json")));
     assertThat(journalLines(dir)).as("nothing ran twice").isEqualTo(30);
   }
 
   @Test
   void sbatchRefusalIsExitOneWithSbatchsMessageAndOwnValidationIsExitTwo() throws Exception {
-    Result badPartition = hopstat("submit", spec.toString(), "--out", tmp.resolve("refused").toString(), "--tasks", "2", "--partition", "no-such-partition");
+    Result badPartition =
+        hopstat(
+            "submit",
+            spec.toString(),
+            "--out",
+            tmp.resolve("refused").toString(),
+            "--tasks",
+            "2",
+            "--partition",
+            "no-such-partition");
     assertThat(badPartition.exit()).isEqualTo(1);
-    assertThat(badPartition.err()).contains("sbatch refused the job", "invalid partition specified: no-such-partition");
-    Result badTime = hopstat("submit", spec.toString(), "--out", tmp.resolve("invalid").toString(), "--time", "abc");
+    assertThat(badPartition.err())
+        .contains("sbatch refused the job", "invalid partition specified: no-such-partition");
+    Result badTime =
+        hopstat(
+            "submit", spec.toString(), "--out", tmp.resolve("invalid").toString(), "--time", "abc");
     assertThat(badTime.exit()).isEqualTo(2);
     assertThat(badTime.err()).contains("--time", "abc");
     assertThat(tmp.resolve("invalid")).doesNotExist();
@@ -256,7 +326,12 @@ class SlurmClusterIT {
   // --- helpers -------------------------------------------------------------------------------
 
   static Result hopstat(String... args) throws IOException, InterruptedException {
-    List<String> argv = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-jar", jar.toString()));
+    List<String> argv =
+        new ArrayList<>(
+            List.of(
+                Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-jar",
+                jar.toString()));
     argv.addAll(List.of(args));
     return exec(argv);
   }
@@ -264,12 +339,21 @@ class SlurmClusterIT {
   static Result exec(List<String> argv) throws IOException, InterruptedException {
     Path out = Files.createTempFile(tmp == null ? null : tmp, "out", ".txt");
     Path err = Files.createTempFile(tmp == null ? null : tmp, "err", ".txt");
-    Process p = new ProcessBuilder(argv).redirectInput(new File("/dev/null")).redirectOutput(out.toFile()).redirectError(err.toFile()).start();
+    Process p =
+        new ProcessBuilder(argv)
+            .redirectInput(new File("/dev/null"))
+            .redirectOutput(out.toFile())
+            .redirectError(err.toFile())
+            .start();
     if (!p.waitFor(2, TimeUnit.MINUTES)) {
       p.destroyForcibly();
       fail("timed out: " + argv);
     }
-    Result r = new Result(p.exitValue(), Files.readString(out, StandardCharsets.UTF_8), Files.readString(err, StandardCharsets.UTF_8));
+    Result r =
+        new Result(
+            p.exitValue(),
+            Files.readString(out, StandardCharsets.UTF_8),
+            Files.readString(err, StandardCharsets.UTF_8));
     Files.delete(out);
     Files.delete(err);
     return r;
@@ -286,7 +370,9 @@ class SlurmClusterIT {
 
   static List<String> rows(String statusOut, int shards) {
     List<String> lines = statusOut.lines().toList();
-    int header = lines.indexOf(lines.stream().filter(l -> l.startsWith("shard  points")).findFirst().orElseThrow());
+    int header =
+        lines.indexOf(
+            lines.stream().filter(l -> l.startsWith("shard  points")).findFirst().orElseThrow());
     return lines.subList(header + 1, header + 1 + shards);
   }
 
@@ -312,7 +398,10 @@ class SlurmClusterIT {
     return JobPhase.of(state(jobId)).isActive();
   }
 
-  /** Values of one field over every line of {@code scontrol -o show job ID} (all elements of an array). */
+  /**
+   * Values of one field over every line of {@code scontrol -o show job ID} (all elements of an
+   * array).
+   */
   static List<String> field(String jobId, String name) throws IOException, InterruptedException {
     Result r = exec(List.of("scontrol", "-o", "show", "job", jobId));
     assertThat(r.exit()).as(r.err()).isZero();
@@ -337,7 +426,15 @@ class SlurmClusterIT {
             logs.append("\n--- ").append(f.getFileName()).append('\n').append(Files.readString(f));
           }
         }
-        fail("job " + jobId + " still " + state(jobId) + " after " + JOB_WAIT.toSeconds() + " s; job logs:" + logs);
+        fail(
+            "job "
+                + jobId
+                + " still "
+                + state(jobId)
+                + " after "
+                + JOB_WAIT.toSeconds()
+                + " s; job logs:"
+                + logs);
       }
       Thread.sleep(500);
     }

@@ -29,22 +29,41 @@ class KillAndResumeTest {
 
   @Test
   void killNineAtRandomMomentsLosesNothing() throws Exception {
-    Path spec = aQwzSpec().sweep("W", 0, 1, 2, 3, 4, 5).sizes(6, 8).realisations(16).writeTo(tmp.resolve("spec.json"));
+    Path spec =
+        aQwzSpec()
+            .sweep("W", 0, 1, 2, 3, 4, 5)
+            .sizes(6, 8)
+            .realisations(16)
+            .writeTo(tmp.resolve("spec.json"));
     int planned = 6 * 2 * 16;
     Path reference = tmp.resolve("reference");
-    assertThat(Cli.run("run", spec.toString(), "--out", reference.toString(), "--threads", "2", "--quiet").exitCode()).isEqualTo(ExitCode.OK);
+    assertThat(
+            Cli.run(
+                    "run",
+                    spec.toString(),
+                    "--out",
+                    reference.toString(),
+                    "--threads",
+                    "2",
+                    "--quiet")
+                .exitCode())
+        .isEqualTo(ExitCode.OK);
 
     Path out = tmp.resolve("killed");
     Random random = new Random(20261201L);
     int kills = 0;
     for (int attempt = 0; attempt < 4 && kills < 3; attempt++) {
-      List<String> args = attempt == 0
-          ? List.of("run", spec.toString(), "--out", out.toString(), "--threads", "2", "--quiet")
-          : List.of("resume", out.toString(), "--threads", "2", "--quiet");
+      List<String> args =
+          attempt == 0
+              ? List.of(
+                  "run", spec.toString(), "--out", out.toString(), "--threads", "2", "--quiet")
+              : List.of("resume", out.toString(), "--threads", "2", "--quiet");
       Process child = startChild(args);
       // Wait until some realisations are journaled, then a random extra delay, then SIGKILL.
       long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(60);
-      while (child.isAlive() && countRecords(out) < 5 + 20 * attempt && System.nanoTime() < deadline) {
+      while (child.isAlive()
+          && countRecords(out) < 5 + 20 * attempt
+          && System.nanoTime() < deadline) {
         Thread.sleep(20);
       }
       Thread.sleep(random.nextInt(400));
@@ -74,19 +93,25 @@ class KillAndResumeTest {
     }
     assertThat(duplicates).isEmpty();
     assertThat(ids).hasSize(planned);
-    assertThat(Files.readString(out.resolve("summary.json"))).isEqualTo(Files.readString(reference.resolve("summary.json")));
-    assertThat(Files.readString(out.resolve("summary.csv"))).isEqualTo(Files.readString(reference.resolve("summary.csv")));
+    assertThat(Files.readString(out.resolve("summary.json")))
+        .isEqualTo(Files.readString(reference.resolve("summary.json")));
+    assertThat(Files.readString(out.resolve("summary.csv")))
+        .isEqualTo(Files.readString(reference.resolve("summary.csv")));
   }
 
   private static Process startChild(List<String> args) throws IOException {
-    String classpath = System.getProperty("surefire.test.class.path", System.getProperty("java.class.path"));
+    String classpath =
+        System.getProperty("surefire.test.class.path", System.getProperty("java.class.path"));
     List<String> command = new ArrayList<>();
     command.add(Path.of(System.getProperty("java.home"), "bin", "java").toString());
     command.add("-cp");
     command.add(classpath);
     command.add("hopstat.cli.HopstatCommand");
     command.addAll(args);
-    return new ProcessBuilder(command).redirectOutput(ProcessBuilder.Redirect.DISCARD).redirectError(ProcessBuilder.Redirect.DISCARD).start();
+    return new ProcessBuilder(command)
+        .redirectOutput(ProcessBuilder.Redirect.DISCARD)
+        .redirectError(ProcessBuilder.Redirect.DISCARD)
+        .start();
   }
 
   private static long countRecords(Path run) throws IOException {

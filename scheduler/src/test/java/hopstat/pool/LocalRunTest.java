@@ -38,11 +38,35 @@ class LocalRunTest {
   @Test
   void oneAndTwoThreadsGiveIdenticalRecordsAndSummaries() throws IOException {
     Path spec = smallStudy().writeTo(tmp.resolve("spec.json"));
-    assertThat(Cli.run("run", spec.toString(), "--out", tmp.resolve("one").toString(), "--threads", "1", "--quiet").exitCode()).isEqualTo(ExitCode.OK);
-    assertThat(Cli.run("run", spec.toString(), "--out", tmp.resolve("two").toString(), "--threads", "2", "--quiet").exitCode()).isEqualTo(ExitCode.OK);
-    assertThat(valuesByTask(tmp.resolve("two"))).isEqualTo(valuesByTask(tmp.resolve("one"))).hasSize(40);
-    assertThat(Files.readString(tmp.resolve("two/summary.csv"))).isEqualTo(Files.readString(tmp.resolve("one/summary.csv")));
-    assertThat(Files.readString(tmp.resolve("two/summary.json"))).isEqualTo(Files.readString(tmp.resolve("one/summary.json")));
+    assertThat(
+            Cli.run(
+                    "run",
+                    spec.toString(),
+                    "--out",
+                    tmp.resolve("one").toString(),
+                    "--threads",
+                    "1",
+                    "--quiet")
+                .exitCode())
+        .isEqualTo(ExitCode.OK);
+    assertThat(
+            Cli.run(
+                    "run",
+                    spec.toString(),
+                    "--out",
+                    tmp.resolve("two").toString(),
+                    "--threads",
+                    "2",
+                    "--quiet")
+                .exitCode())
+        .isEqualTo(ExitCode.OK);
+    assertThat(valuesByTask(tmp.resolve("two")))
+        .isEqualTo(valuesByTask(tmp.resolve("one")))
+        .hasSize(40);
+    assertThat(Files.readString(tmp.resolve("two/summary.csv")))
+        .isEqualTo(Files.readString(tmp.resolve("one/summary.csv")));
+    assertThat(Files.readString(tmp.resolve("two/summary.json")))
+        .isEqualTo(Files.readString(tmp.resolve("one/summary.json")));
   }
 
   @Test
@@ -58,8 +82,11 @@ class LocalRunTest {
     assertThat(o.exitCode()).isEqualTo(ExitCode.OK);
     assertThat(Files.readString(out.resolve("summary.csv"))).isEqualTo(csv);
     assertThat(Files.readString(out.resolve("summary.json"))).isEqualTo(json);
-    // The original columns stay first and in order; later columns are only ever appended (pinned by results' golden files).
-    assertThat(csv.lines().findFirst().orElseThrow()).startsWith("W,L,observable,n,mean,stderr,ci95_low,ci95_high,std,median,min,max,failed,modal,modal_fraction,non_quantised,max_int_distance,");
+    // The original columns stay first and in order; later columns are only ever appended (pinned by
+    // results' golden files).
+    assertThat(csv.lines().findFirst().orElseThrow())
+        .startsWith(
+            "W,L,observable,n,mean,stderr,ci95_low,ci95_high,std,median,min,max,failed,modal,modal_fraction,non_quantised,max_int_distance,");
     assertThat(out.resolve("report.html")).exists();
     assertThat(out.resolve("results.h5")).exists();
     assertThat(csv.lines().count()).isEqualTo(1 + 8 * 4);
@@ -71,30 +98,50 @@ class LocalRunTest {
     Path whole = tmp.resolve("whole");
     Path cut = tmp.resolve("cut");
     Files.writeString(tmp.resolve("spec.json"), text);
-    Cli.run("run", tmp.resolve("spec.json").toString(), "--out", whole.toString(), "--threads", "2", "--quiet");
+    Cli.run(
+        "run",
+        tmp.resolve("spec.json").toString(),
+        "--out",
+        whole.toString(),
+        "--threads",
+        "2",
+        "--quiet");
 
-    RunDirectory dir = RunDirectory.create(cut, text, Map.of("specHash", SpecParser.parse(text).specHash()));
+    RunDirectory dir =
+        RunDirectory.create(cut, text, Map.of("specHash", SpecParser.parse(text).specHash()));
     StudyPlan plan = GridExpander.expand(SpecParser.parse(text));
     runUntilStopped(plan, dir, 13);
     assertThat(JournalReader.read(dir.journalDir()).records()).hasSizeBetween(13, 15);
     Cli.Outcome resumed = Cli.run("resume", cut.toString(), "--threads", "2", "--quiet");
     assertThat(resumed.exitCode()).as(resumed.err()).isEqualTo(ExitCode.OK);
-    assertThat(Files.readString(cut.resolve("summary.json"))).isEqualTo(Files.readString(whole.resolve("summary.json")));
+    assertThat(Files.readString(cut.resolve("summary.json")))
+        .isEqualTo(Files.readString(whole.resolve("summary.json")));
     assertThat(totalLines(cut)).isEqualTo(40);
   }
 
   @Test
-  void adaptiveSamplingStopsAtTheTargetAndIsReproducibleAcrossThreadsAndInterruptions() throws Exception {
+  void adaptiveSamplingStopsAtTheTargetAndIsReproducibleAcrossThreadsAndInterruptions()
+      throws Exception {
     // Points deep in a phase (W = 0, 0.5) have zero variance and stop at the minimum; points with
     // strong disorder keep sampling until the stderr target or the maximum.
-    String text = aQwzSpec().sweep("W", 0, 0.5, 7, 9).sizes(4).adaptive(4, 24, 4, "gap", 0.05).text();
+    String text =
+        aQwzSpec().sweep("W", 0, 0.5, 7, 9).sizes(4).adaptive(4, 24, 4, "gap", 0.05).text();
     Path a = tmp.resolve("a");
     Path b = tmp.resolve("b");
     Files.writeString(tmp.resolve("spec.json"), text);
-    Cli.run("run", tmp.resolve("spec.json").toString(), "--out", a.toString(), "--threads", "1", "--quiet");
-    RunDirectory dir = RunDirectory.create(b, text, Map.of("specHash", SpecParser.parse(text).specHash()));
+    Cli.run(
+        "run",
+        tmp.resolve("spec.json").toString(),
+        "--out",
+        a.toString(),
+        "--threads",
+        "1",
+        "--quiet");
+    RunDirectory dir =
+        RunDirectory.create(b, text, Map.of("specHash", SpecParser.parse(text).specHash()));
     runUntilStopped(GridExpander.expand(SpecParser.parse(text)), dir, 9);
-    assertThat(Cli.run("resume", b.toString(), "--threads", "2", "--quiet").exitCode()).isEqualTo(ExitCode.OK);
+    assertThat(Cli.run("resume", b.toString(), "--threads", "2", "--quiet").exitCode())
+        .isEqualTo(ExitCode.OK);
 
     Map<String, Map<String, Double>> ra = valuesByTask(a);
     assertThat(valuesByTask(b)).isEqualTo(ra);
@@ -106,21 +153,31 @@ class LocalRunTest {
     assertThat(perPoint.get(1)).isEqualTo(4L);
     assertThat(perPoint.get(3)).isGreaterThan(4L);
     assertThat(perPoint.values()).allSatisfy(n -> assertThat(n % 4).isZero());
-    assertThat(Files.readString(b.resolve("summary.json"))).isEqualTo(Files.readString(a.resolve("summary.json")));
+    assertThat(Files.readString(b.resolve("summary.json")))
+        .isEqualTo(Files.readString(a.resolve("summary.json")));
   }
 
   @Test
   void failingRealisationsAreIsolatedJournaledAndCounted() throws IOException {
     // E_F = 40 lies outside the spectrum (|E| <= 2 + |m| + W/2 here), so every realisation at
     // those points fails with a reason while the others complete.
-    Path spec = aQwzSpec().sweep("W", 0, 2).sweep("fermiEnergy", 0, 40).sizes(4).realisations(3).observables("gap").writeTo(tmp.resolve("spec.json"));
+    Path spec =
+        aQwzSpec()
+            .sweep("W", 0, 2)
+            .sweep("fermiEnergy", 0, 40)
+            .sizes(4)
+            .realisations(3)
+            .observables("gap")
+            .writeTo(tmp.resolve("spec.json"));
     Path out = tmp.resolve("run");
-    Cli.Outcome o = Cli.run("run", spec.toString(), "--out", out.toString(), "--threads", "2", "--quiet");
+    Cli.Outcome o =
+        Cli.run("run", spec.toString(), "--out", out.toString(), "--threads", "2", "--quiet");
     assertThat(o.exitCode()).isEqualTo(ExitCode.SOME_FAILED);
     assertThat(o.err()).contains("6 realisation(s) FAILED");
     String json = Files.readString(out.resolve("summary.json"));
     assertThat(json).contains("\"failed\" : 3").contains("lies outside the spectrum");
-    List<RealisationRecord> records = List.copyOf(JournalReader.read(out.resolve("journal")).records().values());
+    List<RealisationRecord> records =
+        List.copyOf(JournalReader.read(out.resolve("journal")).records().values());
     assertThat(records).hasSize(12);
     assertThat(records.stream().filter(r -> r.result().failure() != null)).hasSize(6);
   }
@@ -130,7 +187,8 @@ class LocalRunTest {
     Path spec = smallStudy().realisations(1).writeTo(tmp.resolve("spec.json"));
     Path out = tmp.resolve("run");
     Cli.run("run", spec.toString(), "--out", out.toString(), "--threads", "1", "--quiet");
-    Cli.Outcome again = Cli.run("run", spec.toString(), "--out", out.toString(), "--threads", "1", "--quiet");
+    Cli.Outcome again =
+        Cli.run("run", spec.toString(), "--out", out.toString(), "--threads", "1", "--quiet");
     assertThat(again.exitCode()).isEqualTo(ExitCode.RUNTIME_FAILURE);
     assertThat(again.err()).contains("already holds a run").contains("hopstat resume");
   }
@@ -142,20 +200,31 @@ class LocalRunTest {
     Cli.run("run", spec.toString(), "--out", out.toString(), "--threads", "2", "--quiet");
     Cli.Outcome o = Cli.run("status", out.toString());
     assertThat(o.exitCode()).isEqualTo(ExitCode.OK);
-    assertThat(o.out()).contains("40 of 40 realisations journaled (0 failed); no process is working on it").contains("bott (mean ± stderr)").contains("done/planned").contains("  5/5  0  ");
+    assertThat(o.out())
+        .contains("40 of 40 realisations journaled (0 failed); no process is working on it")
+        .contains("bott (mean ± stderr)")
+        .contains("done/planned")
+        .contains("  5/5  0  ");
   }
 
-  private static void runUntilStopped(StudyPlan plan, RunDirectory dir, int stopAfter) throws Exception {
+  private static void runUntilStopped(StudyPlan plan, RunDirectory dir, int stopAfter)
+      throws Exception {
     LocalPoolBackend backend = new LocalPoolBackend(Clock.systemUTC());
     AtomicInteger finished = new AtomicInteger();
-    RunResult r = backend.execute(plan, dir, new RunOptions(2, LinalgKind.NATIVE, "part", Shard.ALL, JournalWriter.DEFAULT_SYNC_INTERVAL_NANOS), new ProgressListener() {
-      @Override
-      public void finished(RealisationRecord record) {
-        if (finished.incrementAndGet() == stopAfter) {
-          backend.requestStop();
-        }
-      }
-    });
+    RunResult r =
+        backend.execute(
+            plan,
+            dir,
+            new RunOptions(
+                2, LinalgKind.NATIVE, "part", Shard.ALL, JournalWriter.DEFAULT_SYNC_INTERVAL_NANOS),
+            new ProgressListener() {
+              @Override
+              public void finished(RealisationRecord record) {
+                if (finished.incrementAndGet() == stopAfter) {
+                  backend.requestStop();
+                }
+              }
+            });
     assertThat(r.stoppedEarly()).isTrue();
   }
 

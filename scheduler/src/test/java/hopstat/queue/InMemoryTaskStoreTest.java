@@ -11,7 +11,19 @@ class InMemoryTaskStoreTest extends TaskStoreContractTest {
   }
 
   static RealisationRecord failed(hopstat.task.RealisationTask task, String reason) {
-    return new RealisationRecord(new hopstat.task.RealisationResult(task.taskId(), task.pointIndex(), task.realisationIndex(), task.seed(),
-        Outcome.FAILED, Map.of(), reason, 0), Map.of(), Map.of(), "test", "none");
+    return new RealisationRecord(
+        new hopstat.task.RealisationResult(
+            task.taskId(),
+            task.pointIndex(),
+            task.realisationIndex(),
+            task.seed(),
+            Outcome.FAILED,
+            Map.of(),
+            reason,
+            0),
+        Map.of(),
+        Map.of(),
+        "test",
+        "none");
   }
 }

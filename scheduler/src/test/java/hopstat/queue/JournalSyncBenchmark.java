@@ -31,12 +31,32 @@ public final class JournalSyncBenchmark {
         long start = System.nanoTime();
         try (JournalWriter w = new JournalWriter(file, interval)) {
           for (int i = 0; i < records; i++) {
-            RealisationResult r = new RealisationResult("p0-r" + i, 0, i, i, Outcome.DONE, Map.of("gap", 0.1 * i, "bott", -1.0), null, 0.01);
-            w.append(new RealisationRecord(r, Map.of("W", 1.0, "L", 8.0), Map.of("m", 1.0, "W", 1.0, "L", 8.0), "bench", "none"));
+            RealisationResult r =
+                new RealisationResult(
+                    "p0-r" + i,
+                    0,
+                    i,
+                    i,
+                    Outcome.DONE,
+                    Map.of("gap", 0.1 * i, "bott", -1.0),
+                    null,
+                    0.01);
+            w.append(
+                new RealisationRecord(
+                    r,
+                    Map.of("W", 1.0, "L", 8.0),
+                    Map.of("m", 1.0, "W", 1.0, "L", 8.0),
+                    "bench",
+                    "none"));
           }
         }
         double micros = (System.nanoTime() - start) / 1e3 / records;
-        System.out.printf(Locale.ROOT, "round %d, fsync %s: %.1f us per record%n", round, interval == 0 ? "every record" : "at most 1/s", micros);
+        System.out.printf(
+            Locale.ROOT,
+            "round %d, fsync %s: %.1f us per record%n",
+            round,
+            interval == 0 ? "every record" : "at most 1/s",
+            micros);
       }
     }
   }

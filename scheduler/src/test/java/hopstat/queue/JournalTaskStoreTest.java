@@ -17,7 +17,11 @@ class JournalTaskStoreTest extends TaskStoreContractTest {
 
   @Override
   TaskStore newStore(Map<String, RealisationRecord> preloaded) throws IOException {
-    return new JournalTaskStore(clock, InMemoryTaskStoreTest::failed, preloaded, new JournalWriter(dir.resolve("part-" + (++files) + ".jsonl"), 0));
+    return new JournalTaskStore(
+        clock,
+        InMemoryTaskStoreTest::failed,
+        preloaded,
+        new JournalWriter(dir.resolve("part-" + (++files) + ".jsonl"), 0));
   }
 
   /** What the file-backed store finished is on disk: a new session sees it as finished. */

@@ -29,8 +29,11 @@ class JournalTest {
     values.put("bott", -1.0000000000000002);
     values.put("tiny", Double.MIN_VALUE);
     values.put("huge", -Double.MAX_VALUE);
-    RealisationResult r = new RealisationResult("p7-r3", 7, 3, Long.MIN_VALUE, Outcome.DONE, values, null, 1.25e-3);
-    RealisationRecord rec = new RealisationRecord(r, Map.of("W", 1.5, "L", 8.0), Map.of("m", 1.0), "0.1 (abc)", "native");
+    RealisationResult r =
+        new RealisationResult("p7-r3", 7, 3, Long.MIN_VALUE, Outcome.DONE, values, null, 1.25e-3);
+    RealisationRecord rec =
+        new RealisationRecord(
+            r, Map.of("W", 1.5, "L", 8.0), Map.of("m", 1.0), "0.1 (abc)", "native");
     RealisationRecord back = JournalCodec.decode(JournalCodec.encode(rec));
     assertThat(back).isEqualTo(rec);
     assertThat(back.result().values().get("gap")).isEqualTo(0.30000000000000004);
@@ -38,7 +41,9 @@ class JournalTest {
 
   @Test
   void failureTextWithQuotesAndUnicodeRoundTrips() {
-    RealisationResult r = new RealisationResult("p0-r0", 0, 0, 5, Outcome.FAILED, Map.of(), "bad \"thing\", ξ → ∞\nnext", 0);
+    RealisationResult r =
+        new RealisationResult(
+            "p0-r0", 0, 0, 5, Outcome.FAILED, Map.of(), "bad \"thing\", ξ → ∞\nnext", 0);
     RealisationRecord rec = new RealisationRecord(r, Map.of(), Map.of(), "t", "l");
     assertThat(JournalCodec.decode(JournalCodec.encode(rec))).isEqualTo(rec);
     assertThat(JournalCodec.encode(rec)).doesNotContain("\n");
@@ -49,7 +54,8 @@ class JournalTest {
     String line = JournalCodec.encode(aRecord(aTask(0), Outcome.DONE));
     String tampered = line.replace("\"gap\":0.5", "\"gap\":0.6");
     assertThat(tampered).isNotEqualTo(line);
-    assertThatThrownBy(() -> JournalCodec.decode(tampered)).hasMessageContaining("checksum mismatch");
+    assertThatThrownBy(() -> JournalCodec.decode(tampered))
+        .hasMessageContaining("checksum mismatch");
   }
 
   @Test
@@ -57,7 +63,8 @@ class JournalTest {
     Path file = writeJournal("part-0001.jsonl", 3);
     String whole = Files.readString(file);
     String[] lines = whole.split("\n");
-    Files.writeString(file, lines[0] + "\n" + lines[1] + "\n" + lines[2].substring(0, lines[2].length() / 2));
+    Files.writeString(
+        file, lines[0] + "\n" + lines[1] + "\n" + lines[2].substring(0, lines[2].length() / 2));
     JournalReader.Contents c = JournalReader.read(dir);
     assertThat(c.records()).containsOnlyKeys("p0-r0", "p0-r1");
     assertThat(c.tornLines()).singleElement().asString().contains("part-0001.jsonl");
@@ -100,13 +107,16 @@ class JournalTest {
   @Test
   void writerNeverReopensAnExistingFile() throws IOException {
     writeJournal("part-0001.jsonl", 1);
-    assertThatThrownBy(() -> new JournalWriter(dir.resolve("part-0001.jsonl"), 0)).isInstanceOf(java.nio.file.FileAlreadyExistsException.class);
+    assertThatThrownBy(() -> new JournalWriter(dir.resolve("part-0001.jsonl"), 0))
+        .isInstanceOf(java.nio.file.FileAlreadyExistsException.class);
   }
 
   @Test
   void eachLineIsOneCompleteRecord() throws IOException {
     Path file = writeJournal("part-0001.jsonl", 4);
-    assertThat(Files.readAllLines(file, StandardCharsets.UTF_8)).hasSize(4).allSatisfy(l -> assertThat(l).startsWith("{\"format\":1,").endsWith("\"}"));
+    assertThat(Files.readAllLines(file, StandardCharsets.UTF_8))
+        .hasSize(4)
+        .allSatisfy(l -> assertThat(l).startsWith("{\"format\":1,").endsWith("\"}"));
   }
 
   private Path writeJournal(String name, int records) throws IOException {

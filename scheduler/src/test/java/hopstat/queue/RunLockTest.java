@@ -30,7 +30,8 @@ class RunLockTest {
   void lockFileLeftByADeadProcessIsTakenOver() throws IOException {
     Files.writeString(dir.resolve("lock"), "pid 999999 on elsewhere since 2020-01-01T00:00:00Z\n");
     try (RunLock lock = RunLock.acquire(dir)) {
-      assertThat(Files.readString(dir.resolve("lock"))).contains("pid " + ProcessHandle.current().pid());
+      assertThat(Files.readString(dir.resolve("lock")))
+          .contains("pid " + ProcessHandle.current().pid());
     }
   }
 }

@@ -24,14 +24,13 @@ import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.atomic.AtomicReference;
 import org.junit.jupiter.api.Test;
 
-/**
- * The contract every {@link TaskStore} keeps. Each implementation has a small subclass.
- */
+/** The contract every {@link TaskStore} keeps. Each implementation has a small subclass. */
 abstract class TaskStoreContractTest {
 
   /** A clock the test moves by hand. */
   static final class ManualClock extends Clock {
-    final AtomicReference<Instant> now = new AtomicReference<>(Instant.parse("2026-01-01T00:00:00Z"));
+    final AtomicReference<Instant> now =
+        new AtomicReference<>(Instant.parse("2026-01-01T00:00:00Z"));
 
     void advance(Duration d) {
       now.updateAndGet(t -> t.plus(d));
@@ -58,15 +57,32 @@ abstract class TaskStoreContractTest {
   /** A fresh store; {@code preloaded} are records finished in an earlier session. */
   abstract TaskStore newStore(Map<String, RealisationRecord> preloaded) throws IOException;
 
-  static final PointSpec POINT = new PointSpec("qwz", new ParameterValues(Map.of("m", 1.0, "L", 4.0)), 4, Boundary.PERIODIC, 0.0, List.<DisorderTerm>of(), List.of("gap"));
+  static final PointSpec POINT =
+      new PointSpec(
+          "qwz",
+          new ParameterValues(Map.of("m", 1.0, "L", 4.0)),
+          4,
+          Boundary.PERIODIC,
+          0.0,
+          List.<DisorderTerm>of(),
+          List.of("gap"));
 
   static RealisationTask aTask(int realisation) {
-    return new RealisationTask(RealisationTask.idOf(0, realisation), 0, realisation, 1000L + realisation, POINT);
+    return new RealisationTask(
+        RealisationTask.idOf(0, realisation), 0, realisation, 1000L + realisation, POINT);
   }
 
   static RealisationRecord aRecord(RealisationTask t, Outcome outcome) {
-    RealisationResult r = new RealisationResult(t.taskId(), t.pointIndex(), t.realisationIndex(), t.seed(), outcome,
-        outcome == Outcome.DONE ? Map.of("gap", 0.5 + t.realisationIndex()) : Map.of(), outcome == Outcome.DONE ? null : "boom", 0.01);
+    RealisationResult r =
+        new RealisationResult(
+            t.taskId(),
+            t.pointIndex(),
+            t.realisationIndex(),
+            t.seed(),
+            outcome,
+            outcome == Outcome.DONE ? Map.of("gap", 0.5 + t.realisationIndex()) : Map.of(),
+            outcome == Outcome.DONE ? null : "boom",
+            0.01);
     return new RealisationRecord(r, Map.of("L", 4.0), Map.of("m", 1.0, "L", 4.0), "test", "none");
   }
 
@@ -88,9 +104,13 @@ abstract class TaskStoreContractTest {
       assertThat(c1.task().taskId()).isEqualTo("p0-r1");
       assertThat(store.complete(c0, aRecord(c0.task(), Outcome.DONE))).isTrue();
       assertThat(store.complete(c1, aRecord(c1.task(), Outcome.FAILED))).isTrue();
-      assertThat(store.counts()).containsEntry(TaskState.DONE, 1).containsEntry(TaskState.FAILED, 1).containsEntry(TaskState.PENDING, 1);
+      assertThat(store.counts())
+          .containsEntry(TaskState.DONE, 1)
+          .containsEntry(TaskState.FAILED, 1)
+          .containsEntry(TaskState.PENDING, 1);
       assertThat(store.finished()).hasSize(2);
-      assertThat(store.view("p0-r0").orElseThrow().history()).extracting(TaskView.Transition::state)
+      assertThat(store.view("p0-r0").orElseThrow().history())
+          .extracting(TaskView.Transition::state)
           .containsExactly(TaskState.PENDING, TaskState.RUNNING, TaskState.DONE);
     }
   }
@@ -153,7 +173,9 @@ abstract class TaskStoreContractTest {
         store.sweep(clock.instant().minus(Duration.ofMinutes(10)), 2);
       }
       assertThat(store.view("p0-r0").orElseThrow().state()).isEqualTo(TaskState.FAILED);
-      assertThat(store.finished()).singleElement().satisfies(r -> assertThat(r.result().failure()).contains("worker lost 2 time(s)"));
+      assertThat(store.finished())
+          .singleElement()
+          .satisfies(r -> assertThat(r.result().failure()).contains("worker lost 2 time(s)"));
     }
   }
 
@@ -162,7 +184,8 @@ abstract class TaskStoreContractTest {
     try (TaskStore store = newStore(Map.of())) {
       store.add(tasks(2));
       Claim c = store.claim("w").orElseThrow();
-      assertThatThrownBy(() -> store.complete(c, aRecord(aTask(1), Outcome.DONE))).isInstanceOf(IllegalArgumentException.class);
+      assertThatThrownBy(() -> store.complete(c, aRecord(aTask(1), Outcome.DONE)))
+          .isInstanceOf(IllegalArgumentException.class);
     }
   }
 
@@ -175,19 +198,21 @@ abstract class TaskStoreContractTest {
       List<String> duplicates = java.util.Collections.synchronizedList(new ArrayList<>());
       for (int w = 0; w < 4; w++) {
         String id = "w" + w;
-        Thread t = new Thread(() -> {
-          Optional<Claim> c;
-          while ((c = store.claim(id)).isPresent()) {
-            if (claimedBy.putIfAbsent(c.get().task().taskId(), id) != null) {
-              duplicates.add(c.get().task().taskId());
-            }
-            try {
-              store.complete(c.get(), aRecord(c.get().task(), Outcome.DONE));
-            } catch (IOException e) {
-              throw new java.io.UncheckedIOException(e);
-            }
-          }
-        });
+        Thread t =
+            new Thread(
+                () -> {
+                  Optional<Claim> c;
+                  while ((c = store.claim(id)).isPresent()) {
+                    if (claimedBy.putIfAbsent(c.get().task().taskId(), id) != null) {
+                      duplicates.add(c.get().task().taskId());
+                    }
+                    try {
+                      store.complete(c.get(), aRecord(c.get().task(), Outcome.DONE));
+                    } catch (IOException e) {
+                      throw new java.io.UncheckedIOException(e);
+                    }
+                  }
+                });
         threads.add(t);
         t.start();
       }
@@ -202,8 +227,10 @@ abstract class TaskStoreContractTest {
 
   @Test
   void transitionTableRejectsIllegalMoves() {
-    assertThatThrownBy(() -> TaskState.DONE.checkMoveTo(TaskState.RUNNING)).isInstanceOf(IllegalStateException.class);
-    assertThatThrownBy(() -> TaskState.PENDING.checkMoveTo(TaskState.DONE)).isInstanceOf(IllegalStateException.class);
+    assertThatThrownBy(() -> TaskState.DONE.checkMoveTo(TaskState.RUNNING))
+        .isInstanceOf(IllegalStateException.class);
+    assertThatThrownBy(() -> TaskState.PENDING.checkMoveTo(TaskState.DONE))
+        .isInstanceOf(IllegalStateException.class);
     assertThat(TaskState.RUNNING.canMoveTo(TaskState.PENDING)).isTrue();
   }
 }

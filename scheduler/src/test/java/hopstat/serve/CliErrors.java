@@ -18,13 +18,28 @@ final class CliErrors {
 
   private CliErrors() {}
 
-  /** The stderr lines of {@code hopstat run SPEC --out DIR} for a spec that fails validation (exit 2). */
+  /**
+   * The stderr lines of {@code hopstat run SPEC --out DIR} for a spec that fails validation (exit
+   * 2).
+   */
   static List<String> runErrorLines(Path scratch, String specText) throws IOException {
-    Path spec = Files.writeString(scratch.resolve("cli-bad.json"), specText, StandardCharsets.UTF_8);
+    Path spec =
+        Files.writeString(scratch.resolve("cli-bad.json"), specText, StandardCharsets.UTF_8);
     ByteArrayOutputStream out = new ByteArrayOutputStream();
     ByteArrayOutputStream err = new ByteArrayOutputStream();
-    int code = HopstatCommand.execute(new String[] {"run", spec.toString(), "--out", scratch.resolve("cli-out").toString(), "--quiet", "--linalg", "java"},
-        new PrintStream(out, true, StandardCharsets.UTF_8), new PrintStream(err, true, StandardCharsets.UTF_8));
+    int code =
+        HopstatCommand.execute(
+            new String[] {
+              "run",
+              spec.toString(),
+              "--out",
+              scratch.resolve("cli-out").toString(),
+              "--quiet",
+              "--linalg",
+              "java"
+            },
+            new PrintStream(out, true, StandardCharsets.UTF_8),
+            new PrintStream(err, true, StandardCharsets.UTF_8));
     assertThat(code).isEqualTo(ExitCode.BAD_INPUT);
     return Arrays.asList(err.toString(StandardCharsets.UTF_8).split("\n"));
   }

@@ -57,25 +57,37 @@ class JobStoreTest {
     JobRecord back = again.find(a.id()).orElseThrow();
     assertThat(back.state()).isEqualTo(JobState.FAILED);
     assertThat(back.message()).isEqualTo("IOException: disk full");
-    assertThat(back.history()).extracting(JobEvent::at).containsExactly(
-        Instant.parse("2026-03-01T12:00:00Z"), Instant.parse("2026-03-01T12:00:01Z"), Instant.parse("2026-03-01T12:00:02Z"));
-    JsonNode onDisk = ServeFixtures.JSON.readTree(root.resolve("jobs").resolve(a.id()).resolve("job.json").toFile());
+    assertThat(back.history())
+        .extracting(JobEvent::at)
+        .containsExactly(
+            Instant.parse("2026-03-01T12:00:00Z"),
+            Instant.parse("2026-03-01T12:00:01Z"),
+            Instant.parse("2026-03-01T12:00:02Z"));
+    JsonNode onDisk =
+        ServeFixtures.JSON.readTree(
+            root.resolve("jobs").resolve(a.id()).resolve("job.json").toFile());
     assertThat(onDisk.path("format").asInt()).isEqualTo(JobRecord.FORMAT);
-    assertThat(Files.readString(root.resolve("jobs").resolve(a.id()).resolve("run").resolve("spec.json"))).isEqualTo(ServeFixtures.smallQwz("alpha", 2));
+    assertThat(
+            Files.readString(
+                root.resolve("jobs").resolve(a.id()).resolve("run").resolve("spec.json")))
+        .isEqualTo(ServeFixtures.smallQwz("alpha", 2));
     // no temp files are left behind by the atomic writes
     try (Stream<Path> all = Files.walk(root)) {
       assertThat(all.map(p -> p.getFileName().toString())).noneMatch(n -> n.endsWith(".tmp"));
     }
     // the next submission continues the numbering
-    assertThat(again.create(ServeFixtures.smallQwz("beta", 2), "beta", 0, "api", META, null).id()).isEqualTo("000002-beta");
+    assertThat(again.create(ServeFixtures.smallQwz("beta", 2), "beta", 0, "api", META, null).id())
+        .isEqualTo("000002-beta");
   }
 
   @Test
   void nextQueuedIsHighestPriorityThenFirstSubmitted() throws IOException {
     JobStore store = JobStore.open(root, new StepClock());
     JobRecord low = store.create(ServeFixtures.smallQwz("low", 2), "low", -1, "api", META, null);
-    JobRecord first = store.create(ServeFixtures.smallQwz("first", 2), "first", 3, "api", META, null);
-    JobRecord second = store.create(ServeFixtures.smallQwz("second", 2), "second", 3, "api", META, null);
+    JobRecord first =
+        store.create(ServeFixtures.smallQwz("first", 2), "first", 3, "api", META, null);
+    JobRecord second =
+        store.create(ServeFixtures.smallQwz("second", 2), "second", 3, "api", META, null);
     assertThat(store.nextQueued().orElseThrow().id()).isEqualTo(first.id());
     store.transition(first.id(), JobState.PAUSED, "held", null);
     assertThat(store.nextQueued().orElseThrow().id()).isEqualTo(second.id());
@@ -86,8 +98,11 @@ class JobStoreTest {
   @Test
   void aStagedSubmissionIsCommittedOnlyIfItConsumedItsInboxFile() throws IOException {
     JobStore store = JobStore.open(root, new StepClock());
-    Path inboxFile = Files.writeString(root.resolve("in.json"), ServeFixtures.smallQwz("staged", 2));
-    JobRecord done = store.create(ServeFixtures.smallQwz("staged", 2), "staged", 0, "inbox:in.json", META, inboxFile);
+    Path inboxFile =
+        Files.writeString(root.resolve("in.json"), ServeFixtures.smallQwz("staged", 2));
+    JobRecord done =
+        store.create(
+            ServeFixtures.smallQwz("staged", 2), "staged", 0, "inbox:in.json", META, inboxFile);
     assertThat(inboxFile).doesNotExist();
     Path jobs = root.resolve("jobs");
     assertThat(jobs.resolve(done.id()).resolve("source.json")).exists();
@@ -108,24 +123,41 @@ class JobStoreTest {
   @Test
   void jobPathsNeverLeaveTheJobsDirectory() throws IOException {
     JobStore store = JobStore.open(root, new StepClock());
-    for (String bad : new String[] {"..", "../x", "000001-../../etc", "/etc/passwd", "000001-a/../../b"}) {
-      assertThatThrownBy(() -> store.jobDir(bad)).as(bad).isInstanceOf(IllegalArgumentException.class);
+    for (String bad :
+        new String[] {"..", "../x", "000001-../../etc", "/etc/passwd", "000001-a/../../b"}) {
+      assertThatThrownBy(() -> store.jobDir(bad))
+          .as(bad)
+          .isInstanceOf(IllegalArgumentException.class);
       assertThat(store.find(bad)).isEmpty();
     }
-    assertThat(store.jobDir("000001-ok").getParent()).isEqualTo(root.toAbsolutePath().normalize().resolve("jobs"));
+    assertThat(store.jobDir("000001-ok").getParent())
+        .isEqualTo(root.toAbsolutePath().normalize().resolve("jobs"));
   }
 
   @Test
   void aRecordOfAnotherFormatIsRefused() {
-    assertThatThrownBy(() -> new JobRecord(2, "000001-a", "a", 0, 1, "api", JobState.QUEUED,
-        java.util.List.of(new JobEvent(Instant.EPOCH, null, JobState.QUEUED, "x")), null))
-        .isInstanceOf(IllegalArgumentException.class).hasMessageContaining("format 2");
+    assertThatThrownBy(
+            () ->
+                new JobRecord(
+                    2,
+                    "000001-a",
+                    "a",
+                    0,
+                    1,
+                    "api",
+                    JobState.QUEUED,
+                    java.util.List.of(new JobEvent(Instant.EPOCH, null, JobState.QUEUED, "x")),
+                    null))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessageContaining("format 2");
   }
 
   private static void rewriteId(Path dir, String id) throws IOException {
     Path f = dir.resolve("job.json");
     JsonNode n = ServeFixtures.JSON.readTree(f.toFile());
-    ((com.fasterxml.jackson.databind.node.ObjectNode) n).put("id", id).put("sequence", JobIds.sequence(id));
+    ((com.fasterxml.jackson.databind.node.ObjectNode) n)
+        .put("id", id)
+        .put("sequence", JobIds.sequence(id));
     Files.writeString(f, n.toString(), StandardCharsets.UTF_8);
   }
 

@@ -38,7 +38,8 @@ final class ServeFixtures {
          "parameters": {"m": 1.0, "W": [0, 2, 4], "L": 6, "fermiEnergy": 0.0},
          "disorder": [{"type": "onsite-box", "strength": "W"}],
          "boundary": "periodic", "observables": ["gap", "bott"], "realisations": %d}
-        """.formatted(name, realisations);
+        """
+        .formatted(name, realisations);
   }
 
   /** A spec with two problems the CLI reports with field paths. */
@@ -51,7 +52,15 @@ final class ServeFixtures {
   }
 
   static ServiceSpec spec(Path root, byte[] token, Duration pace) {
-    return new ServiceSpec(root, InetAddress.getLoopbackAddress(), 0, 1, LinalgKind.JAVA, token, pace, Duration.ofMillis(100));
+    return new ServiceSpec(
+        root,
+        InetAddress.getLoopbackAddress(),
+        0,
+        1,
+        LinalgKind.JAVA,
+        token,
+        pace,
+        Duration.ofMillis(100));
   }
 
   static BatchService start(Path root, byte[] token, Duration pace) throws IOException {
@@ -59,7 +68,8 @@ final class ServeFixtures {
   }
 
   /** Polls until the condition holds; fails after {@code timeout}. */
-  static void await(String what, Duration timeout, BooleanSupplier condition) throws InterruptedException {
+  static void await(String what, Duration timeout, BooleanSupplier condition)
+      throws InterruptedException {
     long end = System.nanoTime() + timeout.toNanos();
     while (!condition.getAsBoolean()) {
       if (System.nanoTime() > end) {
@@ -85,12 +95,17 @@ final class ServeFixtures {
     }
 
     HttpResponse<String> post(String path, String body) throws IOException, InterruptedException {
-      return http.send(request(path).header("Content-Type", "application/json").POST(HttpRequest.BodyPublishers.ofString(body)).build(),
+      return http.send(
+          request(path)
+              .header("Content-Type", "application/json")
+              .POST(HttpRequest.BodyPublishers.ofString(body))
+              .build(),
           HttpResponse.BodyHandlers.ofString());
     }
 
     HttpRequest.Builder request(String path) {
-      HttpRequest.Builder b = HttpRequest.newBuilder(base.resolve(path)).timeout(Duration.ofSeconds(20));
+      HttpRequest.Builder b =
+          HttpRequest.newBuilder(base.resolve(path)).timeout(Duration.ofSeconds(20));
       if (token != null) {
         b.header("Authorization", "Bearer " + token);
       }
@@ -122,8 +137,18 @@ final class ServeFixtures {
     int raw(String method, String rawTarget, String extraHeaders) throws IOException {
       try (Socket s = new Socket(base.getHost(), base.getPort())) {
         s.setSoTimeout(10_000);
-        String req = method + " " + rawTarget + " HTTP/1.1\r\nHost: " + base.getHost() + ":" + base.getPort() + "\r\n"
-            + (token == null ? "" : "Authorization: Bearer " + token + "\r\n") + extraHeaders + "Content-Length: 0\r\nConnection: close\r\n\r\n";
+        String req =
+            method
+                + " "
+                + rawTarget
+                + " HTTP/1.1\r\nHost: "
+                + base.getHost()
+                + ":"
+                + base.getPort()
+                + "\r\n"
+                + (token == null ? "" : "Authorization: Bearer " + token + "\r\n")
+                + extraHeaders
+                + "Content-Length: 0\r\nConnection: close\r\n\r\n";
         OutputStream out = s.getOutputStream();
         out.write(req.getBytes(StandardCharsets.ISO_8859_1));
         out.flush();

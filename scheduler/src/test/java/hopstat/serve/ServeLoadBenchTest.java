@@ -35,8 +35,8 @@ import org.junit.jupiter.api.io.TempDir;
  * Bounded load benchmark of the service on loopback (tag {@code bench}: never part of {@code mvn
  * test}). {@value #CLIENTS} clients first submit {@value #SUBMISSIONS} jobs concurrently, then poll
  * job status and the job list for {@code hopstat.bench.seconds} (default 30) seconds while the jobs
- * run. Checks that no job is lost or duplicated and writes request latency percentiles to
- * {@code target/serve-load-bench.json}.
+ * run. Checks that no job is lost or duplicated and writes request latency percentiles to {@code
+ * target/serve-load-bench.json}.
  *
  * <pre>
  * mvn -B -o -pl scheduler surefire:test -Dtest=ServeLoadBenchTest -Dbench.excludedGroups= -Dsurefire.failIfNoSpecifiedTests=false
@@ -47,7 +47,11 @@ class ServeLoadBenchTest {
 
   static final int CLIENTS = 20;
   static final int SUBMISSIONS = 40;
-  /** Realisations per point of each submitted job: enough that jobs keep running for the whole benchmark. */
+
+  /**
+   * Realisations per point of each submitted job: enough that jobs keep running for the whole
+   * benchmark.
+   */
   static final int BENCH_REALISATIONS = 40;
 
   @TempDir Path root;
@@ -57,7 +61,16 @@ class ServeLoadBenchTest {
     long seconds = Long.getLong("hopstat.bench.seconds", 30);
     LinalgKind linalg = LinalgFactory.isNativeAvailable() ? LinalgKind.NATIVE : LinalgKind.JAVA;
     int threads = 1;
-    ServiceSpec spec = new ServiceSpec(root, InetAddress.getLoopbackAddress(), 0, threads, linalg, null, Duration.ZERO, Duration.ofMillis(500));
+    ServiceSpec spec =
+        new ServiceSpec(
+            root,
+            InetAddress.getLoopbackAddress(),
+            0,
+            threads,
+            linalg,
+            null,
+            Duration.ZERO,
+            Duration.ofMillis(500));
     ConcurrentLinkedQueue<Long> submitNanos = new ConcurrentLinkedQueue<>();
     ConcurrentLinkedQueue<Long> statusNanos = new ConcurrentLinkedQueue<>();
     ConcurrentLinkedQueue<Long> listNanos = new ConcurrentLinkedQueue<>();
@@ -69,19 +82,24 @@ class ServeLoadBenchTest {
       List<Future<?>> submits = new ArrayList<>();
       for (int i = 0; i < SUBMISSIONS; i++) {
         int k = i;
-        submits.add(pool.submit(() -> {
-          ServeFixtures.Client c = new ServeFixtures.Client(service.uri(), null);
-          go.await();
-          long t0 = System.nanoTime();
-          HttpResponse<String> r = c.post("api/jobs?priority=" + (k % 3), ServeFixtures.smallQwz("load-" + k, BENCH_REALISATIONS));
-          submitNanos.add(System.nanoTime() - t0);
-          if (r.statusCode() != 201) {
-            errors.incrementAndGet();
-            return null;
-          }
-          submitted.add(c.json(r).path("job").path("id").asText());
-          return null;
-        }));
+        submits.add(
+            pool.submit(
+                () -> {
+                  ServeFixtures.Client c = new ServeFixtures.Client(service.uri(), null);
+                  go.await();
+                  long t0 = System.nanoTime();
+                  HttpResponse<String> r =
+                      c.post(
+                          "api/jobs?priority=" + (k % 3),
+                          ServeFixtures.smallQwz("load-" + k, BENCH_REALISATIONS));
+                  submitNanos.add(System.nanoTime() - t0);
+                  if (r.statusCode() != 201) {
+                    errors.incrementAndGet();
+                    return null;
+                  }
+                  submitted.add(c.json(r).path("job").path("id").asText());
+                  return null;
+                }));
       }
       go.countDown();
       for (Future<?> f : submits) {
@@ -92,28 +110,34 @@ class ServeLoadBenchTest {
       List<Future<?>> pollers = new ArrayList<>();
       for (int i = 0; i < CLIENTS; i++) {
         long seed = i;
-        pollers.add(pool.submit(() -> {
-          ServeFixtures.Client c = new ServeFixtures.Client(service.uri(), null);
-          SplittableRandom random = new SplittableRandom(seed);
-          int n = 0;
-          while (System.nanoTime() < end) {
-            boolean list = (n++ % 5) == 4;
-            long t0 = System.nanoTime();
-            HttpResponse<String> r = list ? c.get("api/jobs") : c.get("api/jobs/" + ids.get(random.nextInt(ids.size())));
-            (list ? listNanos : statusNanos).add(System.nanoTime() - t0);
-            if (r.statusCode() != 200) {
-              errors.incrementAndGet();
-            }
-          }
-          return null;
-        }));
+        pollers.add(
+            pool.submit(
+                () -> {
+                  ServeFixtures.Client c = new ServeFixtures.Client(service.uri(), null);
+                  SplittableRandom random = new SplittableRandom(seed);
+                  int n = 0;
+                  while (System.nanoTime() < end) {
+                    boolean list = (n++ % 5) == 4;
+                    long t0 = System.nanoTime();
+                    HttpResponse<String> r =
+                        list
+                            ? c.get("api/jobs")
+                            : c.get("api/jobs/" + ids.get(random.nextInt(ids.size())));
+                    (list ? listNanos : statusNanos).add(System.nanoTime() - t0);
+                    if (r.statusCode() != 200) {
+                      errors.incrementAndGet();
+                    }
+                  }
+                  return null;
+                }));
       }
       for (Future<?> f : pollers) {
         f.get();
       }
       pool.shutdown();
 
-      // no lost or duplicated job: every 201 has a distinct id, the store holds exactly those, numbered 1..N
+      // no lost or duplicated job: every 201 has a distinct id, the store holds exactly those,
+      // numbered 1..N
       assertThat(errors.get()).isZero();
       assertThat(new HashSet<>(ids)).hasSize(SUBMISSIONS);
       Set<String> stored = new HashSet<>();
@@ -123,7 +147,9 @@ class ServeLoadBenchTest {
         sequences.add(j.sequence());
       }
       assertThat(stored).isEqualTo(new HashSet<>(ids));
-      assertThat(sequences).containsExactlyElementsOf(java.util.stream.LongStream.rangeClosed(1, SUBMISSIONS).boxed().toList());
+      assertThat(sequences)
+          .containsExactlyElementsOf(
+              java.util.stream.LongStream.rangeClosed(1, SUBMISSIONS).boxed().toList());
       long doneJobs = service.jobs().stream().filter(j -> j.state() == JobState.DONE).count();
       for (JobRecord j : service.jobs()) {
         if (j.state() == JobState.DONE) {
@@ -140,8 +166,15 @@ class ServeLoadBenchTest {
       ObjectNode out = ServeFixtures.JSON.createObjectNode();
       out.put("benchmark", "ServeLoadBenchTest");
       out.put("commit", BuildInfo.toolVersion());
-      out.put("machine", System.getProperty("os.name") + " " + System.getProperty("os.arch") + ", " + Runtime.getRuntime().availableProcessors() + " cores, JVM "
-          + System.getProperty("java.vm.version"));
+      out.put(
+          "machine",
+          System.getProperty("os.name")
+              + " "
+              + System.getProperty("os.arch")
+              + ", "
+              + Runtime.getRuntime().availableProcessors()
+              + " cores, JVM "
+              + System.getProperty("java.vm.version"));
       out.put("linalg", linalg.name());
       out.put("clients", CLIENTS);
       out.put("seconds", seconds);
@@ -153,7 +186,12 @@ class ServeLoadBenchTest {
       out.set("listMillis", percentiles(listNanos));
       out.put("pollRequestsPerSecond", (statusNanos.size() + listNanos.size()) / (double) seconds);
       Files.createDirectories(Path.of("target"));
-      Files.write(Path.of("target", "serve-load-bench.json"), ServeFixtures.JSON.copy().enable(SerializationFeature.INDENT_OUTPUT).writeValueAsBytes(out));
+      Files.write(
+          Path.of("target", "serve-load-bench.json"),
+          ServeFixtures.JSON
+              .copy()
+              .enable(SerializationFeature.INDENT_OUTPUT)
+              .writeValueAsBytes(out));
     }
   }
 
@@ -168,7 +206,9 @@ class ServeLoadBenchTest {
     for (double q : new double[] {0.50, 0.95, 0.99, 1.0}) {
       // nearest-rank percentile
       int rank = (int) Math.ceil(q * a.length);
-      o.put(q == 1.0 ? "max" : String.format(Locale.ROOT, "p%.0f", q * 100), a[Math.max(0, rank - 1)] / 1e6);
+      o.put(
+          q == 1.0 ? "max" : String.format(Locale.ROOT, "p%.0f", q * 100),
+          a[Math.max(0, rank - 1)] / 1e6);
     }
     return o;
   }

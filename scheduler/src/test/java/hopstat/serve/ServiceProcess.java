@@ -9,7 +9,9 @@ import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 
-/** {@code hopstat serve} in a child JVM on the test classpath, so a test can kill it with SIGKILL. */
+/**
+ * {@code hopstat serve} in a child JVM on the test classpath, so a test can kill it with SIGKILL.
+ */
 final class ServiceProcess implements AutoCloseable {
 
   final Process process;
@@ -25,22 +27,44 @@ final class ServiceProcess implements AutoCloseable {
    * arguments; output goes to files in {@code logs} (tests stay silent). Returns once service.json
    * names the new process.
    */
-  static ServiceProcess start(Path root, Path logs, String label, String... extra) throws IOException, InterruptedException {
-    String classpath = System.getProperty("surefire.test.class.path", System.getProperty("java.class.path"));
+  static ServiceProcess start(Path root, Path logs, String label, String... extra)
+      throws IOException, InterruptedException {
+    String classpath =
+        System.getProperty("surefire.test.class.path", System.getProperty("java.class.path"));
     String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
-    List<String> cmd = new ArrayList<>(List.of(java, "-Xmx512m", "-cp", classpath, "hopstat.cli.HopstatCommand", "serve",
-        "--root", root.toString(), "--port", "0", "--threads", "1", "--linalg", "java"));
+    List<String> cmd =
+        new ArrayList<>(
+            List.of(
+                java,
+                "-Xmx512m",
+                "-cp",
+                classpath,
+                "hopstat.cli.HopstatCommand",
+                "serve",
+                "--root",
+                root.toString(),
+                "--port",
+                "0",
+                "--threads",
+                "1",
+                "--linalg",
+                "java"));
     cmd.addAll(List.of(extra));
     Files.createDirectories(logs);
-    Process p = new ProcessBuilder(cmd)
-        .redirectOutput(logs.resolve(label + ".out").toFile())
-        .redirectError(logs.resolve(label + ".err").toFile())
-        .start();
+    Process p =
+        new ProcessBuilder(cmd)
+            .redirectOutput(logs.resolve(label + ".out").toFile())
+            .redirectError(logs.resolve(label + ".err").toFile())
+            .start();
     Path serviceJson = root.resolve("service.json");
     long end = System.nanoTime() + Duration.ofSeconds(60).toNanos();
     while (true) {
       if (!p.isAlive()) {
-        throw new IllegalStateException("service exited with " + p.exitValue() + ": " + Files.readString(logs.resolve(label + ".err")));
+        throw new IllegalStateException(
+            "service exited with "
+                + p.exitValue()
+                + ": "
+                + Files.readString(logs.resolve(label + ".err")));
       }
       if (Files.exists(serviceJson)) {
         try {

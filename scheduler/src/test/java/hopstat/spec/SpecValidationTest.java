@@ -30,29 +30,106 @@ class SpecValidationTest {
         bad("missing name", s -> s.tree().remove("name"), "name: required"),
         bad("name with a slash", s -> s.tree().put("name", "../etc"), "name: 1-80 characters"),
         bad("seed not an integer", s -> s.tree().put("seed", 1.5), "seed: must be an integer"),
-        bad("unknown model", s -> s.tree().put("model", "qwzz"), "model: unknown model; known: qwz"),
-        bad("non-integer size", s -> s.sizes(4, 5).tree().with("parameters").putArray("L").add(4).add(5.5), "parameters.L[1]: must be an integer from 2"),
-        bad("size below 2", s -> s.tree().with("parameters").put("L", 1), "parameters.L: must be an integer from 2"),
-        bad("range with zero steps", s -> s.tree().with("parameters").putObject("W").put("from", 0).put("to", 1).put("steps", 0), "parameters.W.steps: must be an integer from 1"),
-        bad("range missing 'to'", s -> s.tree().with("parameters").putObject("W").put("from", 0).put("steps", 3), "parameters.W.to: required in a range"),
-        bad("parameter as a string", s -> s.tree().with("parameters").put("m", "one"), "parameters.m: must be a number, a list of numbers or a range"),
-        bad("unknown parameter", s -> s.parameter("mass", 1), "parameters.mass: not a parameter of model qwz"),
-        bad("missing model parameter", s -> s.tree().with("parameters").remove("m"), "parameters.m: required by model qwz"),
-        bad("unknown disorder type", s -> s.tree().withArray("disorder").insertObject(0).put("type", "onsite-boxx").put("strength", 1), "disorder[0].type: unknown disorder type"),
-        bad("disorder strength names nothing", s -> ((ObjectNode) s.tree().withArray("disorder").get(0)).put("strength", "V"), "disorder[0].strength: names no entry"),
-        bad("negative disorder strength", s -> ((ObjectNode) s.tree().withArray("disorder").get(0)).put("strength", -1), "disorder[0].strength: must be >= 0"),
-        bad("negative swept strength", s -> s.sweep("W", 0, -2), "parameters.W: used as a disorder strength"),
-        bad("unknown disorder option", s -> ((ObjectNode) s.tree().withArray("disorder").get(0)).put("sites", "all"), "disorder[0].sites: unknown option of onsite-box"),
-        bad("bad option value", s -> ((ObjectNode) s.tree().withArray("disorder").get(0)).put("orbitals", "some"), "disorder[0].orbitals: allowed values: independent, same"),
-        bad("unknown observable", s -> s.observables("gap", "chern"), "observables[1]: unknown observable"),
-        bad("observable listed twice", s -> s.observables("gap", "gap"), "observables[1]: listed twice"),
-        bad("Bott index on an open sample", s -> s.tree().put("boundary", "open"), "observables[1]: the Bott index needs \"boundary\": \"periodic\""),
-        bad("bad boundary", s -> s.tree().put("boundary", "twisted"), "boundary: must be \"periodic\" or \"open\""),
+        bad(
+            "unknown model",
+            s -> s.tree().put("model", "qwzz"),
+            "model: unknown model; known: qwz"),
+        bad(
+            "non-integer size",
+            s -> s.sizes(4, 5).tree().with("parameters").putArray("L").add(4).add(5.5),
+            "parameters.L[1]: must be an integer from 2"),
+        bad(
+            "size below 2",
+            s -> s.tree().with("parameters").put("L", 1),
+            "parameters.L: must be an integer from 2"),
+        bad(
+            "range with zero steps",
+            s ->
+                s.tree()
+                    .with("parameters")
+                    .putObject("W")
+                    .put("from", 0)
+                    .put("to", 1)
+                    .put("steps", 0),
+            "parameters.W.steps: must be an integer from 1"),
+        bad(
+            "range missing 'to'",
+            s -> s.tree().with("parameters").putObject("W").put("from", 0).put("steps", 3),
+            "parameters.W.to: required in a range"),
+        bad(
+            "parameter as a string",
+            s -> s.tree().with("parameters").put("m", "one"),
+            "parameters.m: must be a number, a list of numbers or a range"),
+        bad(
+            "unknown parameter",
+            s -> s.parameter("mass", 1),
+            "parameters.mass: not a parameter of model qwz"),
+        bad(
+            "missing model parameter",
+            s -> s.tree().with("parameters").remove("m"),
+            "parameters.m: required by model qwz"),
+        bad(
+            "unknown disorder type",
+            s ->
+                s.tree()
+                    .withArray("disorder")
+                    .insertObject(0)
+                    .put("type", "onsite-boxx")
+                    .put("strength", 1),
+            "disorder[0].type: unknown disorder type"),
+        bad(
+            "disorder strength names nothing",
+            s -> ((ObjectNode) s.tree().withArray("disorder").get(0)).put("strength", "V"),
+            "disorder[0].strength: names no entry"),
+        bad(
+            "negative disorder strength",
+            s -> ((ObjectNode) s.tree().withArray("disorder").get(0)).put("strength", -1),
+            "disorder[0].strength: must be >= 0"),
+        bad(
+            "negative swept strength",
+            s -> s.sweep("W", 0, -2),
+            "parameters.W: used as a disorder strength"),
+        bad(
+            "unknown disorder option",
+            s -> ((ObjectNode) s.tree().withArray("disorder").get(0)).put("sites", "all"),
+            "disorder[0].sites: unknown option of onsite-box"),
+        bad(
+            "bad option value",
+            s -> ((ObjectNode) s.tree().withArray("disorder").get(0)).put("orbitals", "some"),
+            "disorder[0].orbitals: allowed values: independent, same"),
+        bad(
+            "unknown observable",
+            s -> s.observables("gap", "chern"),
+            "observables[1]: unknown observable"),
+        bad(
+            "observable listed twice",
+            s -> s.observables("gap", "gap"),
+            "observables[1]: listed twice"),
+        bad(
+            "Bott index on an open sample",
+            s -> s.tree().put("boundary", "open"),
+            "observables[1]: the Bott index needs \"boundary\": \"periodic\""),
+        bad(
+            "bad boundary",
+            s -> s.tree().put("boundary", "twisted"),
+            "boundary: must be \"periodic\" or \"open\""),
         bad("zero realisations", s -> s.realisations(0), "realisations: must be an integer from 1"),
-        bad("sampling with realisations", s -> s.adaptive(4, 8, 4, "bott", 0.1).realisations(5), "realisations: omit it when \"sampling\" is given"),
-        bad("sampling target on an unknown quantity", s -> s.adaptive(4, 8, 4, "chern", 0.1), "sampling.targets[0].quantity: not produced"),
-        bad("sampling minimum not a multiple of batch", s -> s.adaptive(6, 12, 4, "bott", 0.1), "sampling.minimum: must be a positive multiple"),
-        bad("disorder kind not for this model", s -> ((ObjectNode) s.tree().withArray("disorder").get(0)).put("type", "field-box"), "disorder[0].type"));
+        bad(
+            "sampling with realisations",
+            s -> s.adaptive(4, 8, 4, "bott", 0.1).realisations(5),
+            "realisations: omit it when \"sampling\" is given"),
+        bad(
+            "sampling target on an unknown quantity",
+            s -> s.adaptive(4, 8, 4, "chern", 0.1),
+            "sampling.targets[0].quantity: not produced"),
+        bad(
+            "sampling minimum not a multiple of batch",
+            s -> s.adaptive(6, 12, 4, "bott", 0.1),
+            "sampling.minimum: must be a positive multiple"),
+        bad(
+            "disorder kind not for this model",
+            s -> ((ObjectNode) s.tree().withArray("disorder").get(0)).put("type", "field-box"),
+            "disorder[0].type"));
   }
 
   private static Arguments bad(String name, Consumer<SpecJson> edit, String expected) {
@@ -61,7 +138,8 @@ class SpecValidationTest {
 
   @ParameterizedTest(name = "{0}")
   @MethodSource("badSpecs")
-  void badSpecGivesExitTwoNamingTheField(String name, Consumer<SpecJson> edit, String expected) throws Exception {
+  void badSpecGivesExitTwoNamingTheField(String name, Consumer<SpecJson> edit, String expected)
+      throws Exception {
     SpecJson spec = aQwzSpec();
     edit.accept(spec);
     Path file = spec.writeTo(dir.resolve("spec.json"));
@@ -73,7 +151,8 @@ class SpecValidationTest {
 
   @Test
   void invalidJsonNamesLineAndColumn() throws Exception {
-    Path file = Files.writeString(dir.resolve("spec.json"), "{\n  \"name\": \"x\",\n  \"seed\": 1,,\n}");
+    Path file =
+        Files.writeString(dir.resolve("spec.json"), "{\n  \"name\": \"x\",\n  \"seed\": 1,,\n}");
     Cli.Outcome o = Cli.run("check", "--no-timing", file.toString());
     assertThat(o.exitCode()).isEqualTo(ExitCode.BAD_INPUT);
     assertThat(o.err()).contains("not valid JSON at line 3");
@@ -82,7 +161,8 @@ class SpecValidationTest {
   @Test
   void duplicateKeysAreRejected() {
     assertThatThrownBy(() -> SpecParser.parse("{\"name\": \"a\", \"name\": \"b\"}"))
-        .isInstanceOf(InvalidInputException.class).hasMessageContaining("Duplicate field 'name'");
+        .isInstanceOf(InvalidInputException.class)
+        .hasMessageContaining("Duplicate field 'name'");
   }
 
   @Test
@@ -91,8 +171,12 @@ class SpecValidationTest {
     spec.tree().remove("name");
     spec.tree().put("model", "nope");
     spec.realisations(-1);
-    InvalidInputException e = org.junit.jupiter.api.Assertions.assertThrows(InvalidInputException.class, () -> SpecParser.parse(spec.text()));
-    assertThat(e.violations()).extracting(InvalidInputException.Violation::fieldPath).contains("name", "model", "realisations");
+    InvalidInputException e =
+        org.junit.jupiter.api.Assertions.assertThrows(
+            InvalidInputException.class, () -> SpecParser.parse(spec.text()));
+    assertThat(e.violations())
+        .extracting(InvalidInputException.Violation::fieldPath)
+        .contains("name", "model", "realisations");
   }
 
   @Test
@@ -116,7 +200,10 @@ class SpecValidationTest {
     assertThat(spec.effectiveClass()).isEqualTo(hopstat.model.SymmetryClass.A);
     assertThat(spec.specHash()).hasSize(64);
     // canonical hash ignores whitespace and key order
-    assertThat(SpecParser.parse(aQwzSpec().sweep("W", 0, 1, 2).sizes(4, 6).text().replace("\n", " ")).specHash()).isEqualTo(spec.specHash());
+    assertThat(
+            SpecParser.parse(aQwzSpec().sweep("W", 0, 1, 2).sizes(4, 6).text().replace("\n", " "))
+                .specHash())
+        .isEqualTo(spec.specHash());
   }
 
   @Test
@@ -129,10 +216,12 @@ class SpecValidationTest {
 
   @Test
   void andersonAliasPicksTheDimension() {
-    String text = "{\"name\":\"a\",\"seed\":1,\"model\":\"anderson\",\"parameters\":{\"dim\":1,\"L\":8,\"W\":1},"
-        + "\"disorder\":[{\"type\":\"onsite-box\",\"strength\":\"W\"}],\"boundary\":\"open\",\"observables\":[\"gap\"],\"realisations\":1}";
+    String text =
+        "{\"name\":\"a\",\"seed\":1,\"model\":\"anderson\",\"parameters\":{\"dim\":1,\"L\":8,\"W\":1},"
+            + "\"disorder\":[{\"type\":\"onsite-box\",\"strength\":\"W\"}],\"boundary\":\"open\",\"observables\":[\"gap\"],\"realisations\":1}";
     assertThat(SpecParser.parse(text).model()).isEqualTo("anderson-1d");
     assertThatThrownBy(() -> SpecParser.parse(text.replace("\"dim\":1", "\"dim\":4")))
-        .isInstanceOf(InvalidInputException.class).hasMessageContaining("parameters.dim");
+        .isInstanceOf(InvalidInputException.class)
+        .hasMessageContaining("parameters.dim");
   }
 }

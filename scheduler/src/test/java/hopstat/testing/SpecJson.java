@@ -9,8 +9,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 
 /**
- * Test-data builder for job spec text: {@code aQwzSpec().sweep("W", 0, 2).sizes(6).realisations(4).text()}.
- * Starts from a small valid QWZ study.
+ * Test-data builder for job spec text: {@code aQwzSpec().sweep("W", 0,
+ * 2).sizes(6).realisations(4).text()}. Starts from a small valid QWZ study.
  */
 public final class SpecJson {
 

@@ -28,10 +28,10 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 
 /**
- * One whole realisation (build, disorder, observable) of disordered qwz (m = 1, onsite box W = 2,
- * t = 1): {@code chern-localizer} on the open sample (slice sweep, no dense matrix) against the
- * dense {@code bott} path on the periodic sample (full eigen-decomposition with vectors, then the
- * Bott index), side by side in one run on one thread, native backend.
+ * One whole realisation (build, disorder, observable) of disordered qwz (m = 1, onsite box W = 2, t
+ * = 1): {@code chern-localizer} on the open sample (slice sweep, no dense matrix) against the dense
+ * {@code bott} path on the periodic sample (full eigen-decomposition with vectors, then the Bott
+ * index), side by side in one run on one thread, native backend.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.AverageTime)
@@ -53,10 +53,21 @@ public class SpectralLocalizerBenchmark {
     workspace = new RealisationWorkspace(LinalgFactory.create(LinalgKind.NATIVE));
     ParameterValues p = new ParameterValues(Map.of("m", 1.0, "t", 1.0, "kappa", 0.0));
     List<DisorderTerm> disorder = List.of(new DisorderTerm("onsite-box", 2.0, Map.of()));
-    localizer = new RealisationTask("bench-localizer", 0, 0, 20261201L,
-        new PointSpec("qwz", p, size, Boundary.OPEN, 0.0, disorder, List.of("chern-localizer")));
-    bott = new RealisationTask("bench-bott", 0, 0, 20261201L,
-        new PointSpec("qwz", p, size, Boundary.PERIODIC, 0.0, disorder, List.of("bott")));
+    localizer =
+        new RealisationTask(
+            "bench-localizer",
+            0,
+            0,
+            20261201L,
+            new PointSpec(
+                "qwz", p, size, Boundary.OPEN, 0.0, disorder, List.of("chern-localizer")));
+    bott =
+        new RealisationTask(
+            "bench-bott",
+            0,
+            0,
+            20261201L,
+            new PointSpec("qwz", p, size, Boundary.PERIODIC, 0.0, disorder, List.of("bott")));
   }
 
   @Benchmark

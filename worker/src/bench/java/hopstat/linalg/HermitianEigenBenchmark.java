@@ -23,10 +23,10 @@ import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
 
 /**
- * Hermitian eigensolver cost: the hopstat solvers (native and Java) against the bare LAPACKE
- * {@code zheevr} call on preallocated buffers, which bounds what the native wrapper can reach.
- * The raw variants include the copy of the input into native memory, since {@code zheevr}
- * destroys its input and every real call needs it too.
+ * Hermitian eigensolver cost: the hopstat solvers (native and Java) against the bare LAPACKE {@code
+ * zheevr} call on preallocated buffers, which bounds what the native wrapper can reach. The raw
+ * variants include the copy of the input into native memory, since {@code zheevr} destroys its
+ * input and every real call needs it too.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.AverageTime)
@@ -84,8 +84,31 @@ public class HermitianEigenBenchmark {
     DoublePointer optRwork = new DoublePointer(1);
     IntPointer optIwork = new IntPointer(1);
     matrix.put(a.data, 0, 2 * n * n);
-    int info = LAPACKE_zheevr_work(LAPACK_COL_MAJOR, (byte) 'V', (byte) 'A', (byte) 'U', n, matrix,
-        n, 0, 0, 0, 0, 0, found, w, z, n, support, optWork, -1, optRwork, -1, optIwork, -1);
+    int info =
+        LAPACKE_zheevr_work(
+            LAPACK_COL_MAJOR,
+            (byte) 'V',
+            (byte) 'A',
+            (byte) 'U',
+            n,
+            matrix,
+            n,
+            0,
+            0,
+            0,
+            0,
+            0,
+            found,
+            w,
+            z,
+            n,
+            support,
+            optWork,
+            -1,
+            optRwork,
+            -1,
+            optIwork,
+            -1);
     if (info != 0) {
       throw new IllegalStateException("workspace query failed: " + info);
     }
@@ -111,8 +134,30 @@ public class HermitianEigenBenchmark {
 
   private int rawZheevr(byte jobz) {
     matrix.put(a.data, 0, 2 * n * n);
-    return LAPACKE_zheevr_work(LAPACK_COL_MAJOR, jobz, (byte) 'A', (byte) 'U', n, matrix, n, 0,
-        0, 0, 0, 0, found, w, z, n, support, work, lwork, rwork, lrwork, iwork, liwork);
+    return LAPACKE_zheevr_work(
+        LAPACK_COL_MAJOR,
+        jobz,
+        (byte) 'A',
+        (byte) 'U',
+        n,
+        matrix,
+        n,
+        0,
+        0,
+        0,
+        0,
+        0,
+        found,
+        w,
+        z,
+        n,
+        support,
+        work,
+        lwork,
+        rwork,
+        lrwork,
+        iwork,
+        liwork);
   }
 
   @Benchmark

@@ -17,10 +17,9 @@ import java.util.random.RandomGenerator;
  * Ohtsuki, New J. Phys. 16, 015012 (2014); Λ_c = 0.576, PRL 82, 382 (1999)). Also reports the
  * throughput of the transfer-matrix kernel (slices per second).
  *
- * <p>Run: {@code mvn -q -B -o -Pbench -pl worker test-compile exec:java
- * -Dexec.args="<error> <M,M,..> <W,W,..>"}, e.g. {@code 0.01 4,6,8 14,15,16,17,18,19}.
- * Output: one whitespace-separated line per (W, M): W, M, Λ, relative error of Λ, slices, seconds,
- * slices/s.
+ * <p>Run: {@code mvn -q -B -o -Pbench -pl worker test-compile exec:java -Dexec.args="<error>
+ * <M,M,..> <W,W,..>"}, e.g. {@code 0.01 4,6,8 14,15,16,17,18,19}. Output: one whitespace-separated
+ * line per (W, M): W, M, Λ, relative error of Λ, slices, seconds, slices/s.
  */
 public final class AndersonTransitionBenchmark {
 
@@ -34,7 +33,10 @@ public final class AndersonTransitionBenchmark {
     ParameterValues parameters = new ParameterValues(Map.of("t", 1.0));
     OnsiteBoxDisorder box = new OnsiteBoxDisorder();
     TransferMatrixWorkspace workspace = new TransferMatrixWorkspace();
-    System.out.println("# W M Lambda relErr slices seconds slicesPerSecond  (E = 0, periodic transverse, target " + error + ")");
+    System.out.println(
+        "# W M Lambda relErr slices seconds slicesPerSecond  (E = 0, periodic transverse, target "
+            + error
+            + ")");
     int point = 0;
     for (double w : disorders) {
       for (int m : sizes) {
@@ -45,13 +47,27 @@ public final class AndersonTransitionBenchmark {
         DisorderTerm term = new DisorderTerm("onsite-box", w, Map.of());
         RandomGenerator random = SeedOps.generator(SeedOps.realisationSeed(2014, point++, 0));
         long start = System.nanoTime();
-        LyapunovResult r = TransferMatrixKernel.run(hopping, k, new LyapunovSpec(0.0, error, 200_000_000L), h -> {
-          model.addCleanSlice(parameters, slice, h);
-          box.apply(term, model, parameters, slice, random, h);
-        }, workspace);
+        LyapunovResult r =
+            TransferMatrixKernel.run(
+                hopping,
+                k,
+                new LyapunovSpec(0.0, error, 200_000_000L),
+                h -> {
+                  model.addCleanSlice(parameters, slice, h);
+                  box.apply(term, model, parameters, slice, random, h);
+                },
+                workspace);
         double seconds = (System.nanoTime() - start) * 1e-9;
-        System.out.printf(Locale.ROOT, "%6.2f %3d %.4f %.4f %10d %8.1f %10.0f%n",
-            w, m, 1.0 / (r.smallestPositive() * m), r.relativeError(), r.slices(), seconds, r.slices() / seconds);
+        System.out.printf(
+            Locale.ROOT,
+            "%6.2f %3d %.4f %.4f %10d %8.1f %10.0f%n",
+            w,
+            m,
+            1.0 / (r.smallestPositive() * m),
+            r.relativeError(),
+            r.slices(),
+            seconds,
+            r.slices() / seconds);
       }
     }
   }

@@ -40,7 +40,8 @@ public final class BondBoxDisorder implements DisorderKind, SliceDisorder {
 
   @Override
   public Optional<String> whyNotApplicable(Model model) {
-    return model instanceof ChiralChain ? Optional.empty()
+    return model instanceof ChiralChain
+        ? Optional.empty()
         : Optional.of(NAME + " needs a chiral chain model (ssh), not " + model.name());
   }
 
@@ -50,7 +51,13 @@ public final class BondBoxDisorder implements DisorderKind, SliceDisorder {
   }
 
   @Override
-  public void apply(DisorderTerm term, Model model, ParameterValues parameters, Lattice lattice, RandomGenerator random, HamiltonianBuilder out) {
+  public void apply(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice lattice,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
     ChiralChain chain = (ChiralChain) model;
     String bonds = term.options().getOrDefault("bonds", "all");
     boolean intra = !"intercell".equals(bonds);
@@ -73,11 +80,20 @@ public final class BondBoxDisorder implements DisorderKind, SliceDisorder {
    */
   @Override
   public Optional<String> whyNotSliceable(Model model) {
-    return model.dimension() == 1 ? Optional.empty() : Optional.of(NAME + " is drawn slice by slice only on a chain");
+    return model.dimension() == 1
+        ? Optional.empty()
+        : Optional.of(NAME + " is drawn slice by slice only on a chain");
   }
 
   @Override
-  public void applyToSlice(DisorderTerm term, Model model, ParameterValues parameters, Lattice window, int sliceSites, RandomGenerator random, HamiltonianBuilder out) {
+  public void applyToSlice(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice window,
+      int sliceSites,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
     ChiralChain chain = (ChiralChain) model;
     String bonds = term.options().getOrDefault("bonds", "all");
     double w = term.strength();

@@ -23,21 +23,22 @@ import java.util.random.RandomGenerator;
  * <p>Option {@code bonds}: {@code intracell}, {@code intercell} or {@code all} (default), as for
  * {@code bond-box}. Draw order: cell by cell, j = 0, 1, …; within cell j first the intracell bond,
  * then the intercell bond j (if it exists: L − 1 of them open, L periodic). A phase is drawn for
- * every selected bond, also when its hopping is zero, so the number of draws depends only on L,
- * the boundary and {@code bonds}.
+ * every selected bond, also when its hopping is zero, so the number of draws depends only on L, the
+ * boundary and {@code bonds}.
  *
  * <p><b>Order matters:</b> the phase multiplies the hopping accumulated <i>so far</i> (clean value
  * plus the earlier disorder terms in spec order). Put {@code bond-phase} after {@code bond-box} to
  * get w_j = |w + W u_j|·(±e^{iθ_j}); a {@code bond-box} placed after it adds a real shift to a
  * complex hopping. Implemented additively: one pass over the terms gathers the hopping h of every
- * bond and (e^{iθ} − 1)·h is appended, so the builder's other terms are untouched. Hoppings that
- * do not join A_j–B_j or B_j–A_{j+1} (e.g. longer-range terms of a custom chain) are not changed.
+ * bond and (e^{iθ} − 1)·h is appended, so the builder's other terms are untouched. Hoppings that do
+ * not join A_j–B_j or B_j–A_{j+1} (e.g. longer-range terms of a custom chain) are not changed.
  *
  * <p>Symmetry: A–B hoppings only, so the chiral symmetry S = diag(1, −1) is kept; complex values
- * break T = K and C = S·K: a BDI chain becomes AIII ({@link hopstat.model.SymmetryClass#restrictTo}).
- * On an open chain every set of phases is a gauge transformation (c_k → e^{iχ_k} c_k), so
- * spectra and the winding equal those of the chain with hoppings |v_j|, |w_j| and signs absorbed
- * (derived); on a ring the total phase Σθ is a flux through the ring that cannot be gauged away.
+ * break T = K and C = S·K: a BDI chain becomes AIII ({@link
+ * hopstat.model.SymmetryClass#restrictTo}). On an open chain every set of phases is a gauge
+ * transformation (c_k → e^{iχ_k} c_k), so spectra and the winding equal those of the chain with
+ * hoppings |v_j|, |w_j| and signs absorbed (derived); on a ring the total phase Σθ is a flux
+ * through the ring that cannot be gauged away.
  */
 public final class BondPhaseDisorder implements DisorderKind {
 
@@ -62,9 +63,14 @@ public final class BondPhaseDisorder implements DisorderKind {
 
   @Override
   public Optional<String> whyNotApplicable(Model model) {
-    boolean chain = model instanceof ChiralChain || (model instanceof CustomModel c && c.isSublatticeChain());
-    return chain ? Optional.empty()
-        : Optional.of(NAME + " needs a chiral chain model (ssh, or a custom chain with two orbitals and S = diag(1, -1)), not " + model.name());
+    boolean chain =
+        model instanceof ChiralChain || (model instanceof CustomModel c && c.isSublatticeChain());
+    return chain
+        ? Optional.empty()
+        : Optional.of(
+            NAME
+                + " needs a chiral chain model (ssh, or a custom chain with two orbitals and S = diag(1, -1)), not "
+                + model.name());
   }
 
   @Override
@@ -73,17 +79,29 @@ public final class BondPhaseDisorder implements DisorderKind {
   }
 
   @Override
-  public void apply(DisorderTerm term, Model model, ParameterValues parameters, Lattice lattice, RandomGenerator random, HamiltonianBuilder out) {
-    if (lattice.dimension() != 1 || lattice.orbitalsPerSite() != 2 || out.dimension() != 2 * lattice.sites()) {
-      throw new IllegalArgumentException(NAME + " needs a chain with two orbitals (A, B) per cell: " + lattice);
+  public void apply(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice lattice,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
+    if (lattice.dimension() != 1
+        || lattice.orbitalsPerSite() != 2
+        || out.dimension() != 2 * lattice.sites()) {
+      throw new IllegalArgumentException(
+          NAME + " needs a chain with two orbitals (A, B) per cell: " + lattice);
     }
     String bonds = term.options().getOrDefault("bonds", "all");
     boolean intra = !"intercell".equals(bonds);
     boolean inter = !"intracell".equals(bonds);
     int cells = lattice.sites();
-    int intercellBonds = model instanceof ChiralChain chain ? chain.intercellBondCount(lattice)
-        : lattice.boundary() == Boundary.PERIODIC ? cells : cells - 1;
-    // Accumulated H[A][B] per bond: [2j] intracell j (A_j, B_j), [2j + 1] intercell j (A_{j+1}, B_j).
+    int intercellBonds =
+        model instanceof ChiralChain chain
+            ? chain.intercellBondCount(lattice)
+            : lattice.boundary() == Boundary.PERIODIC ? cells : cells - 1;
+    // Accumulated H[A][B] per bond: [2j] intracell j (A_j, B_j), [2j + 1] intercell j (A_{j+1},
+    // B_j).
     double[] hRe = new double[2 * cells];
     double[] hIm = new double[2 * cells];
     int terms = out.termCount();
@@ -115,16 +133,24 @@ public final class BondPhaseDisorder implements DisorderKind {
     double width = term.strength();
     for (int j = 0; j < cells; j++) {
       if (intra) {
-        addPhase(2 * j, 2 * j + 1, hRe[2 * j], hIm[2 * j], width * (random.nextDouble() - 0.5), out);
+        addPhase(
+            2 * j, 2 * j + 1, hRe[2 * j], hIm[2 * j], width * (random.nextDouble() - 0.5), out);
       }
       if (inter && j < intercellBonds) {
-        addPhase(2 * ((j + 1) % cells), 2 * j + 1, hRe[2 * j + 1], hIm[2 * j + 1], width * (random.nextDouble() - 0.5), out);
+        addPhase(
+            2 * ((j + 1) % cells),
+            2 * j + 1,
+            hRe[2 * j + 1],
+            hIm[2 * j + 1],
+            width * (random.nextDouble() - 0.5),
+            out);
       }
     }
   }
 
   /** Appends (e^{iθ} − 1)·h to H[a][b] (and its conjugate to H[b][a]). */
-  private static void addPhase(int a, int b, double re, double im, double theta, HamiltonianBuilder out) {
+  private static void addPhase(
+      int a, int b, double re, double im, double theta, HamiltonianBuilder out) {
     if (re == 0.0 && im == 0.0) {
       return;
     }

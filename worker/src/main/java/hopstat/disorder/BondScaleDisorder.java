@@ -15,9 +15,8 @@ import java.util.Set;
 import java.util.random.RandomGenerator;
 
 /**
- * Multiplicative bond disorder on any lattice: every bond b is multiplied by the real factor
- * f_b = 1 + W·u_b, u_b uniform in [−1/2, 1/2) (mean 1, variance W²/12; f_b may change sign for W
- * &gt; 2).
+ * Multiplicative bond disorder on any lattice: every bond b is multiplied by the real factor f_b =
+ * 1 + W·u_b, u_b uniform in [−1/2, 1/2) (mean 1, variance W²/12; f_b may change sign for W &gt; 2).
  *
  * <p>A bond is an unordered pair of distinct atoms coupled by a term present when this disorder is
  * applied (the clean Hamiltonian and earlier disorder terms); all its matrix elements, hoppings and
@@ -33,8 +32,8 @@ import java.util.random.RandomGenerator;
  *
  * <p>Symmetry: a real factor common to all elements of a bond commutes with complex conjugation
  * (T), with the BdG particle–hole map (hopping and pairing blocks scaled alike: C) and with any
- * sublattice operator diagonal on atoms (S), so every symmetry of the model is kept. Not drawn slice
- * by slice ({@link SliceDisorder} not implemented), so {@code lyapunov} rejects it.
+ * sublattice operator diagonal on atoms (S), so every symmetry of the model is kept. Not drawn
+ * slice by slice ({@link SliceDisorder} not implemented), so {@code lyapunov} rejects it.
  */
 public final class BondScaleDisorder implements DisorderKind {
 
@@ -62,7 +61,13 @@ public final class BondScaleDisorder implements DisorderKind {
   }
 
   @Override
-  public void apply(DisorderTerm term, Model model, ParameterValues parameters, Lattice lattice, RandomGenerator random, HamiltonianBuilder out) {
+  public void apply(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice lattice,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
     double w = term.strength();
     int[] atomOf = atoms(model, lattice);
     long atomCount = lattice.orbitals();

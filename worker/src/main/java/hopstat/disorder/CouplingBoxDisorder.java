@@ -37,8 +37,10 @@ public final class CouplingBoxDisorder implements DisorderKind, SliceDisorder {
 
   @Override
   public Optional<String> whyNotApplicable(Model model) {
-    return model instanceof TransverseFieldChain ? Optional.empty()
-        : Optional.of(NAME + " needs a transverse-field chain model (ising-chain), not " + model.name());
+    return model instanceof TransverseFieldChain
+        ? Optional.empty()
+        : Optional.of(
+            NAME + " needs a transverse-field chain model (ising-chain), not " + model.name());
   }
 
   @Override
@@ -47,7 +49,13 @@ public final class CouplingBoxDisorder implements DisorderKind, SliceDisorder {
   }
 
   @Override
-  public void apply(DisorderTerm term, Model model, ParameterValues parameters, Lattice lattice, RandomGenerator random, HamiltonianBuilder out) {
+  public void apply(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice lattice,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
     TransverseFieldChain chain = (TransverseFieldChain) model;
     double w = term.strength();
     for (int bond = 0; bond < chain.bondCount(lattice); bond++) {
@@ -58,11 +66,20 @@ public final class CouplingBoxDisorder implements DisorderKind, SliceDisorder {
   /** Slice n = site n of the chain: one draw for bond n (n → n+1), J_n = J + W u_n. */
   @Override
   public Optional<String> whyNotSliceable(Model model) {
-    return model.dimension() == 1 ? Optional.empty() : Optional.of(NAME + " is drawn slice by slice only on a chain");
+    return model.dimension() == 1
+        ? Optional.empty()
+        : Optional.of(NAME + " is drawn slice by slice only on a chain");
   }
 
   @Override
-  public void applyToSlice(DisorderTerm term, Model model, ParameterValues parameters, Lattice window, int sliceSites, RandomGenerator random, HamiltonianBuilder out) {
+  public void applyToSlice(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice window,
+      int sliceSites,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
     TransverseFieldChain chain = (TransverseFieldChain) model;
     chain.addCouplingShift(window, 0, term.strength() * (random.nextDouble() - 0.5), out);
   }

@@ -71,5 +71,11 @@ public interface DisorderKind {
    * @param random consumed
    * @param out terms appended
    */
-  void apply(DisorderTerm term, Model model, ParameterValues parameters, Lattice lattice, RandomGenerator random, HamiltonianBuilder out);
+  void apply(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice lattice,
+      RandomGenerator random,
+      HamiltonianBuilder out);
 }

@@ -36,8 +36,10 @@ public final class FieldBoxDisorder implements DisorderKind, SliceDisorder {
 
   @Override
   public Optional<String> whyNotApplicable(Model model) {
-    return model instanceof TransverseFieldChain ? Optional.empty()
-        : Optional.of(NAME + " needs a transverse-field chain model (ising-chain), not " + model.name());
+    return model instanceof TransverseFieldChain
+        ? Optional.empty()
+        : Optional.of(
+            NAME + " needs a transverse-field chain model (ising-chain), not " + model.name());
   }
 
   @Override
@@ -46,7 +48,13 @@ public final class FieldBoxDisorder implements DisorderKind, SliceDisorder {
   }
 
   @Override
-  public void apply(DisorderTerm term, Model model, ParameterValues parameters, Lattice lattice, RandomGenerator random, HamiltonianBuilder out) {
+  public void apply(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice lattice,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
     TransverseFieldChain chain = (TransverseFieldChain) model;
     double w = term.strength();
     for (int j = 0; j < lattice.sites(); j++) {
@@ -56,7 +64,14 @@ public final class FieldBoxDisorder implements DisorderKind, SliceDisorder {
 
   /** Slice n = site n of the chain: one draw, h_n = h + W u_n. */
   @Override
-  public void applyToSlice(DisorderTerm term, Model model, ParameterValues parameters, Lattice window, int sliceSites, RandomGenerator random, HamiltonianBuilder out) {
+  public void applyToSlice(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice window,
+      int sliceSites,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
     TransverseFieldChain chain = (TransverseFieldChain) model;
     double w = term.strength();
     for (int j = 0; j < sliceSites; j++) {

@@ -13,9 +13,9 @@ import java.util.Set;
 import java.util.random.RandomGenerator;
 
 /**
- * All-to-all random Majorana couplings of a zero-dimensional cluster: A_{mn} += W·g_{mn} (A_{nm}
- * −= W·g_{mn}), g standard normal, for every pair m &lt; n of the 2·sites Majoranas, drawn row by
- * row (m ascending, then n ascending). A real antisymmetric Gaussian A is the class-D ensemble: only
+ * All-to-all random Majorana couplings of a zero-dimensional cluster: A_{mn} += W·g_{mn} (A_{nm} −=
+ * W·g_{mn}), g standard normal, for every pair m &lt; n of the 2·sites Majoranas, drawn row by row
+ * (m ascending, then n ascending). A real antisymmetric Gaussian A is the class-D ensemble: only
  * particle–hole symmetry is kept.
  */
 public final class MajoranaGaussDisorder implements DisorderKind {
@@ -40,8 +40,12 @@ public final class MajoranaGaussDisorder implements DisorderKind {
 
   @Override
   public Optional<String> whyNotApplicable(Model model) {
-    return model instanceof MajoranaForm && model.dimension() == 0 ? Optional.empty()
-        : Optional.of(NAME + " needs a zero-dimensional Majorana model (majorana-cluster), not " + model.name());
+    return model instanceof MajoranaForm && model.dimension() == 0
+        ? Optional.empty()
+        : Optional.of(
+            NAME
+                + " needs a zero-dimensional Majorana model (majorana-cluster), not "
+                + model.name());
   }
 
   @Override
@@ -50,7 +54,13 @@ public final class MajoranaGaussDisorder implements DisorderKind {
   }
 
   @Override
-  public void apply(DisorderTerm term, Model model, ParameterValues parameters, Lattice lattice, RandomGenerator random, HamiltonianBuilder out) {
+  public void apply(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice lattice,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
     double w = term.strength();
     int count = 2 * lattice.sites();
     for (int m = 0; m < count; m++) {

@@ -50,7 +50,13 @@ public final class OnsiteBoxDisorder implements DisorderKind, SliceDisorder {
   }
 
   @Override
-  public void apply(DisorderTerm term, Model model, ParameterValues parameters, Lattice lattice, RandomGenerator random, HamiltonianBuilder out) {
+  public void apply(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice lattice,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
     double w = term.strength();
     boolean independent = "independent".equals(term.options().getOrDefault("orbitals", "same"));
     int orbitals = lattice.orbitalsPerSite();
@@ -65,9 +71,19 @@ public final class OnsiteBoxDisorder implements DisorderKind, SliceDisorder {
     }
   }
 
-  /** Slice n: one draw per site of the slice (or per orbital), in the slice's site order, as {@link #apply}. */
+  /**
+   * Slice n: one draw per site of the slice (or per orbital), in the slice's site order, as {@link
+   * #apply}.
+   */
   @Override
-  public void applyToSlice(DisorderTerm term, Model model, ParameterValues parameters, Lattice window, int sliceSites, RandomGenerator random, HamiltonianBuilder out) {
+  public void applyToSlice(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice window,
+      int sliceSites,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
     double w = term.strength();
     boolean independent = "independent".equals(term.options().getOrDefault("orbitals", "same"));
     int orbitals = window.orbitalsPerSite();

@@ -12,8 +12,8 @@ import java.util.random.RandomGenerator;
 
 /**
  * Independent Gaussian onsite potential V_s = W·g_s, g_s standard normal ({@link
- * RandomGenerator#nextGaussian()}), so W is the standard deviation; one draw per site in
- * site-index order, applied through {@link Model#addOnsitePotential} (a scalar potential, or a
+ * RandomGenerator#nextGaussian()}), so W is the standard deviation; one draw per site in site-index
+ * order, applied through {@link Model#addOnsitePotential} (a scalar potential, or a
  * chemical-potential/field shift for models that say so).
  */
 public final class OnsiteGaussDisorder implements DisorderKind, SliceDisorder {
@@ -46,7 +46,13 @@ public final class OnsiteGaussDisorder implements DisorderKind, SliceDisorder {
   }
 
   @Override
-  public void apply(DisorderTerm term, Model model, ParameterValues parameters, Lattice lattice, RandomGenerator random, HamiltonianBuilder out) {
+  public void apply(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice lattice,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
     double w = term.strength();
     for (int s = 0; s < lattice.sites(); s++) {
       model.addOnsitePotential(lattice, s, w * random.nextGaussian(), out);
@@ -55,7 +61,14 @@ public final class OnsiteGaussDisorder implements DisorderKind, SliceDisorder {
 
   /** Slice n: one draw per site of the slice, in the slice's site order, as {@link #apply}. */
   @Override
-  public void applyToSlice(DisorderTerm term, Model model, ParameterValues parameters, Lattice window, int sliceSites, RandomGenerator random, HamiltonianBuilder out) {
+  public void applyToSlice(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice window,
+      int sliceSites,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
     double w = term.strength();
     for (int s = 0; s < sliceSites; s++) {
       model.addOnsitePotential(window, s, w * random.nextGaussian(), out);

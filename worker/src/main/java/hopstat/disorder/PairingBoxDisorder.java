@@ -36,8 +36,10 @@ public final class PairingBoxDisorder implements DisorderKind, SliceDisorder {
 
   @Override
   public Optional<String> whyNotApplicable(Model model) {
-    return model instanceof PairingChain ? Optional.empty()
-        : Optional.of(NAME + " needs a BdG wire with bond pairing (pwave-wire), not " + model.name());
+    return model instanceof PairingChain
+        ? Optional.empty()
+        : Optional.of(
+            NAME + " needs a BdG wire with bond pairing (pwave-wire), not " + model.name());
   }
 
   @Override
@@ -46,7 +48,13 @@ public final class PairingBoxDisorder implements DisorderKind, SliceDisorder {
   }
 
   @Override
-  public void apply(DisorderTerm term, Model model, ParameterValues parameters, Lattice lattice, RandomGenerator random, HamiltonianBuilder out) {
+  public void apply(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice lattice,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
     PairingChain chain = (PairingChain) model;
     double w = term.strength();
     for (int bond = 0; bond < chain.bondCount(lattice); bond++) {
@@ -57,11 +65,20 @@ public final class PairingBoxDisorder implements DisorderKind, SliceDisorder {
   /** Slice n = site n of the chain: one draw for bond n (n → n+1), Δ_n = delta + W u_n. */
   @Override
   public Optional<String> whyNotSliceable(Model model) {
-    return model.dimension() == 1 ? Optional.empty() : Optional.of(NAME + " is drawn slice by slice only on a chain");
+    return model.dimension() == 1
+        ? Optional.empty()
+        : Optional.of(NAME + " is drawn slice by slice only on a chain");
   }
 
   @Override
-  public void applyToSlice(DisorderTerm term, Model model, ParameterValues parameters, Lattice window, int sliceSites, RandomGenerator random, HamiltonianBuilder out) {
+  public void applyToSlice(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice window,
+      int sliceSites,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
     PairingChain chain = (PairingChain) model;
     chain.addPairingShift(window, 0, term.strength() * (random.nextDouble() - 0.5), out);
   }

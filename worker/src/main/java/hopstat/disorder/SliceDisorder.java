@@ -38,5 +38,12 @@ public interface SliceDisorder {
    * @param random consumed
    * @param out terms appended; reset to {@code window.orbitals()} by the caller
    */
-  void applyToSlice(DisorderTerm term, Model model, ParameterValues parameters, Lattice window, int sliceSites, RandomGenerator random, HamiltonianBuilder out);
+  void applyToSlice(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice window,
+      int sliceSites,
+      RandomGenerator random,
+      HamiltonianBuilder out);
 }

@@ -22,24 +22,25 @@ import java.util.random.RandomGenerator;
  * <p>Removal keeps the matrix dimension and the L^d lattice structure that kernels rely on: every
  * term present when the vacancies are applied (clean terms and earlier disorder) that touches an
  * orbital of a removed site is set to zero ({@link HamiltonianBuilder#zeroTermsTouching}), and the
- * removed site then gets the onsite potential U through {@link Model#addOnsitePotential}: U on every
- * orbital of a normal model, ±U on the particle/hole orbitals of a BdG model (which of the two is
- * the particle level depends on the model's potential convention: pip-square and custom models add
- * +U to particles, pwave-wire reads V as a chemical-potential shift and puts the particle at −U;
- * ising-chain reads it as a transverse-field shift, which gives ±2U), so particle–hole symmetry
- * survives. Each removed site is thus an exactly decoupled block with levels at ±U only (±2U on
- * ising-chain), and the rest of the spectrum is exactly that of the sample with those sites deleted.
+ * removed site then gets the onsite potential U through {@link Model#addOnsitePotential}: U on
+ * every orbital of a normal model, ±U on the particle/hole orbitals of a BdG model (which of the
+ * two is the particle level depends on the model's potential convention: pip-square and custom
+ * models add +U to particles, pwave-wire reads V as a chemical-potential shift and puts the
+ * particle at −U; ising-chain reads it as a transverse-field shift, which gives ±2U), so
+ * particle–hole symmetry survives. Each removed site is thus an exactly decoupled block with levels
+ * at ±U only (±2U on ising-chain), and the rest of the spectrum is exactly that of the sample with
+ * those sites deleted.
  *
  * <p>Rule for U: U = {@value #LEVEL_FACTOR} · R, R the Gershgorin radius max_i Σ_j |H_ij| of the
- * terms present before the removal (triangle-inequality bound, terms summed by absolute value; 1
- * if all terms vanish). By Cauchy interlacing the diluted sample's spectrum lies in [−R, R], so the
+ * terms present before the removal (triangle-inequality bound, terms summed by absolute value; 1 if
+ * all terms vanish). By Cauchy interlacing the diluted sample's spectrum lies in [−R, R], so the
  * vacancy levels are at least 999 R away from every other level. Observables that scale or bin by
  * the whole spectrum are rejected with this kind ({@link #hasDecoupledLevels()}): KPM (its
  * Chebyshev rescaling would stretch by 10³), level statistics and IPR without explicit windows, and
- * the localizer with automatic kappa; {@code lyapunov} too, as this kind is not drawn slice by slice
- * ({@link SliceDisorder} not implemented). Gaps at E_F, Bott/Chern/Majorana invariants are unaffected:
- * a decoupled level is an eigenvector localised on one site, which contributes nothing (or the same
- * factor to both Pfaffians of the Majorana number).
+ * the localizer with automatic kappa; {@code lyapunov} too, as this kind is not drawn slice by
+ * slice ({@link SliceDisorder} not implemented). Gaps at E_F, Bott/Chern/Majorana invariants are
+ * unaffected: a decoupled level is an eigenvector localised on one site, which contributes nothing
+ * (or the same factor to both Pfaffians of the Majorana number).
  *
  * <p>Order: terms added by later disorder terms would not be cancelled, so vacancies must be the
  * last disorder term ({@link #whyNotBefore}). Symmetry: the real potential keeps T and, with the
@@ -67,7 +68,8 @@ public final class VacancyDisorder implements DisorderKind {
 
   @Override
   public Set<Symmetry> keptSymmetries(Model model) {
-    if (model instanceof ChiralChain || (model instanceof CustomModel c && !c.definition().isBdg())) {
+    if (model instanceof ChiralChain
+        || (model instanceof CustomModel c && !c.definition().isBdg())) {
       return Set.of(Symmetry.TIME_REVERSAL);
     }
     return Set.of(Symmetry.TIME_REVERSAL, Symmetry.PARTICLE_HOLE);
@@ -76,20 +78,29 @@ public final class VacancyDisorder implements DisorderKind {
   @Override
   public Optional<String> whyNotApplicable(Model model) {
     return model.dimension() == 0
-        ? Optional.of(NAME + " removes lattice sites; " + model.name() + " is zero-dimensional (no lattice to dilute)")
+        ? Optional.of(
+            NAME
+                + " removes lattice sites; "
+                + model.name()
+                + " is zero-dimensional (no lattice to dilute)")
         : Optional.empty();
   }
 
   @Override
   public Optional<String> whyNotValidStrength(double strength) {
-    return strength >= 0 && strength < 1 ? Optional.empty()
-        : Optional.of("the strength of " + NAME + " is the vacancy concentration: must lie in [0, 1)");
+    return strength >= 0 && strength < 1
+        ? Optional.empty()
+        : Optional.of(
+            "the strength of " + NAME + " is the vacancy concentration: must lie in [0, 1)");
   }
 
   @Override
   public Optional<String> whyNotBefore(DisorderKind later) {
-    return Optional.of(NAME + " must be the last disorder term: it cancels only the terms present when it is applied, so "
-        + later.name() + " would act on removed sites");
+    return Optional.of(
+        NAME
+            + " must be the last disorder term: it cancels only the terms present when it is applied, so "
+            + later.name()
+            + " would act on removed sites");
   }
 
   @Override
@@ -103,11 +114,19 @@ public final class VacancyDisorder implements DisorderKind {
   }
 
   @Override
-  public void apply(DisorderTerm term, Model model, ParameterValues parameters, Lattice lattice, RandomGenerator random, HamiltonianBuilder out) {
+  public void apply(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice lattice,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
     double c = term.strength();
-    whyNotValidStrength(c).ifPresent(reason -> {
-      throw new InvalidInputException("disorder.strength", c, reason);
-    });
+    whyNotValidStrength(c)
+        .ifPresent(
+            reason -> {
+              throw new InvalidInputException("disorder.strength", c, reason);
+            });
     int sites = lattice.sites();
     int orbitals = lattice.orbitalsPerSite();
     boolean[] removedOrbital = new boolean[lattice.orbitals()];
@@ -134,7 +153,10 @@ public final class VacancyDisorder implements DisorderKind {
     }
   }
 
-  /** max_i Σ_j |H_ij| over the stored terms (each off-diagonal term counts in both rows); 1 if all vanish. */
+  /**
+   * max_i Σ_j |H_ij| over the stored terms (each off-diagonal term counts in both rows); 1 if all
+   * vanish.
+   */
   static double gershgorinRadius(HamiltonianBuilder terms) {
     double[] rowSums = new double[terms.dimension()];
     for (int k = 0; k < terms.termCount(); k++) {

@@ -39,8 +39,12 @@ public final class ZeemanBoxDisorder implements DisorderKind {
 
   @Override
   public Optional<String> whyNotApplicable(Model model) {
-    return model instanceof ZeemanCoupling ? Optional.empty()
-        : Optional.of(NAME + " needs a spinful model with a Zeeman coupling (diii-wire), not " + model.name());
+    return model instanceof ZeemanCoupling
+        ? Optional.empty()
+        : Optional.of(
+            NAME
+                + " needs a spinful model with a Zeeman coupling (diii-wire), not "
+                + model.name());
   }
 
   @Override
@@ -49,7 +53,13 @@ public final class ZeemanBoxDisorder implements DisorderKind {
   }
 
   @Override
-  public void apply(DisorderTerm term, Model model, ParameterValues parameters, Lattice lattice, RandomGenerator random, HamiltonianBuilder out) {
+  public void apply(
+      DisorderTerm term,
+      Model model,
+      ParameterValues parameters,
+      Lattice lattice,
+      RandomGenerator random,
+      HamiltonianBuilder out) {
     ZeemanCoupling zeeman = (ZeemanCoupling) model;
     double w = term.strength();
     for (int s = 0; s < lattice.sites(); s++) {

@@ -32,14 +32,20 @@ public final class ChernMarkerKernel {
    * @param workspace scratch; after the call {@link #siteMarker} holds c(s)·ρ per site
    * @return the bulk average
    */
-  public static ChernMarkerResult compute(Lattice lattice, ZMatrixRMaj occupied, ChernMarkerWorkspace workspace) {
+  public static ChernMarkerResult compute(
+      Lattice lattice, ZMatrixRMaj occupied, ChernMarkerWorkspace workspace) {
     if (lattice.dimension() != 2) {
       throw new IllegalArgumentException("the Chern marker needs a two-dimensional lattice");
     }
     int rows = occupied.numRows;
     int n = occupied.numCols;
     if (rows != lattice.orbitals()) {
-      throw new IllegalArgumentException("occupied states have " + rows + " rows, lattice has " + lattice.orbitals() + " orbitals");
+      throw new IllegalArgumentException(
+          "occupied states have "
+              + rows
+              + " rows, lattice has "
+              + lattice.orbitals()
+              + " orbitals");
     }
     int sites = lattice.sites();
     int perSite = lattice.orbitalsPerSite();
@@ -77,7 +83,8 @@ public final class ChernMarkerKernel {
           int base = 2 * (s * perSite + o) * n;
           // Im Σ_b W_ib conj(Ψ_ib)
           for (int b = 0; b < n; b++) {
-            sum += w[base + 2 * b + 1] * psi[base + 2 * b] - w[base + 2 * b] * psi[base + 2 * b + 1];
+            sum +=
+                w[base + 2 * b + 1] * psi[base + 2 * b] - w[base + 2 * b] * psi[base + 2 * b + 1];
           }
         }
         marker[s] = -4.0 * Math.PI * density * sum;
@@ -88,7 +95,8 @@ public final class ChernMarkerKernel {
     double total = 0.0;
     int count = 0;
     for (int s = 0; s < sites; s++) {
-      if (Math.abs(lattice.position(0, s) - xc) <= qx + 1e-9 && Math.abs(lattice.position(1, s) - yc) <= qy + 1e-9) {
+      if (Math.abs(lattice.position(0, s) - xc) <= qx + 1e-9
+          && Math.abs(lattice.position(1, s) - yc) <= qy + 1e-9) {
         total += marker[s];
         count++;
       }
@@ -107,7 +115,8 @@ public final class ChernMarkerKernel {
   }
 
   /** out = diag(r_d − centre) Ψ, r_d the orbital positions. */
-  private static void scaleRows(Lattice lattice, int d, double centre, ZMatrixRMaj psi, ZMatrixRMaj out) {
+  private static void scaleRows(
+      Lattice lattice, int d, double centre, ZMatrixRMaj psi, ZMatrixRMaj out) {
     int rows = psi.numRows;
     int cols = psi.numCols;
     out.reshape(rows, cols);

@@ -12,9 +12,9 @@ import hopstat.model.SymmetryOperator;
 import org.ejml.data.ZMatrixRMaj;
 
 /**
- * Z2 invariant of a closed, disordered class-DIII chain (T² = −1, C² = +1, S = TC), by the
- * Pfaffian / determinant-continuation formula of Qi, Hughes, Zhang, PRB 81, 134508 (2010) and
- * Budich &amp; Ardonne, PRB 88, 134523 (2013), applied to the ring as one supercell:
+ * Z2 invariant of a closed, disordered class-DIII chain (T² = −1, C² = +1, S = TC), by the Pfaffian
+ * / determinant-continuation formula of Qi, Hughes, Zhang, PRB 81, 134508 (2010) and Budich &amp;
+ * Ardonne, PRB 88, 134523 (2013), applied to the ring as one supercell:
  *
  * <pre>  (−1)^ν = [Pf q(π) / Pf q(0)] · √det q(0) / √det q(π),</pre>
  *
@@ -38,9 +38,9 @@ import org.ejml.data.ZMatrixRMaj;
  * phase changes by more than {@link #MAX_PHASE_STEP} or ln|det q| by more than {@link
  * #MAX_LOG_STEP}, and doubled again (up to the initial step) when the phase changed by less than a
  * quarter of that. With θ(π) − θ(0) the continued phase, (−1)^ν = exp(i[arg Pf q(π) − arg Pf q(0) −
- * (θ(π) − θ(0))/2]), which is ±1 up to rounding (Pf² = det). det q(φ) ≠ 0 exactly while the
- * twisted ring has no E = 0 eigenvalue; a vanishing determinant or Pfaffian, or a step below
- * {@link #MIN_STEP}, is reported as {@link DiiiZ2Result.Status#GAP_CLOSED}.
+ * (θ(π) − θ(0))/2]), which is ±1 up to rounding (Pf² = det). det q(φ) ≠ 0 exactly while the twisted
+ * ring has no E = 0 eigenvalue; a vanishing determinant or Pfaffian, or a step below {@link
+ * #MIN_STEP}, is reported as {@link DiiiZ2Result.Status#GAP_CLOSED}.
  *
  * <p>Cost: per determinant an LU of order M = L·o/2 (o orbitals per site), ≈ 8M³/3 real flops; a
  * gapped clean ring needs about 10 determinants (the continued phase changes by O(π) in total), a
@@ -86,19 +86,31 @@ public final class DiiiZ2Kernel {
    * @throws IllegalArgumentException for a lattice or operators outside this contract
    * @throws IllegalStateException if q(0) or q(π) is not antisymmetric (T does not hold)
    */
-  public static DiiiZ2Result compute(Lattice lattice, HamiltonianBuilder terms, SymmetryOperator timeReversal, SymmetryOperator chiral,
+  public static DiiiZ2Result compute(
+      Lattice lattice,
+      HamiltonianBuilder terms,
+      SymmetryOperator timeReversal,
+      SymmetryOperator chiral,
       DiiiZ2Workspace workspace) {
-    if (lattice.dimension() != 1 || lattice.boundary() != Boundary.PERIODIC || lattice.linearSize() < 3) {
-      throw new IllegalArgumentException("the DIII Z2 needs a periodic chain with L >= 3, got " + lattice);
+    if (lattice.dimension() != 1
+        || lattice.boundary() != Boundary.PERIODIC
+        || lattice.linearSize() < 3) {
+      throw new IllegalArgumentException(
+          "the DIII Z2 needs a periodic chain with L >= 3, got " + lattice);
     }
     int o = lattice.orbitalsPerSite();
     if (o % 2 != 0 || terms.dimension() != lattice.orbitals()) {
-      throw new IllegalArgumentException("the DIII Z2 needs an even number of orbitals per site and a matching builder");
+      throw new IllegalArgumentException(
+          "the DIII Z2 needs an even number of orbitals per site and a matching builder");
     }
-    if (timeReversal.symmetry() != Symmetry.TIME_REVERSAL || chiral.symmetry() != Symmetry.CHIRAL
-        || timeReversal.orbitalsPerSite() != o || chiral.orbitalsPerSite() != o
-        || timeReversal.siteSignCount() != 0 || chiral.siteSignCount() != 0) {
-      throw new IllegalArgumentException("the DIII Z2 needs unstaggered local T and S operators on " + o + " orbitals");
+    if (timeReversal.symmetry() != Symmetry.TIME_REVERSAL
+        || chiral.symmetry() != Symmetry.CHIRAL
+        || timeReversal.orbitalsPerSite() != o
+        || chiral.orbitalsPerSite() != o
+        || timeReversal.siteSignCount() != 0
+        || chiral.siteSignCount() != 0) {
+      throw new IllegalArgumentException(
+          "the DIII Z2 needs unstaggered local T and S operators on " + o + " orbitals");
     }
     double[][] frame = chiralFrame(timeReversal, chiral);
     int m = lattice.sites() * o / 2;
@@ -107,10 +119,12 @@ public final class DiiiZ2Kernel {
 
     buildBlock(lattice, terms, frame, 0.0, workspace.block);
     ComplexLogResult pf0 = pfaffian(workspace);
-    ComplexLogResult det0 = ComplexDeterminantKernel.compute(workspace.block, workspace.determinant);
+    ComplexLogResult det0 =
+        ComplexDeterminantKernel.compute(workspace.block, workspace.determinant);
     int evaluations = 1;
     if (isZero(pf0) || isZero(det0)) {
-      return new DiiiZ2Result(DiiiZ2Result.Status.GAP_CLOSED, -1, evaluations, Double.NaN, Double.NaN);
+      return new DiiiZ2Result(
+          DiiiZ2Result.Status.GAP_CLOSED, -1, evaluations, Double.NaN, Double.NaN);
     }
     double phi = 0.0;
     double step = INITIAL_STEP;
@@ -121,16 +135,19 @@ public final class DiiiZ2Kernel {
     while (phi < Math.PI) {
       double next = Math.min(Math.PI, phi + step);
       buildBlock(lattice, terms, frame, next, workspace.block);
-      ComplexLogResult det = ComplexDeterminantKernel.compute(workspace.block, workspace.determinant);
+      ComplexLogResult det =
+          ComplexDeterminantKernel.compute(workspace.block, workspace.determinant);
       evaluations++;
       if (isZero(det)) {
-        return new DiiiZ2Result(DiiiZ2Result.Status.GAP_CLOSED, -1, evaluations, smallest, Double.NaN);
+        return new DiiiZ2Result(
+            DiiiZ2Result.Status.GAP_CLOSED, -1, evaluations, smallest, Double.NaN);
       }
       double change = ComplexLogResult.wrap(det.phase() - phase);
       if (Math.abs(change) > MAX_PHASE_STEP || Math.abs(det.logAbs() - logAbs) > MAX_LOG_STEP) {
         step *= 0.5;
         if (step < MIN_STEP) {
-          return new DiiiZ2Result(DiiiZ2Result.Status.GAP_CLOSED, -1, evaluations, smallest, Double.NaN);
+          return new DiiiZ2Result(
+              DiiiZ2Result.Status.GAP_CLOSED, -1, evaluations, smallest, Double.NaN);
         }
         continue;
       }
@@ -146,14 +163,20 @@ public final class DiiiZ2Kernel {
     // workspace.block now holds q(π)
     ComplexLogResult pfPi = pfaffian(workspace);
     if (isZero(pfPi)) {
-      return new DiiiZ2Result(DiiiZ2Result.Status.GAP_CLOSED, -1, evaluations, smallest, Double.NaN);
+      return new DiiiZ2Result(
+          DiiiZ2Result.Status.GAP_CLOSED, -1, evaluations, smallest, Double.NaN);
     }
     double total = ComplexLogResult.wrap(pfPi.phase() - pf0.phase() - 0.5 * continued);
     double defect = Math.min(Math.abs(total), Math.PI - Math.abs(total));
     if (defect > QUANTISATION_TOLERANCE) {
       return new DiiiZ2Result(DiiiZ2Result.Status.NOT_QUANTISED, -1, evaluations, smallest, defect);
     }
-    return new DiiiZ2Result(DiiiZ2Result.Status.CONVERGED, Math.abs(total) > 0.5 * Math.PI ? 1 : 0, evaluations, smallest, defect);
+    return new DiiiZ2Result(
+        DiiiZ2Result.Status.CONVERGED,
+        Math.abs(total) > 0.5 * Math.PI ? 1 : 0,
+        evaluations,
+        smallest,
+        defect);
   }
 
   private static boolean isZero(ComplexLogResult r) {
@@ -172,14 +195,19 @@ public final class DiiiZ2Kernel {
         int ij = 2 * (i * m + j);
         int ji = 2 * (j * m + i);
         max = Math.max(max, Math.hypot(q.data[ij], q.data[ij + 1]));
-        defect = Math.max(defect, Math.hypot(q.data[ij] + q.data[ji], q.data[ij + 1] + q.data[ji + 1]));
+        defect =
+            Math.max(defect, Math.hypot(q.data[ij] + q.data[ji], q.data[ij + 1] + q.data[ji + 1]));
         a.data[ij] = 0.5 * (q.data[ij] - q.data[ji]);
         a.data[ij + 1] = 0.5 * (q.data[ij + 1] - q.data[ji + 1]);
       }
     }
     if (defect > ANTISYMMETRY_TOLERANCE * max) {
-      throw new IllegalStateException("the chiral block is not antisymmetric at a time-reversal invariant twist (max |q + q^T| = "
-          + defect + " for max |q| = " + max + "): time reversal is broken");
+      throw new IllegalStateException(
+          "the chiral block is not antisymmetric at a time-reversal invariant twist (max |q + q^T| = "
+              + defect
+              + " for max |q| = "
+              + max
+              + "): time reversal is broken");
     }
     return ComplexPfaffianKernel.compute(a, workspace.pfaffian);
   }
@@ -189,7 +217,8 @@ public final class DiiiZ2Kernel {
    *
    * @param frame {re v₊, im v₊, re v₋, im v₋}, each o × (o/2) row-major
    */
-  private static void buildBlock(Lattice lattice, HamiltonianBuilder terms, double[][] frame, double phi, ZMatrixRMaj out) {
+  private static void buildBlock(
+      Lattice lattice, HamiltonianBuilder terms, double[][] frame, double phi, ZMatrixRMaj out) {
     int o = lattice.orbitalsPerSite();
     int half = o / 2;
     int last = lattice.sites() - 1;
@@ -218,7 +247,16 @@ public final class DiiiZ2Kernel {
   }
 
   /** Adds conj(v₊[α][a]) z v₋[β][b] to q[(sp,a),(sq,b)] for all a, b. */
-  private static void accumulate(ZMatrixRMaj out, double[][] frame, int half, int sp, int alpha, int sq, int beta, double zr, double zi) {
+  private static void accumulate(
+      ZMatrixRMaj out,
+      double[][] frame,
+      int half,
+      int sp,
+      int alpha,
+      int sq,
+      int beta,
+      double zr,
+      double zi) {
     double[] pr = frame[0];
     double[] pi = frame[1];
     double[] mr = frame[2];
@@ -248,8 +286,8 @@ public final class DiiiZ2Kernel {
    * columns of (1 + Γ)/2), v₋ = U_T v₊*.
    *
    * @return {re v₊, im v₊, re v₋, im v₋}, each o × (o/2) row-major
-   * @throws IllegalArgumentException if S² is not a multiple of 1, T² ≠ −1, or the ±1 spaces of
-   *     Γ are not of equal size o/2
+   * @throws IllegalArgumentException if S² is not a multiple of 1, T² ≠ −1, or the ±1 spaces of Γ
+   *     are not of equal size o/2
    */
   static double[][] chiralFrame(SymmetryOperator timeReversal, SymmetryOperator chiral) {
     int o = chiral.orbitalsPerSite();
@@ -335,7 +373,8 @@ public final class DiiiZ2Kernel {
       }
     }
     if (found != half) {
-      throw new IllegalArgumentException("the chiral operator's +1 eigenspace has dimension " + found + ", not " + half);
+      throw new IllegalArgumentException(
+          "the chiral operator's +1 eigenspace has dimension " + found + ", not " + half);
     }
     // v₋ = U_T conj(v₊)
     double[] mr = new double[o * half];
@@ -359,7 +398,8 @@ public final class DiiiZ2Kernel {
     return new double[][] {pr, pi, mr, mi};
   }
 
-  private static void multiply(double[] ar, double[] ai, double[] br, double[] bi, int o, double[] outR, double[] outI) {
+  private static void multiply(
+      double[] ar, double[] ai, double[] br, double[] bi, int o, double[] outR, double[] outI) {
     for (int i = 0; i < o; i++) {
       for (int j = 0; j < o; j++) {
         double re = 0;

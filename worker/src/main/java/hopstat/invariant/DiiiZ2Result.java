@@ -10,7 +10,12 @@ package hopstat.invariant;
  * @param quantisationDefect distance (radians) of the phase of (−1)^ν from 0 or π; NaN unless the
  *     continuation reached φ = π
  */
-public record DiiiZ2Result(Status status, int z2, int determinantEvaluations, double smallestStep, double quantisationDefect) {
+public record DiiiZ2Result(
+    Status status,
+    int z2,
+    int determinantEvaluations,
+    double smallestStep,
+    double quantisationDefect) {
 
   /** Why the invariant is or is not defined. */
   public enum Status {
@@ -27,7 +32,8 @@ public record DiiiZ2Result(Status status, int z2, int determinantEvaluations, do
 
   public DiiiZ2Result {
     if (status == Status.CONVERGED ? (z2 != 0 && z2 != 1) : z2 != -1) {
-      throw new IllegalArgumentException("z2 must be 0 or 1 when converged, -1 otherwise: " + z2 + " (" + status + ")");
+      throw new IllegalArgumentException(
+          "z2 must be 0 or 1 when converged, -1 otherwise: " + z2 + " (" + status + ")");
     }
   }
 }

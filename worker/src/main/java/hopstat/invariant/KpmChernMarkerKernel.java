@@ -7,33 +7,34 @@ import hopstat.spectrum.KpmKernel;
 import java.util.random.RandomGenerator;
 
 /**
- * Bulk-averaged Bianco–Resta local Chern marker (Bianco &amp; Resta, PRB 84, 241106(R) (2011)) of an
- * open two-dimensional sample without diagonalisation: the projector P = θ(E_F − H) is applied to
- * vectors as a Chebyshev series with the Jackson kernel (kernel polynomial method, Weiße, Wellein,
- * Alvermann, Fehske, RMP 78, 275 (2006); see {@link KpmKernel}) and the trace over the bulk region
- * is estimated stochastically.
+ * Bulk-averaged Bianco–Resta local Chern marker (Bianco &amp; Resta, PRB 84, 241106(R) (2011)) of
+ * an open two-dimensional sample without diagonalisation: the projector P = θ(E_F − H) is applied
+ * to vectors as a Chebyshev series with the Jackson kernel (kernel polynomial method, Weiße,
+ * Wellein, Alvermann, Fehske, RMP 78, 275 (2006); see {@link KpmKernel}) and the trace over the
+ * bulk region is estimated stochastically.
  *
- * <p><b>Marker.</b> As in {@link ChernMarkerKernel}: c(s) = −4π ρ Im Σ_{o on s} ⟨s,o|P X Q Y P|s,o⟩,
- * ρ = sites/(extent_x·extent_y) the site density, X, Y the orbital positions ({@link
- * Lattice#orbitalPosition}) centred on the middle of the sample's span of orbital positions, and the result is the mean of c(s) over the bulk sites: the sites with |x − x_c| ≤
- * (x_max − x_min)/4 and |y − y_c| ≤ (y_max − y_min)/4 (the central half in each direction, the same
- * region and sign convention as {@code chern-marker}: C = +1 for qwz with −2 &lt; m &lt; 0).
+ * <p><b>Marker.</b> As in {@link ChernMarkerKernel}: c(s) = −4π ρ Im Σ_{o on s} ⟨s,o|P X Q Y
+ * P|s,o⟩, ρ = sites/(extent_x·extent_y) the site density, X, Y the orbital positions ({@link
+ * Lattice#orbitalPosition}) centred on the middle of the sample's span of orbital positions, and
+ * the result is the mean of c(s) over the bulk sites: the sites with |x − x_c| ≤ (x_max − x_min)/4
+ * and |y − y_c| ≤ (y_max − y_min)/4 (the central half in each direction, the same region and sign
+ * convention as {@code chern-marker}: C = +1 for qwz with −2 &lt; m &lt; 0).
  *
- * <p><b>Per vector.</b> For a vector ξ, with P̃ the polynomial projector (Hermitian):
- * ⟨ξ|P̃ X (1 − P̃) Y P̃|ξ⟩ = ⟨v|X (Yv − P̃Yv)⟩, v = P̃ξ, so each vector costs two projector
- * applications, 2(M − 1) sparse products.
+ * <p><b>Per vector.</b> For a vector ξ, with P̃ the polynomial projector (Hermitian): ⟨ξ|P̃ X (1 −
+ * P̃) Y P̃|ξ⟩ = ⟨v|X (Yv − P̃Yv)⟩, v = P̃ξ, so each vector costs two projector applications, 2(M −
+ * 1) sparse products.
  *
- * <p><b>Stochastic trace.</b> Tr_B A = E⟨ξ|A|ξ⟩ for ξ with independent random phases e^{2πiu} on the
- * orbitals of the bulk sites and zero elsewhere (Weiße et al. 2006, Sec. II.D). Draws: vector after
- * vector, one {@code nextDouble()} per bulk orbital in increasing matrix index. Each vector gives an
- * unbiased estimate of the bulk average; the result is their mean, with the standard error s/√R
- * over the R per-vector estimates (R ≥ 2).
+ * <p><b>Stochastic trace.</b> Tr_B A = E⟨ξ|A|ξ⟩ for ξ with independent random phases e^{2πiu} on
+ * the orbitals of the bulk sites and zero elsewhere (Weiße et al. 2006, Sec. II.D). Draws: vector
+ * after vector, one {@code nextDouble()} per bulk orbital in increasing matrix index. Each vector
+ * gives an unbiased estimate of the bulk average; the result is their mean, with the standard error
+ * s/√R over the R per-vector estimates (R ≥ 2).
  *
- * <p><b>Truncation.</b> P̃ equals P up to a Jackson-broadened step of width ≈ π a/M in energy (a the
- * half-width of the rescaled spectrum), so the truncation error is small when the (mobility) gap
- * around E_F is wide compared to π a/M; states inside the broadened window (edge states of the open
- * sample) sit far from the bulk region. Not included in the standard error; tests bound it against
- * the dense marker.
+ * <p><b>Truncation.</b> P̃ equals P up to a Jackson-broadened step of width ≈ π a/M in energy (a
+ * the half-width of the rescaled spectrum), so the truncation error is small when the (mobility)
+ * gap around E_F is wide compared to π a/M; states inside the broadened window (edge states of the
+ * open sample) sit far from the bulk region. Not included in the standard error; tests bound it
+ * against the dense marker.
  *
  * <p>Cost 2R(M − 1) products with H (≈ 8 nnz flops each) plus O(R·N); memory O(N) (workspace).
  */
@@ -53,10 +54,18 @@ public final class KpmChernMarkerKernel {
    * @param random the caller's generator; advanced by R × (bulk orbitals) draws
    * @param workspace scratch
    */
-  public static KpmChernMarkerResult compute(CsrHermitianMatrix h, Lattice lattice, ChebyshevScale scale, double fermiEnergy,
-      int moments, int vectors, RandomGenerator random, KpmChernMarkerWorkspace workspace) {
+  public static KpmChernMarkerResult compute(
+      CsrHermitianMatrix h,
+      Lattice lattice,
+      ChebyshevScale scale,
+      double fermiEnergy,
+      int moments,
+      int vectors,
+      RandomGenerator random,
+      KpmChernMarkerWorkspace workspace) {
     if (vectors < 2) {
-      throw new IllegalArgumentException("need at least two random vectors for an error estimate: " + vectors);
+      throw new IllegalArgumentException(
+          "need at least two random vectors for an error estimate: " + vectors);
     }
     int n = prepare(h, lattice, scale, fermiEnergy, moments, vectors, workspace);
     int bulkOrbitals = bulkOrbitals(lattice, workspace.bulk);
@@ -92,7 +101,12 @@ public final class KpmChernMarkerKernel {
    *
    * @see #compute
    */
-  public static double exactTrace(CsrHermitianMatrix h, Lattice lattice, ChebyshevScale scale, double fermiEnergy, int moments,
+  public static double exactTrace(
+      CsrHermitianMatrix h,
+      Lattice lattice,
+      ChebyshevScale scale,
+      double fermiEnergy,
+      int moments,
       KpmChernMarkerWorkspace workspace) {
     int n = prepare(h, lattice, scale, fermiEnergy, moments, 1, workspace);
     int bulkOrbitals = bulkOrbitals(lattice, workspace.bulk);
@@ -130,7 +144,8 @@ public final class KpmChernMarkerKernel {
     int perSite = lattice.orbitalsPerSite();
     int count = 0;
     for (int s = 0; s < sites; s++) {
-      if (Math.abs(lattice.position(0, s) - xc) <= qx && Math.abs(lattice.position(1, s) - yc) <= qy) {
+      if (Math.abs(lattice.position(0, s) - xc) <= qx
+          && Math.abs(lattice.position(1, s) - yc) <= qy) {
         for (int o = 0; o < perSite; o++) {
           out[count++] = s * perSite + o;
         }
@@ -139,14 +154,21 @@ public final class KpmChernMarkerKernel {
     return count;
   }
 
-  private static int prepare(CsrHermitianMatrix h, Lattice lattice, ChebyshevScale scale, double fermiEnergy, int moments,
-      int vectors, KpmChernMarkerWorkspace workspace) {
+  private static int prepare(
+      CsrHermitianMatrix h,
+      Lattice lattice,
+      ChebyshevScale scale,
+      double fermiEnergy,
+      int moments,
+      int vectors,
+      KpmChernMarkerWorkspace workspace) {
     if (lattice.dimension() != 2) {
       throw new IllegalArgumentException("the Chern marker needs a two-dimensional lattice");
     }
     int n = h.dimension();
     if (n != lattice.orbitals()) {
-      throw new IllegalArgumentException("matrix of dimension " + n + " does not match " + lattice.orbitals() + " orbitals");
+      throw new IllegalArgumentException(
+          "matrix of dimension " + n + " does not match " + lattice.orbitals() + " orbitals");
     }
     if (moments < 2) {
       throw new IllegalArgumentException("need at least two moments: " + moments);
@@ -157,8 +179,14 @@ public final class KpmChernMarkerKernel {
   }
 
   /** −4πρ Im⟨ξ|P̃X(1 − P̃)YP̃|ξ⟩ / bulkSites for one probe ξ. */
-  private static double probeValue(CsrHermitianMatrix h, Lattice lattice, ChebyshevScale scale, int moments, double[] probe,
-      int bulkSites, KpmChernMarkerWorkspace ws) {
+  private static double probeValue(
+      CsrHermitianMatrix h,
+      Lattice lattice,
+      ChebyshevScale scale,
+      int moments,
+      double[] probe,
+      int bulkSites,
+      KpmChernMarkerWorkspace ws) {
     int n = h.dimension();
     int sites = lattice.sites();
     double xMin = lattice.minOrbitalPosition(0);

@@ -12,4 +12,5 @@ package hopstat.invariant;
  * @param bulkSites sites in the bulk region
  * @param moments M, the number of Chebyshev terms of the projector
  */
-public record KpmChernMarkerResult(double bulkAverage, double standardError, int vectors, int bulkSites, int moments) {}
+public record KpmChernMarkerResult(
+    double bulkAverage, double standardError, int vectors, int bulkSites, int moments) {}

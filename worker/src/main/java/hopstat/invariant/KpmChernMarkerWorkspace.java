@@ -4,8 +4,8 @@ import hopstat.spectrum.KpmWorkspace;
 
 /**
  * Scratch of {@link KpmChernMarkerKernel}: the KPM recursion vectors, five further complex vectors
- * of length N, the bulk orbital list and the projector coefficients. Memory ≈ 150·N bytes.
- * Grows to the largest problem seen, never shrinks; one per worker thread.
+ * of length N, the bulk orbital list and the projector coefficients. Memory ≈ 150·N bytes. Grows to
+ * the largest problem seen, never shrinks; one per worker thread.
  */
 public final class KpmChernMarkerWorkspace {
 
@@ -37,6 +37,8 @@ public final class KpmChernMarkerWorkspace {
 
   /** Bytes held by the vectors (for memory reports). */
   public long vectorBytes() {
-    return kpm.vectorBytes() + 8L * (probe.length + projected.length + yProjected.length + projectedTwice.length) + 4L * bulk.length;
+    return kpm.vectorBytes()
+        + 8L * (probe.length + projected.length + yProjected.length + projectedTwice.length)
+        + 4L * bulk.length;
   }
 }

@@ -45,30 +45,40 @@ public final class MajoranaKernel {
    * @param terms read: the realised BdG terms (built with the periodic closure)
    * @param workspace scratch
    */
-  public static MajoranaNumberResult majoranaNumber(MajoranaForm form, Lattice lattice, HamiltonianBuilder terms, MajoranaWorkspace workspace) {
-    if (lattice.dimension() != 1 || lattice.boundary() != Boundary.PERIODIC || lattice.linearSize() < 3) {
-      throw new IllegalArgumentException("the Majorana number needs a periodic chain with L >= 3, got " + lattice);
+  public static MajoranaNumberResult majoranaNumber(
+      MajoranaForm form, Lattice lattice, HamiltonianBuilder terms, MajoranaWorkspace workspace) {
+    if (lattice.dimension() != 1
+        || lattice.boundary() != Boundary.PERIODIC
+        || lattice.linearSize() < 3) {
+      throw new IllegalArgumentException(
+          "the Majorana number needs a periodic chain with L >= 3, got " + lattice);
     }
     form.writeMajoranaMatrix(lattice, terms, 1, workspace.majorana, workspace.imaginary);
     PfaffianResult periodic = PfaffianKernel.compute(workspace.majorana, workspace.pfaffian);
     form.writeMajoranaMatrix(lattice, terms, -1, workspace.majorana, workspace.imaginary);
     PfaffianResult antiperiodic = PfaffianKernel.compute(workspace.majorana, workspace.pfaffian);
-    return new MajoranaNumberResult(reliableSign(periodic) * reliableSign(antiperiodic), periodic.logAbs(), antiperiodic.logAbs());
+    return new MajoranaNumberResult(
+        reliableSign(periodic) * reliableSign(antiperiodic),
+        periodic.logAbs(),
+        antiperiodic.logAbs());
   }
 
   /**
-   * Pf(A) of the realised Hamiltonian as built (no change of closure); its sign is the
-   * ground-state fermion parity (+1 even, −1 odd, 0 degenerate). The returned sign is 0 also when
-   * the smallest pivot is below {@link #SINGULAR_PIVOT_RATIO} (degenerate up to rounding).
+   * Pf(A) of the realised Hamiltonian as built (no change of closure); its sign is the ground-state
+   * fermion parity (+1 even, −1 odd, 0 degenerate). The returned sign is 0 also when the smallest
+   * pivot is below {@link #SINGULAR_PIVOT_RATIO} (degenerate up to rounding).
    *
    * @param form read
    * @param lattice read
    * @param terms read
    * @param workspace scratch
    */
-  public static PfaffianResult groundStateParity(MajoranaForm form, Lattice lattice, HamiltonianBuilder terms, MajoranaWorkspace workspace) {
+  public static PfaffianResult groundStateParity(
+      MajoranaForm form, Lattice lattice, HamiltonianBuilder terms, MajoranaWorkspace workspace) {
     form.writeMajoranaMatrix(lattice, terms, 1, workspace.majorana, workspace.imaginary);
     PfaffianResult pf = PfaffianKernel.compute(workspace.majorana, workspace.pfaffian);
-    return reliableSign(pf) == pf.sign() ? pf : new PfaffianResult(0, Double.NEGATIVE_INFINITY, pf.smallestPivotRatio());
+    return reliableSign(pf) == pf.sign()
+        ? pf
+        : new PfaffianResult(0, Double.NEGATIVE_INFINITY, pf.smallestPivotRatio());
   }
 }

@@ -39,13 +39,20 @@ public final class RealSpaceWindingKernel {
    * @param occupied read, not modified: 2L × n orthonormal occupied states
    * @param workspace scratch
    */
-  public static WindingResult compute(Lattice lattice, ZMatrixRMaj occupied, WindingWorkspace workspace) {
+  public static WindingResult compute(
+      Lattice lattice, ZMatrixRMaj occupied, WindingWorkspace workspace) {
     int cells = lattice.sites();
     if (lattice.dimension() != 1 || lattice.orbitalsPerSite() != 2 || cells < 4) {
-      throw new IllegalArgumentException("the winding needs a chain with two orbitals per cell and L >= 4, got " + lattice);
+      throw new IllegalArgumentException(
+          "the winding needs a chain with two orbitals per cell and L >= 4, got " + lattice);
     }
     if (occupied.numRows != 2 * cells) {
-      throw new IllegalArgumentException("occupied states have " + occupied.numRows + " rows, lattice has " + 2 * cells + " orbitals");
+      throw new IllegalArgumentException(
+          "occupied states have "
+              + occupied.numRows
+              + " rows, lattice has "
+              + 2 * cells
+              + " orbitals");
     }
     int n = occupied.numCols;
     int first = cells / 4;

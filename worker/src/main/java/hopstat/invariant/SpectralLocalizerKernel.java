@@ -8,8 +8,8 @@ import hopstat.spectrum.SliceInertiaWorkspace;
 
 /**
  * Chern number of a d = 2 open sample from the signature of the spectral localizer, without
- * diagonalisation (Loring, Ann. Phys. 356, 383 (2015); Loring &amp; Schulz-Baldes, New York J. Math.
- * 23, 1111 (2017), arXiv:1701.07455):
+ * diagonalisation (Loring, Ann. Phys. 356, 383 (2015); Loring &amp; Schulz-Baldes, New York J.
+ * Math. 23, 1111 (2017), arXiv:1701.07455):
  *
  * <pre>L_κ = [[H − E_F, κ(X − x0 − i(Y − y0))], [κ(X − x0 + i(Y − y0)), −(H − E_F)]]</pre>
  *
@@ -18,11 +18,11 @@ import hopstat.spectrum.SliceInertiaWorkspace;
  * fixed in tests), so {@link #chern} returns −½ sig(L_κ), in the sign convention of the Bott index.
  * The signature comes from {@link SliceInertiaKernel} (block LDLᴴ over x-slices).
  *
- * <p><b>κ.</b> The index is constant for κ in a window: large enough that κ·ρ exceeds the gap
- * scale at the sample radius ρ, small enough that κ‖[H, X]‖ does not close the localizer gap
- * (Loring &amp; Schulz-Baldes 2017, Theorem 1: κ ≤ g³/(12‖H‖‖[H,X]‖) and ρ ≥ 2g/κ, sufficient, not
- * necessary). {@link #automaticKappa} takes κ = ‖H‖_G / L (‖H‖_G the Gershgorin bound of H − E_F,
- * L the linear size), so κ·ρ = ‖H‖_G/2 at ρ = L/2 for every L, and κ → 0 as L grows, inside the
+ * <p><b>κ.</b> The index is constant for κ in a window: large enough that κ·ρ exceeds the gap scale
+ * at the sample radius ρ, small enough that κ‖[H, X]‖ does not close the localizer gap (Loring
+ * &amp; Schulz-Baldes 2017, Theorem 1: κ ≤ g³/(12‖H‖‖[H,X]‖) and ρ ≥ 2g/κ, sufficient, not
+ * necessary). {@link #automaticKappa} takes κ = ‖H‖_G / L (‖H‖_G the Gershgorin bound of H − E_F, L
+ * the linear size), so κ·ρ = ‖H‖_G/2 at ρ = L/2 for every L, and κ → 0 as L grows, inside the
  * L-independent upper bound for large samples (derived from the theorem's scaling; the window at
  * small L is checked numerically by halving and doubling κ in tests).
  *
@@ -34,7 +34,8 @@ public final class SpectralLocalizerKernel {
   private SpectralLocalizerKernel() {}
 
   /** κ = ‖H − E_F‖_G / L (see class Javadoc); energy per lattice unit. */
-  public static double automaticKappa(HamiltonianBuilder terms, Lattice lattice, double fermiEnergy, double[] scratch) {
+  public static double automaticKappa(
+      HamiltonianBuilder terms, Lattice lattice, double fermiEnergy, double[] scratch) {
     double radius = SliceInertiaKernel.gershgorinRadius(terms, scratch) + Math.abs(fermiEnergy);
     return radius / lattice.linearSize();
   }
@@ -56,12 +57,26 @@ public final class SpectralLocalizerKernel {
    * @param fermiEnergy E_F
    * @param kappa κ &gt; 0
    * @param workspace scratch
-   * @return the index, or {@code Integer.MIN_VALUE} if a Schur complement was exactly singular
-   *     (E_F or 0 in the localizer spectrum: an outcome, the index is undefined)
+   * @return the index, or {@code Integer.MIN_VALUE} if a Schur complement was exactly singular (E_F
+   *     or 0 in the localizer spectrum: an outcome, the index is undefined)
    */
-  public static int chern(HamiltonianBuilder terms, Lattice lattice, double fermiEnergy, double kappa, SliceInertiaWorkspace workspace) {
+  public static int chern(
+      HamiltonianBuilder terms,
+      Lattice lattice,
+      double fermiEnergy,
+      double kappa,
+      SliceInertiaWorkspace workspace) {
     requireTwoDimensional(lattice);
-    InertiaResult in = SliceInertiaKernel.localizerInertia(terms, lattice, fermiEnergy, kappa, centre(lattice, 0), centre(lattice, 1), 0.0, workspace);
+    InertiaResult in =
+        SliceInertiaKernel.localizerInertia(
+            terms,
+            lattice,
+            fermiEnergy,
+            kappa,
+            centre(lattice, 0),
+            centre(lattice, 1),
+            0.0,
+            workspace);
     if (in.zero() > 0) {
       return Integer.MIN_VALUE;
     }
@@ -78,17 +93,31 @@ public final class SpectralLocalizerKernel {
    * @param relativeTolerance &gt; 0
    * @param bracket overwritten: {lo, hi}
    */
-  public static void localizerGap(HamiltonianBuilder terms, Lattice lattice, double fermiEnergy, double kappa, double floor,
-      double relativeTolerance, SliceInertiaWorkspace workspace, double[] bracket) {
+  public static void localizerGap(
+      HamiltonianBuilder terms,
+      Lattice lattice,
+      double fermiEnergy,
+      double kappa,
+      double floor,
+      double relativeTolerance,
+      SliceInertiaWorkspace workspace,
+      double[] bracket) {
     requireTwoDimensional(lattice);
     double x0 = centre(lattice, 0);
     double y0 = centre(lattice, 1);
     double maxRadius = 0;
     for (int i = 0; i < lattice.orbitals(); i++) {
-      maxRadius = Math.max(maxRadius, Math.hypot(lattice.orbitalPosition(0, i) - x0, lattice.orbitalPosition(1, i) - y0));
+      maxRadius =
+          Math.max(
+              maxRadius,
+              Math.hypot(lattice.orbitalPosition(0, i) - x0, lattice.orbitalPosition(1, i) - y0));
     }
     double[] scratch = new double[2 * terms.dimension()];
-    double hi = SliceInertiaKernel.gershgorinRadius(terms, scratch) + Math.abs(fermiEnergy) + kappa * maxRadius + 1.0;
+    double hi =
+        SliceInertiaKernel.gershgorinRadius(terms, scratch)
+            + Math.abs(fermiEnergy)
+            + kappa * maxRadius
+            + 1.0;
     double lo = floor;
     if (countWithin(terms, lattice, fermiEnergy, kappa, x0, y0, lo, workspace) > 0) {
       bracket[0] = 0.0;
@@ -107,10 +136,19 @@ public final class SpectralLocalizerKernel {
     bracket[1] = hi;
   }
 
-  private static int countWithin(HamiltonianBuilder terms, Lattice lattice, double e, double kappa, double x0, double y0, double delta,
+  private static int countWithin(
+      HamiltonianBuilder terms,
+      Lattice lattice,
+      double e,
+      double kappa,
+      double x0,
+      double y0,
+      double delta,
       SliceInertiaWorkspace ws) {
-    InertiaResult below = SliceInertiaKernel.localizerInertia(terms, lattice, e, kappa, x0, y0, delta, ws);
-    InertiaResult belowMinus = SliceInertiaKernel.localizerInertia(terms, lattice, e, kappa, x0, y0, -delta, ws);
+    InertiaResult below =
+        SliceInertiaKernel.localizerInertia(terms, lattice, e, kappa, x0, y0, delta, ws);
+    InertiaResult belowMinus =
+        SliceInertiaKernel.localizerInertia(terms, lattice, e, kappa, x0, y0, -delta, ws);
     // neg(L − δ) counts λ < δ (zero counts λ = δ); neg(L + δ) counts λ < −δ.
     return below.negative() + below.zero() - belowMinus.negative();
   }

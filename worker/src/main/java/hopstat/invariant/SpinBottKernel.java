@@ -11,10 +11,10 @@ import org.ejml.data.ZMatrixRMaj;
  * states with positive (negative) eigenvalue; the spin Chern number is (C₊ − C₋)/2 with C± the
  * Chern numbers of P± (Prodan, PRB 80, 125327 (2009), "Robustness of the spin-Chern number"), here
  * each evaluated as a Bott index (Loring &amp; Hastings, EPL 92, 67004 (2010)) — the "spin Bott
- * index" of Huang &amp; Liu, PRL 121, 126401 (2018). For class AII the Z2 index is the parity of the
- * spin Chern number, valid while P S_z P has a gap at 0 (Prodan 2009); it does not need S_z to be
- * conserved. When S_z is conserved, P commutes with S_z, P S_z P has eigenvalues ±1 and P± are the
- * occupied spin-up/down sectors, so C₊ = C_↑, C₋ = C_↓.
+ * index" of Huang &amp; Liu, PRL 121, 126401 (2018). For class AII the Z2 index is the parity of
+ * the spin Chern number, valid while P S_z P has a gap at 0 (Prodan 2009); it does not need S_z to
+ * be conserved. When S_z is conserved, P commutes with S_z, P S_z P has eigenvalues ±1 and P± are
+ * the occupied spin-up/down sectors, so C₊ = C_↑, C₋ = C_↓.
  *
  * <p>Cost: one N·n² product, one n × n Hermitian eigenproblem, two N·n·n± products and two Bott
  * indices (on n₊ and n₋ states).
@@ -29,15 +29,22 @@ public final class SpinBottKernel {
    * @param spin read: the local S_z; its orbital count must match the lattice
    * @param workspace scratch
    */
-  public static SpinBottResult compute(Lattice lattice, ZMatrixRMaj occupied, SpinZOperator spin, SpinBottWorkspace workspace) {
+  public static SpinBottResult compute(
+      Lattice lattice, ZMatrixRMaj occupied, SpinZOperator spin, SpinBottWorkspace workspace) {
     int perSite = lattice.orbitalsPerSite();
     if (spin.orbitalsPerSite() != perSite) {
-      throw new IllegalArgumentException("S_z acts on " + spin.orbitalsPerSite() + " orbitals per site, lattice has " + perSite);
+      throw new IllegalArgumentException(
+          "S_z acts on " + spin.orbitalsPerSite() + " orbitals per site, lattice has " + perSite);
     }
     int rows = occupied.numRows;
     int n = occupied.numCols;
     if (rows != lattice.orbitals()) {
-      throw new IllegalArgumentException("occupied states have " + rows + " rows, lattice has " + lattice.orbitals() + " orbitals");
+      throw new IllegalArgumentException(
+          "occupied states have "
+              + rows
+              + " rows, lattice has "
+              + lattice.orbitals()
+              + " orbitals");
     }
     if (n == 0) {
       return new SpinBottResult(0.0, 0.0, 0.0, Double.NaN, true);
@@ -55,7 +62,8 @@ public final class SpinBottKernel {
     workspace.products.multConjTransA(occupied, spinPsi, workspace.projectedSpin);
     workspace.ensure(n);
     double[] values = workspace.spinValues;
-    if (!workspace.eigenSolver.eigenpairs(workspace.projectedSpin, values, 0, n - 1, workspace.spinVectors)) {
+    if (!workspace.eigenSolver.eigenpairs(
+        workspace.projectedSpin, values, 0, n - 1, workspace.spinVectors)) {
       return new SpinBottResult(Double.NaN, Double.NaN, Double.NaN, Double.NaN, false);
     }
     int negative = 0;
@@ -75,7 +83,8 @@ public final class SpinBottKernel {
   }
 
   /** Bott index of Ψ V[:, from..to−1]; NaN if the eigenvalue routine failed. */
-  private static double sectorBott(Lattice lattice, ZMatrixRMaj occupied, int from, int to, SpinBottWorkspace ws) {
+  private static double sectorBott(
+      Lattice lattice, ZMatrixRMaj occupied, int from, int to, SpinBottWorkspace ws) {
     int n = occupied.numCols;
     int m = to - from;
     ZMatrixRMaj v = ws.sectorVectors;
@@ -102,7 +111,8 @@ public final class SpinBottKernel {
     int n = hamiltonian.numRows;
     int perSite = spin.orbitalsPerSite();
     if (hamiltonian.numCols != n || n % perSite != 0) {
-      throw new IllegalArgumentException("H must be square with a multiple of " + perSite + " rows");
+      throw new IllegalArgumentException(
+          "H must be square with a multiple of " + perSite + " rows");
     }
     double off = 0.0;
     double all = 0.0;

@@ -11,7 +11,8 @@ package hopstat.invariant;
  *     splitting is well defined only while this stays away from 0)
  * @param converged false if an eigen-solver failed (then the other fields are NaN)
  */
-public record SpinBottResult(double bottUp, double bottDown, double spinBott, double spinGap, boolean converged) {
+public record SpinBottResult(
+    double bottUp, double bottDown, double spinBott, double spinGap, boolean converged) {
 
   /** The Z2 index ν ∈ {0, 1}: the parity of the rounded spin Bott index (NaN if not converged). */
   public double z2() {

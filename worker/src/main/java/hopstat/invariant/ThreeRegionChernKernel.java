@@ -6,15 +6,16 @@ import org.ejml.data.ZMatrixRMaj;
 /**
  * Kitaev's three-region formula for the Chern number (Kitaev, Ann. Phys. 321, 2 (2006), App. C):
  *
- * <pre>  ν = 12πi Σ_{j∈A, k∈B, l∈C} (P_jk P_kl P_lj − P_jl P_lk P_kj) = −24π Im Tr(P_AB P_BC P_CA),</pre>
+ * <pre>  ν = 12πi Σ_{j∈A, k∈B, l∈C} (P_jk P_kl P_lj − P_jl P_lk P_kj) = −24π Im Tr(P_AB P_BC P_CA),
+ * </pre>
  *
  * (the second term is the complex conjugate of the first because P is Hermitian). A, B, C are the
  * three 120° sectors, counter-clockwise, of a disc of radius R centred at the middle of the sample
  * (the midpoint of the span of the positions): sector A holds angles [0, 2π/3), B [2π/3, 4π/3), C
  * [4π/3, 2π), all orbitals of a site belong to its site's sector. With counter-clockwise sectors ν
  * = −C in the convention of {@link hopstat.model.QwzModel} (checked in tests), so the kernel
- * returns −ν. Works on open and periodic samples as long as the disc stays away from the edges
- * and R &lt; L/2; the truncation error decays with R/ξ, ξ the localisation length of P.
+ * returns −ν. Works on open and periodic samples as long as the disc stays away from the edges and
+ * R &lt; L/2; the truncation error decays with R/ξ, ξ the localisation length of P.
  *
  * <p>Cost: gathering the rows of Ψ, three m·m·n products and one m³ product, m the sector size.
  */
@@ -28,12 +29,19 @@ public final class ThreeRegionChernKernel {
    * @param radius R, in the lattice's coordinates; sites with distance ≤ R from the centre count
    * @param workspace scratch
    */
-  public static ThreeRegionChernResult compute(Lattice lattice, ZMatrixRMaj occupied, double radius, ThreeRegionChernWorkspace workspace) {
+  public static ThreeRegionChernResult compute(
+      Lattice lattice, ZMatrixRMaj occupied, double radius, ThreeRegionChernWorkspace workspace) {
     if (lattice.dimension() != 2) {
-      throw new IllegalArgumentException("the three-region formula needs a two-dimensional lattice");
+      throw new IllegalArgumentException(
+          "the three-region formula needs a two-dimensional lattice");
     }
     if (occupied.numRows != lattice.orbitals()) {
-      throw new IllegalArgumentException("occupied states have " + occupied.numRows + " rows, lattice has " + lattice.orbitals() + " orbitals");
+      throw new IllegalArgumentException(
+          "occupied states have "
+              + occupied.numRows
+              + " rows, lattice has "
+              + lattice.orbitals()
+              + " orbitals");
     }
     if (!(radius > 0)) {
       throw new IllegalArgumentException("radius must be positive: " + radius);
@@ -94,7 +102,8 @@ public final class ThreeRegionChernKernel {
   }
 
   /** out = the rows of Ψ that belong to the sites of sector k, in site order. */
-  private static void gather(Lattice lattice, ZMatrixRMaj psi, int[] sector, int k, int sectorSites, ZMatrixRMaj out) {
+  private static void gather(
+      Lattice lattice, ZMatrixRMaj psi, int[] sector, int k, int sectorSites, ZMatrixRMaj out) {
     int perSite = lattice.orbitalsPerSite();
     int cols = psi.numCols;
     out.reshape(sectorSites * perSite, cols);
@@ -104,7 +113,8 @@ public final class ThreeRegionChernKernel {
         continue;
       }
       for (int o = 0; o < perSite; o++) {
-        System.arraycopy(psi.data, 2 * (s * perSite + o) * cols, out.data, 2 * row * cols, 2 * cols);
+        System.arraycopy(
+            psi.data, 2 * (s * perSite + o) * cols, out.data, 2 * row * cols, 2 * cols);
         row++;
       }
     }

@@ -18,12 +18,14 @@ public final class ChainLattices {
     for (int x = 0; x < linearSize; x++) {
       pos[0][x] = x;
     }
-    return new Lattice(1, linearSize, linearSize, orbitalsPerSite, pos, new double[] {linearSize}, boundary);
+    return new Lattice(
+        1, linearSize, linearSize, orbitalsPerSite, pos, new double[] {linearSize}, boundary);
   }
 
   /** A d = 0 cluster of {@code sites} sites; {@code linearSize} records the spec's L. */
   public static Lattice cluster(int linearSize, int sites, int orbitalsPerSite) {
-    return new Lattice(0, linearSize, sites, orbitalsPerSite, new double[0][], new double[0], Boundary.OPEN);
+    return new Lattice(
+        0, linearSize, sites, orbitalsPerSite, new double[0][], new double[0], Boundary.OPEN);
   }
 
   /**

@@ -33,7 +33,8 @@ public final class CubicLattices {
    * @param orbitalsPerSite ≥ 1
    * @param boundary applied along every direction
    */
-  public static Lattice hypercubic(int dimension, int linearSize, int orbitalsPerSite, Boundary boundary) {
+  public static Lattice hypercubic(
+      int dimension, int linearSize, int orbitalsPerSite, Boundary boundary) {
     if (dimension < 1 || dimension > 3) {
       throw new IllegalArgumentException("dimension must be 1, 2 or 3: " + dimension);
     }
@@ -67,12 +68,13 @@ public final class CubicLattices {
   }
 
   /**
-   * Visits every nearest-neighbour bond of the L^d lattice once, in site-index order and, per
-   * site, in direction order x, y, z.
+   * Visits every nearest-neighbour bond of the L^d lattice once, in site-index order and, per site,
+   * in direction order x, y, z.
    *
    * @param dimension 0..3; d = 0 (a single site) has no bonds
    */
-  public static void forEachBond(int dimension, int linearSize, Boundary boundary, BondVisitor visitor) {
+  public static void forEachBond(
+      int dimension, int linearSize, Boundary boundary, BondVisitor visitor) {
     if (dimension == 0) {
       return;
     }

@@ -5,8 +5,8 @@ import org.ejml.data.ZMatrixRMaj;
 
 /**
  * Accumulates a Hermitian tight-binding matrix as a list of (row, column, value) terms, so that
- * models and disorder add terms without knowing whether a dense or a sparse matrix is built
- * from them. Each off-diagonal term added with {@link #addHopping} also stands for its Hermitian
+ * models and disorder add terms without knowing whether a dense or a sparse matrix is built from
+ * them. Each off-diagonal term added with {@link #addHopping} also stands for its Hermitian
  * conjugate. Mutable scratch: one per worker thread, {@link #reset} before each realisation; the
  * arrays grow to the largest realisation seen and never shrink.
  */
@@ -112,12 +112,14 @@ public final class HamiltonianBuilder {
    * value 0, so term indices, {@link #termCount()} and the sparsity pattern do not change. Used for
    * vacancies (site dilution) without changing the matrix dimension.
    *
-   * @param flagged read, not modified: {@code flagged[i]} true for orbital i; length ≥ {@link #dimension()}
+   * @param flagged read, not modified: {@code flagged[i]} true for orbital i; length ≥ {@link
+   *     #dimension()}
    * @return number of terms set to zero
    */
   public int zeroTermsTouching(boolean[] flagged) {
     if (flagged.length < dimension) {
-      throw new IllegalArgumentException("flags for " + flagged.length + " orbitals, matrix has " + dimension);
+      throw new IllegalArgumentException(
+          "flags for " + flagged.length + " orbitals, matrix has " + dimension);
     }
     int zeroed = 0;
     for (int k = 0; k < count; k++) {
@@ -141,7 +143,8 @@ public final class HamiltonianBuilder {
 
   private void check(int i, int j) {
     if (i < 0 || j < 0 || i >= dimension || j >= dimension) {
-      throw new IndexOutOfBoundsException("term (" + i + ", " + j + ") outside a " + dimension + "-dimensional matrix");
+      throw new IndexOutOfBoundsException(
+          "term (" + i + ", " + j + ") outside a " + dimension + "-dimensional matrix");
     }
   }
 

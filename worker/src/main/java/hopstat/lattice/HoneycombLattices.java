@@ -31,10 +31,13 @@ public final class HoneycombLattices {
         pos[1][a + 1] = n2 + B_OFFSET;
       }
     }
-    return new Lattice(2, linearSize, n, orbitalsPerSite, pos, new double[] {linearSize, linearSize}, boundary);
+    return new Lattice(
+        2, linearSize, n, orbitalsPerSite, pos, new double[] {linearSize, linearSize}, boundary);
   }
 
-  /** Site index of sublattice {@code sublattice} (0 = A, 1 = B) in cell (n1, n2), 0 ≤ n1, n2 &lt; L. */
+  /**
+   * Site index of sublattice {@code sublattice} (0 = A, 1 = B) in cell (n1, n2), 0 ≤ n1, n2 &lt; L.
+   */
   public static int siteIndex(int linearSize, int n1, int n2, int sublattice) {
     return 2 * (n1 + linearSize * n2) + sublattice;
   }

@@ -40,8 +40,23 @@ public record Lattice(
     double[][] orbitalOffsets) {
 
   /** A lattice with every orbital at its site position (zero offsets). */
-  public Lattice(int dimension, int linearSize, int sites, int orbitalsPerSite, double[][] positions, double[] extent, Boundary boundary) {
-    this(dimension, linearSize, sites, orbitalsPerSite, positions, extent, boundary, new double[Math.max(dimension, 0)][Math.max(orbitalsPerSite, 0)]);
+  public Lattice(
+      int dimension,
+      int linearSize,
+      int sites,
+      int orbitalsPerSite,
+      double[][] positions,
+      double[] extent,
+      Boundary boundary) {
+    this(
+        dimension,
+        linearSize,
+        sites,
+        orbitalsPerSite,
+        positions,
+        extent,
+        boundary,
+        new double[Math.max(dimension, 0)][Math.max(orbitalsPerSite, 0)]);
   }
 
   public Lattice {
@@ -69,7 +84,8 @@ public record Lattice(
     double[][] offsets = new double[dimension][];
     for (int d = 0; d < dimension; d++) {
       if (orbitalOffsets[d].length != orbitalsPerSite) {
-        throw new IllegalArgumentException("orbitalOffsets[" + d + "] must have one entry per orbital of a site");
+        throw new IllegalArgumentException(
+            "orbitalOffsets[" + d + "] must have one entry per orbital of a site");
       }
       for (double x : orbitalOffsets[d]) {
         if (!Double.isFinite(x)) {
@@ -84,10 +100,12 @@ public record Lattice(
   /**
    * The same lattice with these orbital offsets.
    *
-   * @param offsets {@code offsets[d][o]}, one row per dimension, one entry per orbital of a site; copied
+   * @param offsets {@code offsets[d][o]}, one row per dimension, one entry per orbital of a site;
+   *     copied
    */
   public Lattice withOrbitalOffsets(double[][] offsets) {
-    return new Lattice(dimension, linearSize, sites, orbitalsPerSite, positions, extent, boundary, offsets);
+    return new Lattice(
+        dimension, linearSize, sites, orbitalsPerSite, positions, extent, boundary, offsets);
   }
 
   /** Offset of orbital {@code orbital} (0 ≤ orbital &lt; orbitalsPerSite) from its site along d. */
@@ -108,11 +126,12 @@ public record Lattice(
   }
 
   /**
-   * Position along d of the orbital with this matrix index (site = index / orbitalsPerSite,
-   * orbital = index % orbitalsPerSite): site position plus orbital offset. Allocates nothing.
+   * Position along d of the orbital with this matrix index (site = index / orbitalsPerSite, orbital
+   * = index % orbitalsPerSite): site position plus orbital offset. Allocates nothing.
    */
   public double orbitalPosition(int d, int matrixIndex) {
-    return positions[d][matrixIndex / orbitalsPerSite] + orbitalOffsets[d][matrixIndex % orbitalsPerSite];
+    return positions[d][matrixIndex / orbitalsPerSite]
+        + orbitalOffsets[d][matrixIndex % orbitalsPerSite];
   }
 
   /** Smallest orbital position along d (= {@link #minPosition} plus the smallest offset). */
@@ -147,7 +166,10 @@ public record Lattice(
     return sites * orbitalsPerSite;
   }
 
-  /** Position of site (cell) {@code s} along direction {@code d}; see {@link #orbitalPosition} for an orbital's. */
+  /**
+   * Position of site (cell) {@code s} along direction {@code d}; see {@link #orbitalPosition} for
+   * an orbital's.
+   */
   public double position(int d, int s) {
     return positions[d][s];
   }
@@ -194,7 +216,8 @@ public record Lattice(
         pos[1][x + linearSize * y] = y;
       }
     }
-    return new Lattice(2, linearSize, n, orbitalsPerSite, pos, new double[] {linearSize, linearSize}, boundary);
+    return new Lattice(
+        2, linearSize, n, orbitalsPerSite, pos, new double[] {linearSize, linearSize}, boundary);
   }
 
   @Override
@@ -217,6 +240,16 @@ public record Lattice(
 
   @Override
   public String toString() {
-    return "Lattice[d=" + dimension + ", L=" + linearSize + ", sites=" + sites + ", orbitals/site=" + orbitalsPerSite + ", " + boundary + "]";
+    return "Lattice[d="
+        + dimension
+        + ", L="
+        + linearSize
+        + ", sites="
+        + sites
+        + ", orbitals/site="
+        + orbitalsPerSite
+        + ", "
+        + boundary
+        + "]";
   }
 }

@@ -3,8 +3,8 @@ package hopstat.linalg;
 import org.ejml.data.ZMatrixRMaj;
 
 /**
- * Determinant of a dense complex square matrix by LU elimination with partial (row) pivoting,
- * det A = (−1)^{#swaps} Π U_kk (Golub &amp; Van Loan, Matrix Computations, Alg. 3.4.1). Returned as
+ * Determinant of a dense complex square matrix by LU elimination with partial (row) pivoting, det A
+ * = (−1)^{#swaps} Π U_kk (Golub &amp; Van Loan, Matrix Computations, Alg. 3.4.1). Returned as
  * ln|det| and arg det, so it neither overflows nor underflows; the phase is what the
  * phase-continuation of {@code hopstat.invariant.DiiiZ2Kernel} tracks.
  *
@@ -26,7 +26,8 @@ public final class ComplexDeterminantKernel {
   public static ComplexLogResult compute(ZMatrixRMaj a, ComplexDeterminantWorkspace workspace) {
     int n = a.numRows;
     if (a.numCols != n) {
-      throw new IllegalArgumentException("the determinant needs a square matrix, got " + n + "x" + a.numCols);
+      throw new IllegalArgumentException(
+          "the determinant needs a square matrix, got " + n + "x" + a.numCols);
     }
     if (n == 0) {
       return new ComplexLogResult(0.0, 0.0, 1.0);

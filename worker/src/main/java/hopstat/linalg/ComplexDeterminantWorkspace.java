@@ -1,8 +1,8 @@
 package hopstat.linalg;
 
 /**
- * Scratch for {@link ComplexDeterminantKernel}: an interleaved (re, im) copy of the matrix that
- * the LU elimination overwrites. Grows, never shrinks. One per worker thread; not thread-safe.
+ * Scratch for {@link ComplexDeterminantKernel}: an interleaved (re, im) copy of the matrix that the
+ * LU elimination overwrites. Grows, never shrinks. One per worker thread; not thread-safe.
  */
 public final class ComplexDeterminantWorkspace {
 

@@ -25,7 +25,8 @@ public final class ComplexHouseholderOps {
     int m = a.numRows;
     int n = a.numCols;
     if (m < n || reflectors.numRows != m || reflectors.numCols != n) {
-      throw new IllegalArgumentException("need m >= n and an m x n reflector matrix: " + m + "x" + n);
+      throw new IllegalArgumentException(
+          "need m >= n and an m x n reflector matrix: " + m + "x" + n);
     }
     if (a == reflectors) {
       throw new IllegalArgumentException("a and reflectors must differ");
@@ -86,7 +87,8 @@ public final class ComplexHouseholderOps {
   }
 
   /**
-   * Writes columns {@code first}..{@code first + out.numCols − 1} of the full m × m Q = H_0 ⋯ H_{n−1}.
+   * Writes columns {@code first}..{@code first + out.numCols − 1} of the full m × m Q = H_0 ⋯
+   * H_{n−1}.
    *
    * @param reflectors from {@link #factor}; read
    * @param first first column of Q wanted, 0 ≤ first, first + out.numCols ≤ m
@@ -97,7 +99,15 @@ public final class ComplexHouseholderOps {
     int n = reflectors.numCols;
     int c = out.numCols;
     if (out.numRows != m || first < 0 || first + c > m) {
-      throw new IllegalArgumentException("bad Q block: rows " + out.numRows + ", columns " + first + ".." + (first + c - 1) + " of " + m);
+      throw new IllegalArgumentException(
+          "bad Q block: rows "
+              + out.numRows
+              + ", columns "
+              + first
+              + ".."
+              + (first + c - 1)
+              + " of "
+              + m);
     }
     out.zero();
     double[] o = out.data;

@@ -2,8 +2,8 @@ package hopstat.linalg;
 
 /**
  * A complex number in polar-logarithmic form, as returned by {@link ComplexPfaffianKernel} and
- * {@link ComplexDeterminantKernel}: z = exp(logAbs + i·phase). Moduli of determinants and
- * Pfaffians of a few hundred rows over- or underflow, their logarithms do not.
+ * {@link ComplexDeterminantKernel}: z = exp(logAbs + i·phase). Moduli of determinants and Pfaffians
+ * of a few hundred rows over- or underflow, their logarithms do not.
  *
  * @param logAbs ln|z|; {@link Double#NEGATIVE_INFINITY} when z is exactly zero
  * @param phase arg z in radians, in (−π, π]; 0 when z is exactly zero

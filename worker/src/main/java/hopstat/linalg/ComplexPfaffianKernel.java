@@ -4,18 +4,18 @@ import org.ejml.data.ZMatrixRMaj;
 
 /**
  * Pfaffian of a dense complex antisymmetric matrix (Aᵀ = −A, no conjugation) by the Parlett–Reid
- * skew-symmetric elimination with partial pivoting (Wimmer, "Efficient numerical computation of
- * the Pfaffian for dense and banded skew-symmetric matrices", ACM TOMS 38(4), 30 (2012), Alg. 1
- * with pivoting): the complex counterpart of {@link PfaffianKernel}, with the same step
+ * skew-symmetric elimination with partial pivoting (Wimmer, "Efficient numerical computation of the
+ * Pfaffian for dense and banded skew-symmetric matrices", ACM TOMS 38(4), 30 (2012), Alg. 1 with
+ * pivoting): the complex counterpart of {@link PfaffianKernel}, with the same step
  *
  * <pre>  Pf [[0, a, rᵀ], [−a, 0, sᵀ], [−r, −s, B]] = a · Pf(B + (s rᵀ − r sᵀ)/a)   (derived)</pre>
  *
  * and the same pivot rule (largest |A[i][k]|, i ≥ k+1, swapped into row and column k+1; each swap
  * flips the sign). The Pfaffian is a polynomial in the entries, so no entry is conjugated.
  *
- * <p>Cost ≈ 4n³/3 real flops, 2n² doubles of scratch; pure Java (the matrices here are the
- * order-2L chiral blocks of one-dimensional rings, small enough). The result is returned as
- * logarithm of the modulus plus phase, so it neither overflows nor underflows.
+ * <p>Cost ≈ 4n³/3 real flops, 2n² doubles of scratch; pure Java (the matrices here are the order-2L
+ * chiral blocks of one-dimensional rings, small enough). The result is returned as logarithm of the
+ * modulus plus phase, so it neither overflows nor underflows.
  */
 public final class ComplexPfaffianKernel {
 
@@ -36,7 +36,8 @@ public final class ComplexPfaffianKernel {
   public static ComplexLogResult compute(ZMatrixRMaj a, ComplexPfaffianWorkspace workspace) {
     int n = a.numRows;
     if (a.numCols != n) {
-      throw new IllegalArgumentException("the Pfaffian needs a square matrix, got " + n + "x" + a.numCols);
+      throw new IllegalArgumentException(
+          "the Pfaffian needs a square matrix, got " + n + "x" + a.numCols);
     }
     double maxAbs = checkAntisymmetric(a);
     if (n == 0) {
@@ -140,12 +141,19 @@ public final class ComplexPfaffianKernel {
       for (int j = i; j < n; j++) {
         int ij = 2 * (i * n + j);
         int ji = 2 * (j * n + i);
-        max = Math.max(max, Math.max(Math.hypot(a.data[ij], a.data[ij + 1]), Math.hypot(a.data[ji], a.data[ji + 1])));
-        defect = Math.max(defect, Math.hypot(a.data[ij] + a.data[ji], a.data[ij + 1] + a.data[ji + 1]));
+        max =
+            Math.max(
+                max,
+                Math.max(
+                    Math.hypot(a.data[ij], a.data[ij + 1]),
+                    Math.hypot(a.data[ji], a.data[ji + 1])));
+        defect =
+            Math.max(defect, Math.hypot(a.data[ij] + a.data[ji], a.data[ij + 1] + a.data[ji + 1]));
       }
     }
     if (defect > ANTISYMMETRY_TOLERANCE * max) {
-      throw new IllegalArgumentException("matrix is not antisymmetric: max |A + A^T| = " + defect + " for max |A| = " + max);
+      throw new IllegalArgumentException(
+          "matrix is not antisymmetric: max |A + A^T| = " + defect + " for max |A| = " + max);
     }
     return max;
   }

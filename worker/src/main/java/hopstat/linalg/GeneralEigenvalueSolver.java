@@ -3,8 +3,8 @@ package hopstat.linalg;
 import org.ejml.data.ZMatrixRMaj;
 
 /**
- * Eigenvalues of a dense general (non-Hermitian) complex matrix, no eigenvectors. Used for the
- * Bott index, whose matrix V U V† U† is unitary only up to finite-size corrections.
+ * Eigenvalues of a dense general (non-Hermitian) complex matrix, no eigenvectors. Used for the Bott
+ * index, whose matrix V U V† U† is unitary only up to finite-size corrections.
  *
  * <p>One instance per worker thread; holds a growing workspace. Not thread-safe.
  */

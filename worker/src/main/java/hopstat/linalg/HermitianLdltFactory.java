@@ -23,7 +23,10 @@ public final class HermitianLdltFactory {
     return create(linalg.kind());
   }
 
-  /** A new solver of the given kind; NATIVE requires the native library (see {@link LinalgFactory#create}). */
+  /**
+   * A new solver of the given kind; NATIVE requires the native library (see {@link
+   * LinalgFactory#create}).
+   */
   public static HermitianLdltSolver create(LinalgKind kind) {
     Objects.requireNonNull(kind, "kind");
     switch (kind) {

@@ -5,8 +5,8 @@ import org.ejml.data.ZMatrixRMaj;
 /**
  * Symmetric-indefinite (Bunch–Kaufman) factorisation P A Pᵀ = L D Lᴴ of a dense complex Hermitian
  * matrix, with D block diagonal (1×1 and 2×2 blocks), L unit lower triangular and P a permutation
- * (Bunch &amp; Kaufman, Math. Comp. 31, 163 (1977); LAPACK {@code zhetrf}). It gives the inertia of A
- * (Sylvester's law: the eigenvalue signs of D) in about n³/3 complex multiply–adds, without an
+ * (Bunch &amp; Kaufman, Math. Comp. 31, 163 (1977); LAPACK {@code zhetrf}). It gives the inertia of
+ * A (Sylvester's law: the eigenvalue signs of D) in about n³/3 complex multiply–adds, without an
  * eigen-decomposition, and solves A X = B with the factors.
  *
  * <p>Instances come from {@link HermitianLdltFactory}. Each holds its own workspace, which grows to
@@ -33,7 +33,10 @@ public interface HermitianLdltSolver {
   /** Negative eigenvalues of the last factored matrix. */
   int negativeCount();
 
-  /** Exactly-singular directions of the last factored matrix (0 unless {@link #factor} returned false). */
+  /**
+   * Exactly-singular directions of the last factored matrix (0 unless {@link #factor} returned
+   * false).
+   */
   int zeroCount();
 
   /** The inertia of the last factored matrix (allocates a small record). */

@@ -7,14 +7,15 @@ package hopstat.linalg;
  *
  * @param positive number of positive eigenvalues, ≥ 0
  * @param negative number of negative eigenvalues, ≥ 0
- * @param zero number of eigenvalues that are exactly zero in the factorisation (a pivot block of
- *     D that is exactly singular), ≥ 0
+ * @param zero number of eigenvalues that are exactly zero in the factorisation (a pivot block of D
+ *     that is exactly singular), ≥ 0
  */
 public record InertiaResult(int positive, int negative, int zero) {
 
   public InertiaResult {
     if (positive < 0 || negative < 0 || zero < 0) {
-      throw new IllegalArgumentException("inertia counts must be non-negative: " + positive + ", " + negative + ", " + zero);
+      throw new IllegalArgumentException(
+          "inertia counts must be non-negative: " + positive + ", " + negative + ", " + zero);
     }
   }
 

@@ -1,8 +1,8 @@
 package hopstat.linalg;
 
 /**
- * The one room through which dense linear algebra is done. Obtain it from {@link LinalgFactory};
- * it is thread-safe and shared, while the solvers it creates are per worker thread.
+ * The one room through which dense linear algebra is done. Obtain it from {@link LinalgFactory}; it
+ * is thread-safe and shared, while the solvers it creates are per worker thread.
  */
 public interface Linalg {
 

@@ -3,10 +3,10 @@ package hopstat.linalg;
 import org.ejml.data.DMatrixRMaj;
 
 /**
- * Pfaffian of a dense real antisymmetric matrix by skew-symmetric Gaussian elimination with
- * partial pivoting (the Parlett–Reid L T Lᵀ scheme as described by Wimmer, "Efficient numerical
- * computation of the Pfaffian for dense and banded skew-symmetric matrices", ACM TOMS 38(4), 30
- * (2012), Alg. 1 with pivoting).
+ * Pfaffian of a dense real antisymmetric matrix by skew-symmetric Gaussian elimination with partial
+ * pivoting (the Parlett–Reid L T Lᵀ scheme as described by Wimmer, "Efficient numerical computation
+ * of the Pfaffian for dense and banded skew-symmetric matrices", ACM TOMS 38(4), 30 (2012), Alg. 1
+ * with pivoting).
  *
  * <p>Step k (k = 0, 2, 4, …) works on the trailing block, written as
  *
@@ -47,7 +47,8 @@ public final class PfaffianKernel {
   public static PfaffianResult compute(DMatrixRMaj a, PfaffianWorkspace workspace) {
     int n = a.numRows;
     if (a.numCols != n) {
-      throw new IllegalArgumentException("the Pfaffian needs a square matrix, got " + n + "x" + a.numCols);
+      throw new IllegalArgumentException(
+          "the Pfaffian needs a square matrix, got " + n + "x" + a.numCols);
     }
     double maxAbs = checkAntisymmetric(a);
     if (n == 0) {
@@ -133,7 +134,8 @@ public final class PfaffianKernel {
       }
     }
     if (defect > ANTISYMMETRY_TOLERANCE * max) {
-      throw new IllegalArgumentException("matrix is not antisymmetric: max |A + A^T| = " + defect + " for max |A| = " + max);
+      throw new IllegalArgumentException(
+          "matrix is not antisymmetric: max |A + A^T| = " + defect + " for max |A| = " + max);
     }
     return max;
   }

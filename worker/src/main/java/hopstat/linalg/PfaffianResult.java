@@ -7,8 +7,8 @@ package hopstat.linalg;
  * @param sign +1, −1, or 0 when the Pfaffian is exactly zero (odd dimension or an exactly zero
  *     pivot column)
  * @param logAbs ln|Pf(A)|; {@link Double#NEGATIVE_INFINITY} when {@code sign == 0}
- * @param smallestPivotRatio min over elimination steps of |pivot| / max|A_ij| (0 when sign == 0,
- *     1 for n = 0): a value near machine precision means the matrix is singular up to rounding and
+ * @param smallestPivotRatio min over elimination steps of |pivot| / max|A_ij| (0 when sign == 0, 1
+ *     for n = 0): a value near machine precision means the matrix is singular up to rounding and
  *     the sign is not reliable (an indicator, not a bound: like LU, pivots need not reveal every
  *     near-singularity)
  */

@@ -1,11 +1,10 @@
 package hopstat.linalg;
 
 /**
- * Thin Householder QR of a dense real matrix, with the orthonormal factor formed explicitly and
- * the diagonal of R returned: the re-orthogonalisation step of transfer-matrix Lyapunov
- * calculations, and small real inverses. Pure Java (no EJML, no native call): the matrices are
- * small (2K × K with K the orbitals of one slice) and the call sits in a loop where the JNI
- * overhead would dominate.
+ * Thin Householder QR of a dense real matrix, with the orthonormal factor formed explicitly and the
+ * diagonal of R returned: the re-orthogonalisation step of transfer-matrix Lyapunov calculations,
+ * and small real inverses. Pure Java (no EJML, no native call): the matrices are small (2K × K with
+ * K the orbitals of one slice) and the call sits in a loop where the JNI overhead would dominate.
  *
  * <p>Storage is a plain row-major {@code double[]} so that callers can keep their blocks in flat
  * arrays. The workspace grows to the largest size seen and never shrinks; once warm, a call
@@ -19,9 +18,8 @@ public final class RealQrWorkspace {
 
   /**
    * Overwrites the {@code rows × cols} matrix {@code a} (row-major, rows ≥ cols) with the thin
-   * orthonormal factor Q of a = Q R and writes the diagonal of R. The signs follow the
-   * Householder convention (R_kk = −sign(a_kk)·‖column‖); callers that need growth rates use
-   * ln|R_kk|.
+   * orthonormal factor Q of a = Q R and writes the diagonal of R. The signs follow the Householder
+   * convention (R_kk = −sign(a_kk)·‖column‖); callers that need growth rates use ln|R_kk|.
    *
    * @param a overwritten: on entry the matrix, on exit Q (orthonormal columns)
    * @param rows number of rows, ≥ cols
@@ -74,9 +72,9 @@ public final class RealQrWorkspace {
   }
 
   /**
-   * Inverts a square real matrix through its QR decomposition: a⁻¹ = R⁻¹ Qᵀ. Cost O(n⁴) as
-   * written (R's entries are recomputed from Qᵀa during back substitution); meant for small n,
-   * once per task (e.g. the inter-slice hopping of a transfer-matrix run).
+   * Inverts a square real matrix through its QR decomposition: a⁻¹ = R⁻¹ Qᵀ. Cost O(n⁴) as written
+   * (R's entries are recomputed from Qᵀa during back substitution); meant for small n, once per
+   * task (e.g. the inter-slice hopping of a transfer-matrix run).
    *
    * @param a n×n row-major; read, not modified
    * @param n order
@@ -85,9 +83,11 @@ public final class RealQrWorkspace {
    * @param rDiagonalScratch length ≥ n; scratch
    * @return false if a is singular to working precision (|R_kk| ≤ 1e−14·max|R_jj|)
    */
-  public boolean invert(double[] a, int n, double[] inverse, double[] scratch, double[] rDiagonalScratch) {
+  public boolean invert(
+      double[] a, int n, double[] inverse, double[] scratch, double[] rDiagonalScratch) {
     if (a == inverse || a == scratch || inverse == scratch) {
-      throw new IllegalArgumentException("inverse and scratch must not alias the input or each other");
+      throw new IllegalArgumentException(
+          "inverse and scratch must not alias the input or each other");
     }
     System.arraycopy(a, 0, scratch, 0, n * n);
     if (!orthonormalise(scratch, n, n, rDiagonalScratch)) {
@@ -126,8 +126,12 @@ public final class RealQrWorkspace {
     return s;
   }
 
-  /** Applies I − tau v vᵀ (v = column k of the reflector store, rows ≥ k) to columns firstCol.. of a. */
-  private void applyReflector(double[] a, double[] v, int rows, int cols, int k, int firstCol, double tk) {
+  /**
+   * Applies I − tau v vᵀ (v = column k of the reflector store, rows ≥ k) to columns firstCol.. of
+   * a.
+   */
+  private void applyReflector(
+      double[] a, double[] v, int rows, int cols, int k, int firstCol, double tk) {
     if (firstCol >= cols) {
       return;
     }

@@ -27,11 +27,20 @@ import org.ejml.data.ZMatrixRMaj;
  * @param window the sites of two consecutive slices n (indices 0..S−1) and n+1 (S..2S−1), S =
  *     sliceLattice.sites(); for d = 1 an open chain of two cells
  */
-public record BarSlices(int orbitals, int crossSection, ZMatrixRMaj onSlice, ZMatrixRMaj coupling, Lattice sliceLattice, Lattice window) {
+public record BarSlices(
+    int orbitals,
+    int crossSection,
+    ZMatrixRMaj onSlice,
+    ZMatrixRMaj coupling,
+    Lattice sliceLattice,
+    Lattice window) {
 
   public BarSlices {
-    if (orbitals < 1 || onSlice.numRows != orbitals || onSlice.numCols != orbitals
-        || coupling.numRows != orbitals || coupling.numCols != orbitals) {
+    if (orbitals < 1
+        || onSlice.numRows != orbitals
+        || onSlice.numCols != orbitals
+        || coupling.numRows != orbitals
+        || coupling.numCols != orbitals) {
       throw new IllegalArgumentException("H and T must be K x K, K = " + orbitals);
     }
     if (sliceLattice.orbitals() != orbitals || window.orbitals() != 2 * orbitals) {

@@ -1,9 +1,9 @@
 package hopstat.localisation;
 
 /**
- * {@code count} equal-width energy windows tiling [lower, upper]: window w is
- * [lower + w·δ, lower + (w+1)·δ), δ = (upper − lower)/count, 0-based, the last one closed at
- * {@code upper}. Energies in the model's unit.
+ * {@code count} equal-width energy windows tiling [lower, upper]: window w is [lower + w·δ, lower +
+ * (w+1)·δ), δ = (upper − lower)/count, 0-based, the last one closed at {@code upper}. Energies in
+ * the model's unit.
  *
  * @param count number of windows, ≥ 1
  * @param lower lower edge of window 0
@@ -16,7 +16,8 @@ public record EnergyWindows(int count, double lower, double upper) {
       throw new IllegalArgumentException("need at least one window: " + count);
     }
     if (!Double.isFinite(lower) || !Double.isFinite(upper) || !(upper > lower)) {
-      throw new IllegalArgumentException("window edges must be finite with upper > lower: [" + lower + ", " + upper + "]");
+      throw new IllegalArgumentException(
+          "window edges must be finite with upper > lower: [" + lower + ", " + upper + "]");
     }
   }
 

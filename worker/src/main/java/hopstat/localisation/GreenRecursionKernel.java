@@ -5,26 +5,26 @@ import org.ejml.data.ZMatrixRMaj;
 
 /**
  * The smallest positive Lyapunov exponent of a quasi-one-dimensional bar with complex slices and
- * possibly singular inter-slice couplings (e.g. the QWZ hopping t(σz + iσx)/2, BdG wires at Δ =
- * t, SSH), by a QR-stabilised propagation of the space of solutions written as a matrix pencil, so
+ * possibly singular inter-slice couplings (e.g. the QWZ hopping t(σz + iσx)/2, BdG wires at Δ = t,
+ * SSH), by a QR-stabilised propagation of the space of solutions written as a matrix pencil, so
  * that no coupling and no self-energy is ever inverted. (The class keeps its historical name: it
- * used to run the recursive Green's function of MacKinnon &amp; Kramer, Z. Phys. B 53, 1
- * (1983); see "Why not the Green's function recursion" below.)
+ * used to run the recursive Green's function of MacKinnon &amp; Kramer, Z. Phys. B 53, 1 (1983);
+ * see "Why not the Green's function recursion" below.)
  *
  * <p><b>Equation.</b> Bar of slices with on-slice blocks H_n and couplings T_n = H_{n+1,n} (see
  * {@link BarSlices}): T_{n−1} ψ_{n−1} + (H_n − E) ψ_n + T_n† ψ_{n+1} = 0. A K-dimensional space of
  * solutions is held as an orthonormal 2K × K frame F_n = [P; Q] of pairs (ψ_n, ψ_{n−1}). With Z =
  * (E − H_n) P − T_{n−1} Q, the solution with frame coordinates c continues to every ψ_{n+1} with
- * T_n† ψ_{n+1} = Z c, i.e. (ψ_{n+1}, c) ∈ ker B, B = [T_n†, −Z] (K × 2K). A Householder QR of
- * B† = [T_n; −Z†] gives an orthonormal basis [X; C] of ker B (the last K columns of its full Q;
- * {@link hopstat.linalg.ComplexHouseholderOps}); the new pairs [X; P C] = F_{n+1} R (QR again). So
+ * T_n† ψ_{n+1} = Z c, i.e. (ψ_{n+1}, c) ∈ ker B, B = [T_n†, −Z] (K × 2K). A Householder QR of B† =
+ * [T_n; −Z†] gives an orthonormal basis [X; C] of ker B (the last K columns of its full Q; {@link
+ * hopstat.linalg.ComplexHouseholderOps}); the new pairs [X; P C] = F_{n+1} R (QR again). So
  * new-frame coordinates z map to old ones by A_n = C R⁻¹ (derived). No inverse of T_n is needed: a
  * singular T_n makes C singular, which is an infinitely fast channel (γ = ∞), not a breakdown.
  *
- * <p><b>Exponent.</b> The forward map restricted to the frame has the K largest exponents γ_1 ≥ …
- * ≥ γ_K of the 2K (for Hermitian slices at real E they come in ± pairs, so these are the
- * non-negative ones, some possibly +∞ from singular couplings), hence the backward product M_N =
- * A_1 A_2 ⋯ A_N has singular values ~ e^{−γ_i N} (Oseledec; the QR/Benettin scheme as in {@link
+ * <p><b>Exponent.</b> The forward map restricted to the frame has the K largest exponents γ_1 ≥ … ≥
+ * γ_K of the 2K (for Hermitian slices at real E they come in ± pairs, so these are the non-negative
+ * ones, some possibly +∞ from singular couplings), hence the backward product M_N = A_1 A_2 ⋯ A_N
+ * has singular values ~ e^{−γ_i N} (Oseledec; the QR/Benettin scheme as in {@link
  * TransferMatrixKernel}) and ‖M_N‖ ~ e^{−γ_min N} with γ_min the smallest FINITE non-negative
  * exponent: γ = −lim (1/N) ln ‖M_N‖_F, amplitude convention |ψ| ~ e^{−γx}. M is renormalised to
  * unit Frobenius norm after every slice and the logarithms summed. Only this one exponent is
@@ -32,43 +32,43 @@ import org.ejml.data.ZMatrixRMaj;
  *
  * <p><b>Starting frame.</b> A fixed, deterministic generic frame (a golden-ratio Weyl sequence,
  * orthonormalised) with a fictitious coupling T_0 = 1, not the open end ψ_0 = 0: at E = 0 in a
- * topological phase the open end holds zero modes that decay into the bar, a non-generic start
- * that would only be corrected by rounding. No randomness is drawn for it.
+ * topological phase the open end holds zero modes that decay into the bar, a non-generic start that
+ * would only be corrected by rounding. No randomness is drawn for it.
  *
- * <p><b>Zero modes at the ends.</b> Because the frame is generic and the exponent is the top one
- * of the backward product, the result does not depend on end modes: several zero modes per end
+ * <p><b>Zero modes at the ends.</b> Because the frame is generic and the exponent is the top one of
+ * the backward product, the result does not depend on end modes: several zero modes per end
  * (|winding| ≥ 2 in class BDI, Kramers pairs in class DIII) or a mix of topological and trivial
- * channels give the smallest exponent of all channels (tested against two SSH chains, decoupled
- * and coupled, and the diii-wire with spin–orbit coupling, clean and disordered).
+ * channels give the smallest exponent of all channels (tested against two SSH chains, decoupled and
+ * coupled, and the diii-wire with spin–orbit coupling, clean and disordered).
  *
- * <p><b>Why not the Green's function recursion.</b> The previous engine built G_{1N} of the
- * open bar by Dyson's equation, Σ_{n+1} = T_n (E − H_n − Σ_n)⁻¹ T_n†, and took |rate| of ‖G_{1N}‖
- * (it grows when the open ends hold zero modes). At E = 0 in a topological phase the right-end
- * surface Green's function of a long bar has a pole, and the open left end keeps Σ finite only
- * through an exact cancellation between left and right end modes that the antiunitary symmetries
- * (T, C) enforce. Rounding breaks those symmetries at 1e-16 and the break grows by ~e^{2γ} per
- * slice (measured on the clean diii-wire, μ = 0.5, λ = 0.3: relative T- and C-breaking of Σ_n from
- * 7e-16 to O(1) within 9 slices, then Σ exploded on a rank-2 subspace and the factorisation failed;
- * symmetrising Σ by T and C at every slice removed the breakdown, which located the cause). Real
- * 2 × 2 BdG slices and SSH-like zero patterns preserved the cancellation exactly, which is why the
+ * <p><b>Why not the Green's function recursion.</b> The previous engine built G_{1N} of the open
+ * bar by Dyson's equation, Σ_{n+1} = T_n (E − H_n − Σ_n)⁻¹ T_n†, and took |rate| of ‖G_{1N}‖ (it
+ * grows when the open ends hold zero modes). At E = 0 in a topological phase the right-end surface
+ * Green's function of a long bar has a pole, and the open left end keeps Σ finite only through an
+ * exact cancellation between left and right end modes that the antiunitary symmetries (T, C)
+ * enforce. Rounding breaks those symmetries at 1e-16 and the break grows by ~e^{2γ} per slice
+ * (measured on the clean diii-wire, μ = 0.5, λ = 0.3: relative T- and C-breaking of Σ_n from 7e-16
+ * to O(1) within 9 slices, then Σ exploded on a rank-2 subspace and the factorisation failed;
+ * symmetrising Σ by T and C at every slice removed the breakdown, which located the cause). Real 2
+ * × 2 BdG slices and SSH-like zero patterns preserved the cancellation exactly, which is why the
  * Kitaev and SSH chains were unaffected. Also, |rate| of ‖G_{1N}‖ reported the fastest topological
  * channel, not the slowest channel, when channels differ.
  *
  * <p><b>Warm-up, error estimate and stopping</b> as in {@link TransferMatrixKernel}: the first
- * max(64, 10·K) slices (whole blocks) are not counted; d_b = −(sum of the log-norm increments) over a
- * block of {@link #BLOCK_SLICES} slices; γ = Σ d_b / (B·BLOCK_SLICES) and its relative standard
+ * max(64, 10·K) slices (whole blocks) are not counted; d_b = −(sum of the log-norm increments) over
+ * a block of {@link #BLOCK_SLICES} slices; γ = Σ d_b / (B·BLOCK_SLICES) and its relative standard
  * error sqrt(var(d)/B)/|mean(d)| with blocks treated as independent (block-to-block correlations
  * over the localisation length are ignored, as in the transfer-matrix kernel). After at least
  * {@link TransferMatrixKernel#MIN_BLOCKS} blocks the run stops when the error reaches the target;
- * after {@code spec.maxSlices()} slices it stops unconverged. In a band of a clean bar γ → 0 and may
- * come out slightly negative; the caller treats γ ≤ 0 as not converged.
+ * after {@code spec.maxSlices()} slices it stops unconverged. In a band of a clean bar γ → 0 and
+ * may come out slightly negative; the caller treats γ ≤ 0 as not converged.
  *
  * <p><b>Failure outcomes</b> (NaN exponent, not an exception): a zero or non-finite diagonal entry
  * of R, an overflow, or a one-slice factor ‖M A_n‖ ≤ {@link #DECOUPLED} (the slices decouple to
  * working precision, e.g. T = 0: γ = ∞).
  *
- * <p><b>Randomness.</b> None drawn here: the {@link SliceSource} supplies H_n and T_n for n = 1,
- * 2, … in order, once each.
+ * <p><b>Randomness.</b> None drawn here: the {@link SliceSource} supplies H_n and T_n for n = 1, 2,
+ * … in order, once each.
  *
  * <p><b>Cost.</b> Per slice two Householder QRs of 2K × K complex matrices and the formation of K
  * columns of Q (pure Java, O(K³)), a triangular solve and three K × K products; memory O(K²),
@@ -76,7 +76,10 @@ import org.ejml.data.ZMatrixRMaj;
  */
 public final class GreenRecursionKernel {
 
-  /** Slices per error block (same as {@link TransferMatrixKernel#QR_INTERVAL}, so both kernels' errors compare). */
+  /**
+   * Slices per error block (same as {@link TransferMatrixKernel#QR_INTERVAL}, so both kernels'
+   * errors compare).
+   */
   public static final int BLOCK_SLICES = 4;
 
   /**
@@ -111,14 +114,17 @@ public final class GreenRecursionKernel {
    * @return γ as {@code smallestPositive} (and the only entry of {@code exponents}); NaN exponent
    *     and error on the failure outcomes listed in the class Javadoc
    */
-  public static LyapunovResult run(int k, LyapunovSpec spec, SliceSource source, GreenRecursionWorkspace workspace) {
+  public static LyapunovResult run(
+      int k, LyapunovSpec spec, SliceSource source, GreenRecursionWorkspace workspace) {
     if (k < 1) {
       throw new IllegalArgumentException("slice dimension must be >= 1: " + k);
     }
     GreenRecursionWorkspace ws = workspace;
     ws.ensure(k);
     double energy = spec.energy();
-    long warmupBlocks = (Math.max(TransferMatrixKernel.MIN_WARMUP_SLICES, 10L * k) + BLOCK_SLICES - 1) / BLOCK_SLICES;
+    long warmupBlocks =
+        (Math.max(TransferMatrixKernel.MIN_WARMUP_SLICES, 10L * k) + BLOCK_SLICES - 1)
+            / BLOCK_SLICES;
     long blocks = 0;
     long counted = 0;
     double sum = 0;
@@ -148,7 +154,8 @@ public final class GreenRecursionKernel {
         for (int i = 0; i < len; i++) {
           z[i] = energy * p[i] - z[i] - tq[i];
         }
-        // B† = [T_n; −Z†]; ker B = {(ψ_{n+1}, c) : T_n† ψ_{n+1} = Z c} = last K columns of B†'s full Q
+        // B† = [T_n; −Z†]; ker B = {(ψ_{n+1}, c) : T_n† ψ_{n+1} = Z c} = last K columns of B†'s
+        // full Q
         stack(ws.coupling, ws.z, true, ws.stacked);
         ComplexHouseholderOps.factor(ws.stacked, ws.reflectors);
         ComplexHouseholderOps.formQ(ws.reflectors, k, ws.kernel);
@@ -200,7 +207,12 @@ public final class GreenRecursionKernel {
       }
     }
     double gamma = counted == 0 || broken ? Double.NaN : sum / (counted * (double) BLOCK_SLICES);
-    return new LyapunovResult(gamma, broken ? Double.NaN : relativeError, slices, converged && !broken, new double[] {gamma});
+    return new LyapunovResult(
+        gamma,
+        broken ? Double.NaN : relativeError,
+        slices,
+        converged && !broken,
+        new double[] {gamma});
   }
 
   /**
@@ -221,7 +233,8 @@ public final class GreenRecursionKernel {
   }
 
   /** out (2K × K) ← [top; bottom] or, if {@code negConjBottom}, [top; −bottom†]. */
-  private static void stack(ZMatrixRMaj top, ZMatrixRMaj bottom, boolean negConjBottom, ZMatrixRMaj out) {
+  private static void stack(
+      ZMatrixRMaj top, ZMatrixRMaj bottom, boolean negConjBottom, ZMatrixRMaj out) {
     int k = top.numRows;
     double[] o = out.data;
     double[] t = top.data;

@@ -15,8 +15,8 @@ import org.ejml.data.ZMatrixRMaj;
  *
  * <p>Backend: the Householder steps are pure Java for every K. Slices of K ≤ {@link #SMALL_SLICE}
  * orbitals use the pure-Java products whatever {@code linalg} is, because each native call crosses
- * JNI and copies its operands, a fixed cost expected to dominate 2 × 2 or 4 × 4 blocks; larger slices use {@code linalg}'s kind. The
- * threshold is a design guess, not yet backed by a benchmark.
+ * JNI and copies its operands, a fixed cost expected to dominate 2 × 2 or 4 × 4 blocks; larger
+ * slices use {@code linalg}'s kind. The threshold is a design guess, not yet backed by a benchmark.
  */
 public final class GreenRecursionWorkspace {
 
@@ -45,7 +45,9 @@ public final class GreenRecursionWorkspace {
   private ComplexProducts productsLarge;
   private ComplexProducts productsSmall;
 
-  /** @param linalg the backend for slices larger than {@link #SMALL_SLICE}; read */
+  /**
+   * @param linalg the backend for slices larger than {@link #SMALL_SLICE}; read
+   */
   public GreenRecursionWorkspace(Linalg linalg) {
     this.linalg = java.util.Objects.requireNonNull(linalg, "linalg");
   }
@@ -65,7 +67,21 @@ public final class GreenRecursionWorkspace {
     if (k == sizedFor) {
       return;
     }
-    for (ZMatrixRMaj m : new ZMatrixRMaj[] {onSlice, coupling, previousCoupling, frameTop, frameBottom, z, x, c, a, product, scratch, identity}) {
+    for (ZMatrixRMaj m :
+        new ZMatrixRMaj[] {
+          onSlice,
+          coupling,
+          previousCoupling,
+          frameTop,
+          frameBottom,
+          z,
+          x,
+          c,
+          a,
+          product,
+          scratch,
+          identity
+        }) {
       m.reshape(k, k);
     }
     for (ZMatrixRMaj m : new ZMatrixRMaj[] {stacked, reflectors, kernel}) {

@@ -3,11 +3,11 @@ package hopstat.localisation;
 import org.ejml.data.ZMatrixRMaj;
 
 /**
- * Inverse participation ratio P = Σ_i |ψ_i|⁴ / (Σ_i |ψ_i|²)² of a state, summed over matrix
- * indices i, i.e. over orbitals (per-orbital amplitude convention: orbitals of one site are not
- * summed first). P = 1 for a state on one orbital, 1/N for a uniform state on N orbitals; a
- * random unit vector has ⟨P⟩ = 3/(N+2) (real) or 2/(N+1) (complex) (Porter–Thomas; common
- * practice). O(N) per state, no allocation.
+ * Inverse participation ratio P = Σ_i |ψ_i|⁴ / (Σ_i |ψ_i|²)² of a state, summed over matrix indices
+ * i, i.e. over orbitals (per-orbital amplitude convention: orbitals of one site are not summed
+ * first). P = 1 for a state on one orbital, 1/N for a uniform state on N orbitals; a random unit
+ * vector has ⟨P⟩ = 3/(N+2) (real) or 2/(N+1) (complex) (Porter–Thomas; common practice). O(N) per
+ * state, no allocation.
  */
 public final class IprKernel {
 
@@ -16,8 +16,8 @@ public final class IprKernel {
   /**
    * @param vectors read, not modified: states as columns
    * @param column 0-based column index
-   * @return the IPR of that column (normalised by its norm, so unnormalised input is fine); NaN
-   *     for a zero column
+   * @return the IPR of that column (normalised by its norm, so unnormalised input is fine); NaN for
+   *     a zero column
    */
   public static double ipr(ZMatrixRMaj vectors, int column) {
     int n = vectors.numRows;

@@ -1,13 +1,13 @@
 package hopstat.localisation;
 
 /**
- * Adjacent-gap ratios of a spectrum, r_n = min(s_n, s_{n−1}) / max(s_n, s_{n−1}) with
- * s_n = E_{n+1} − E_n (Oganesyan &amp; Huse, PRB 75, 155111 (2007); Atas, Bogomolny, Giraud, Roux,
- * PRL 110, 084101 (2013)), binned into energy windows. No unfolding is needed: the ratio is
- * independent of the local density of states.
+ * Adjacent-gap ratios of a spectrum, r_n = min(s_n, s_{n−1}) / max(s_n, s_{n−1}) with s_n = E_{n+1}
+ * − E_n (Oganesyan &amp; Huse, PRB 75, 155111 (2007); Atas, Bogomolny, Giraud, Roux, PRL 110,
+ * 084101 (2013)), binned into energy windows. No unfolding is needed: the ratio is independent of
+ * the local density of states.
  *
- * <p>Reference means: Poisson 2 ln 2 − 1 ≈ 0.3863 (localised), GOE ≈ 0.5307, GUE ≈ 0.5996,
- * GSE ≈ 0.6744 (Atas et al. 2013).
+ * <p>Reference means: Poisson 2 ln 2 − 1 ≈ 0.3863 (localised), GOE ≈ 0.5307, GUE ≈ 0.5996, GSE ≈
+ * 0.6744 (Atas et al. 2013).
  *
  * <p>Spectra with a ±E symmetry (BdG particle–hole, chiral) must be reduced to E &gt; 0 first, and
  * Kramers-degenerate spectra to one level of each pair, or the ratios are dominated by the
@@ -35,7 +35,8 @@ public final class LevelRatioKernel {
    * @param out length ≥ n; overwritten with the kept levels, ascending
    * @return the number of kept levels
    */
-  public static int selectLevels(double[] sortedLevels, int n, boolean positiveOnly, boolean kramersPairs, double[] out) {
+  public static int selectLevels(
+      double[] sortedLevels, int n, boolean positiveOnly, boolean kramersPairs, double[] out) {
     if (out == sortedLevels) {
       throw new IllegalArgumentException("out must not alias the input");
     }
@@ -71,7 +72,8 @@ public final class LevelRatioKernel {
    * @param sums length ≥ windows.count(); overwritten with Σ r per window
    * @param counts length ≥ windows.count(); overwritten with the number of ratios per window
    */
-  public static void accumulate(double[] levels, int m, EnergyWindows windows, double[] sums, int[] counts) {
+  public static void accumulate(
+      double[] levels, int m, EnergyWindows windows, double[] sums, int[] counts) {
     int nw = windows.count();
     for (int w = 0; w < nw; w++) {
       sums[w] = 0.0;

@@ -14,7 +14,8 @@ public record LyapunovSpec(double energy, double targetRelativeError, long maxSl
       throw new IllegalArgumentException("energy must be finite: " + energy);
     }
     if (!(targetRelativeError >= 0) || Double.isInfinite(targetRelativeError)) {
-      throw new IllegalArgumentException("targetRelativeError must be finite and >= 0: " + targetRelativeError);
+      throw new IllegalArgumentException(
+          "targetRelativeError must be finite and >= 0: " + targetRelativeError);
     }
     if (maxSlices < 1) {
       throw new IllegalArgumentException("maxSlices must be positive: " + maxSlices);

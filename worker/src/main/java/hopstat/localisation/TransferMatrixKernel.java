@@ -13,31 +13,31 @@ import hopstat.lattice.HamiltonianBuilder;
  *   ψ_{n+1} = T⁻¹ [(E − H_n) ψ_n − Tᵀ ψ_{n−1}] .
  * </pre>
  *
- * K = slice dimension. The kernel propagates K vectors (the columns of the 2K × K block
- * [ψ_n; ψ_{n−1}], started from [1; 0]) and re-orthonormalises them by a Householder QR every
- * {@link #QR_INTERVAL} slices. ln|R_jj| summed over the run and divided by the number of slices
- * converges to the j-th largest Lyapunov exponent γ_j (Benettin et al., Meccanica 15, 9 (1980));
- * with K vectors the last one, γ_K, is the smallest non-negative exponent of the symplectic
- * spectrum {±γ_j}: the inverse localisation length of the bar.
+ * K = slice dimension. The kernel propagates K vectors (the columns of the 2K × K block [ψ_n;
+ * ψ_{n−1}], started from [1; 0]) and re-orthonormalises them by a Householder QR every {@link
+ * #QR_INTERVAL} slices. ln|R_jj| summed over the run and divided by the number of slices converges
+ * to the j-th largest Lyapunov exponent γ_j (Benettin et al., Meccanica 15, 9 (1980)); with K
+ * vectors the last one, γ_K, is the smallest non-negative exponent of the symplectic spectrum
+ * {±γ_j}: the inverse localisation length of the bar.
  *
  * <p><b>Warm-up.</b> The first {@code max(64, 10·K)} slices (rounded up to whole QR blocks) are
- * propagated but not counted, so the orthonormal frame has aligned with the Lyapunov vectors
- * before accumulation starts (common practice).
+ * propagated but not counted, so the orthonormal frame has aligned with the Lyapunov vectors before
+ * accumulation starts (common practice).
  *
  * <p><b>Error estimate and stopping.</b> Let d_b = ln|R_KK| of block b (QR_INTERVAL slices). The
  * estimate is γ_K = Σ d_b / (B·QR_INTERVAL) and its relative standard error is
- * sqrt(var(d)/B)/|mean(d)| with the sample variance of the d_b, treating blocks as independent
- * (the usual practice since MacKinnon &amp; Kramer; block-to-block correlations are ignored, and
- * for weak disorder the quasi-periodic in-band oscillation of d_b inflates var(d), making the
- * estimate conservative). After at least {@link #MIN_BLOCKS} counted blocks the run stops as soon
- * as the estimate reaches {@code spec.targetRelativeError()}; after {@code spec.maxSlices()}
- * slices it stops unconverged.
+ * sqrt(var(d)/B)/|mean(d)| with the sample variance of the d_b, treating blocks as independent (the
+ * usual practice since MacKinnon &amp; Kramer; block-to-block correlations are ignored, and for
+ * weak disorder the quasi-periodic in-band oscillation of d_b inflates var(d), making the estimate
+ * conservative). After at least {@link #MIN_BLOCKS} counted blocks the run stops as soon as the
+ * estimate reaches {@code spec.targetRelativeError()}; after {@code spec.maxSlices()} slices it
+ * stops unconverged.
  *
  * <p><b>Randomness.</b> The kernel draws nothing itself: the {@link SliceSource} fills H_n for
  * slice n = 1, 2, … in order, drawing that slice's disorder from the realisation's generator.
  *
- * <p><b>Cost.</b> Per slice O(nnz(H_n)·K) plus O(K²) (diagonal T) or O(K³) (general T), and a QR
- * of 2K × K, O(8K³), every QR_INTERVAL slices. Memory O(K²), independent of the length.
+ * <p><b>Cost.</b> Per slice O(nnz(H_n)·K) plus O(K²) (diagonal T) or O(K³) (general T), and a QR of
+ * 2K × K, O(8K³), every QR_INTERVAL slices. Memory O(K²), independent of the length.
  */
 public final class TransferMatrixKernel {
 
@@ -58,8 +58,8 @@ public final class TransferMatrixKernel {
   @FunctionalInterface
   public interface SliceSource {
     /**
-     * @param slice reset to dimension K by the kernel; the source appends H_n's terms (real
-     *     values only; an imaginary part is rejected)
+     * @param slice reset to dimension K by the kernel; the source appends H_n's terms (real values
+     *     only; an imaginary part is rejected)
      */
     void fill(HamiltonianBuilder slice);
   }
@@ -78,7 +78,12 @@ public final class TransferMatrixKernel {
    *     if the vectors overflowed or became linearly dependent
    * @throws IllegalArgumentException if T is singular or a slice term is complex
    */
-  public static LyapunovResult run(double[] interSliceHopping, int k, LyapunovSpec spec, SliceSource source, TransferMatrixWorkspace workspace) {
+  public static LyapunovResult run(
+      double[] interSliceHopping,
+      int k,
+      LyapunovSpec spec,
+      SliceSource source,
+      TransferMatrixWorkspace workspace) {
     if (k < 1 || interSliceHopping.length < k * k) {
       throw new IllegalArgumentException("inter-slice hopping must be K x K with K >= 1, K = " + k);
     }
@@ -153,12 +158,11 @@ public final class TransferMatrixKernel {
     for (int j = 0; j < k; j++) {
       exponents[j] = counted == 0 || broken ? Double.NaN : ws.logSums[j] / length;
     }
-    return new LyapunovResult(exponents[k - 1], broken ? Double.NaN : relativeError, slices, converged, exponents);
+    return new LyapunovResult(
+        exponents[k - 1], broken ? Double.NaN : relativeError, slices, converged, exponents);
   }
 
-  /**
-   * Stores T⁻¹ and T⁻¹Tᵀ; returns true if T is diagonal (then only the diagonals are used).
-   */
+  /** Stores T⁻¹ and T⁻¹Tᵀ; returns true if T is diagonal (then only the diagonals are used). */
   private static boolean prepareHopping(double[] t, int k, TransferMatrixWorkspace ws) {
     boolean diagonal = true;
     for (int i = 0; i < k && diagonal; i++) {
@@ -173,7 +177,8 @@ public final class TransferMatrixKernel {
       for (int i = 0; i < k; i++) {
         double tii = t[i * k + i];
         if (tii == 0.0) {
-          throw new IllegalArgumentException("the inter-slice hopping is singular (T[" + i + "][" + i + "] = 0)");
+          throw new IllegalArgumentException(
+              "the inter-slice hopping is singular (T[" + i + "][" + i + "] = 0)");
         }
         ws.hoppingInverse[i] = 1.0 / tii;
         ws.hoppingRatio[i] = 1.0; // T⁻¹Tᵀ = 1 for diagonal T
@@ -181,7 +186,8 @@ public final class TransferMatrixKernel {
       return true;
     }
     if (!ws.qr.invert(t, k, ws.hoppingInverse, ws.scratch, ws.rDiagonal)) {
-      throw new IllegalArgumentException("the inter-slice hopping T is singular; the transfer matrix does not exist");
+      throw new IllegalArgumentException(
+          "the inter-slice hopping T is singular; the transfer matrix does not exist");
     }
     // T⁻¹Tᵀ
     for (int i = 0; i < k; i++) {
@@ -197,7 +203,15 @@ public final class TransferMatrixKernel {
   }
 
   /** nxt = T⁻¹[(E − H)cur] − T⁻¹Tᵀ prev, all K × K row-major. */
-  private static void propagate(HamiltonianBuilder h, double energy, int k, boolean diagonal, double[] cur, double[] prev, double[] nxt, TransferMatrixWorkspace ws) {
+  private static void propagate(
+      HamiltonianBuilder h,
+      double energy,
+      int k,
+      boolean diagonal,
+      double[] cur,
+      double[] prev,
+      double[] nxt,
+      TransferMatrixWorkspace ws) {
     double[] tmp = ws.scratch;
     int kk = k * k;
     for (int i = 0; i < kk; i++) {
@@ -206,7 +220,8 @@ public final class TransferMatrixKernel {
     int terms = h.termCount();
     for (int term = 0; term < terms; term++) {
       if (h.imaginaryPart(term) != 0.0) {
-        throw new IllegalArgumentException("complex slice Hamiltonian: the real transfer-matrix kernel needs real H_n");
+        throw new IllegalArgumentException(
+            "complex slice Hamiltonian: the real transfer-matrix kernel needs real H_n");
       }
       int r = h.row(term);
       int c = h.column(term);
@@ -252,7 +267,8 @@ public final class TransferMatrixKernel {
   }
 
   /** QR of [cur; prev]; false if a column vanished or overflowed (then exponents are NaN). */
-  private static boolean reorthonormalise(double[] cur, double[] prev, int k, TransferMatrixWorkspace ws) {
+  private static boolean reorthonormalise(
+      double[] cur, double[] prev, int k, TransferMatrixWorkspace ws) {
     int kk = k * k;
     double[] a = ws.stacked;
     System.arraycopy(cur, 0, a, 0, kk);

@@ -5,15 +5,17 @@ import hopstat.linalg.Linalg;
 import hopstat.linalg.RealQrWorkspace;
 
 /**
- * Scratch for {@link TransferMatrixKernel}: the two current slices of the K propagated vectors,
- * the slice's term list, the inverse inter-slice hopping and the QR workspace. Sized by K only
- * (memory independent of the bar length). Grows, never shrinks. One per worker thread.
+ * Scratch for {@link TransferMatrixKernel}: the two current slices of the K propagated vectors, the
+ * slice's term list, the inverse inter-slice hopping and the QR workspace. Sized by K only (memory
+ * independent of the bar length). Grows, never shrinks. One per worker thread.
  */
 public final class TransferMatrixWorkspace {
 
   final RealQrWorkspace qr = new RealQrWorkspace();
+
   /** The slice Hamiltonian H_n, refilled by the slice source for every slice. */
   final HamiltonianBuilder slice = new HamiltonianBuilder();
+
   double[] current = new double[1];
   double[] previous = new double[1];
   double[] next = new double[1];
@@ -24,7 +26,10 @@ public final class TransferMatrixWorkspace {
   double[] rDiagonal = new double[1];
   double[] logSums = new double[1];
 
-  /** @param linalg unused today (the QR is pure Java); kept so the workspace can be made through the usual factory */
+  /**
+   * @param linalg unused today (the QR is pure Java); kept so the workspace can be made through the
+   *     usual factory
+   */
   public TransferMatrixWorkspace(Linalg linalg) {}
 
   /** A workspace without a linear-algebra room (the kernel needs none). */

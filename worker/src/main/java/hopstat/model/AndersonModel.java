@@ -13,14 +13,14 @@ import java.util.List;
  *   H = Σ_i ε_i c†_i c_i − t Σ_⟨ij⟩ (c†_i c_j + h.c.),
  * </pre>
  *
- * one orbital per site, unit spacing, nearest-neighbour hopping −t (clean band E(k) = −2t Σ_a cos k_a,
- * width 4dt). The clean Hamiltonian has ε_i = 0; the random potential comes from a disorder term,
- * usually {@code onsite-box} (ε_i = W·u_i, u_i uniform in [−1/2, 1/2)). Real and time-reversal
- * invariant: class AI.
+ * one orbital per site, unit spacing, nearest-neighbour hopping −t (clean band E(k) = −2t Σ_a cos
+ * k_a, width 4dt). The clean Hamiltonian has ε_i = 0; the random potential comes from a disorder
+ * term, usually {@code onsite-box} (ε_i = W·u_i, u_i uniform in [−1/2, 1/2)). Real and
+ * time-reversal invariant: class AI.
  *
- * <p>The dimension is fixed per registered model ({@code anderson-1d}, {@code anderson-2d},
- * {@code anderson-3d}) rather than read from a parameter, because {@link Model#dimension()} and
- * {@link Model#lattice} take no parameters and observables decide applicability from the model's
+ * <p>The dimension is fixed per registered model ({@code anderson-1d}, {@code anderson-2d}, {@code
+ * anderson-3d}) rather than read from a parameter, because {@link Model#dimension()} and {@link
+ * Model#lattice} take no parameters and observables decide applicability from the model's
  * dimension.
  *
  * <p>Periodic boundaries follow {@link CubicLattices#forEachBond}: no wrap-around bond for L ≤ 2.
@@ -28,15 +28,21 @@ import java.util.List;
  */
 public final class AndersonModel implements Model, SliceHamiltonian {
 
-  /** Spec name prefix; the registered names are {@code anderson-1d}, {@code anderson-2d}, {@code anderson-3d}. */
+  /**
+   * Spec name prefix; the registered names are {@code anderson-1d}, {@code anderson-2d}, {@code
+   * anderson-3d}.
+   */
   public static final String NAME_PREFIX = "anderson-";
 
   private final int dimension;
 
-  /** @param dimension d = 1, 2 or 3 */
+  /**
+   * @param dimension d = 1, 2 or 3
+   */
   public AndersonModel(int dimension) {
     if (dimension < 1 || dimension > 3) {
-      throw new IllegalArgumentException("Anderson model dimension must be 1, 2 or 3: " + dimension);
+      throw new IllegalArgumentException(
+          "Anderson model dimension must be 1, 2 or 3: " + dimension);
     }
     this.dimension = dimension;
   }
@@ -48,9 +54,14 @@ public final class AndersonModel implements Model, SliceHamiltonian {
 
   @Override
   public String description() {
-    return "Anderson model on the " + dimension + "D hypercubic lattice (Anderson, Phys. Rev. 109, 1492 (1958)):"
-        + " H = sum_i eps_i n_i - t sum_<ij> (c_i^+ c_j + h.c.), one orbital per site, clean band [-" + (2 * dimension)
-        + "t, " + (2 * dimension) + "t]; add the random potential with disorder 'onsite-box' (eps = W u, u in [-1/2, 1/2))."
+    return "Anderson model on the "
+        + dimension
+        + "D hypercubic lattice (Anderson, Phys. Rev. 109, 1492 (1958)):"
+        + " H = sum_i eps_i n_i - t sum_<ij> (c_i^+ c_j + h.c.), one orbital per site, clean band [-"
+        + (2 * dimension)
+        + "t, "
+        + (2 * dimension)
+        + "t]; add the random potential with disorder 'onsite-box' (eps = W u, u in [-1/2, 1/2))."
         + " Class AI. Supports the transfer-matrix observable 'lyapunov' (slices along the last direction).";
   }
 
@@ -66,7 +77,11 @@ public final class AndersonModel implements Model, SliceHamiltonian {
 
   @Override
   public List<ParameterInfo> parameters() {
-    return List.of(new ParameterInfo("t", 1.0, "nearest-neighbour hopping t (energy unit); the hopping matrix element is -t"));
+    return List.of(
+        new ParameterInfo(
+            "t",
+            1.0,
+            "nearest-neighbour hopping t (energy unit); the hopping matrix element is -t"));
   }
 
   @Override
@@ -104,7 +119,12 @@ public final class AndersonModel implements Model, SliceHamiltonian {
     }
   }
 
-  private static void addHoppings(int dimension, int linearSize, Boundary boundary, double t, HamiltonianBuilder out) {
-    CubicLattices.forEachBond(dimension, linearSize, boundary, (from, to, direction) -> out.addHopping(from, to, -t, 0.0));
+  private static void addHoppings(
+      int dimension, int linearSize, Boundary boundary, double t, HamiltonianBuilder out) {
+    CubicLattices.forEachBond(
+        dimension,
+        linearSize,
+        boundary,
+        (from, to, direction) -> out.addHopping(from, to, -t, 0.0));
   }
 }

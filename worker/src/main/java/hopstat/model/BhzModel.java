@@ -8,31 +8,32 @@ import java.util.Optional;
 
 /**
  * Bernevig–Hughes–Zhang quantum spin Hall model on the square lattice (Bernevig, Hughes, Zhang,
- * Science 314, 1757 (2006)), class AII, four orbitals per site: 0 = (↑, a), 1 = (↑, b), 2 = (↓,
- * a), 3 = (↓, b); σ acts on (a, b), s on spin. Bloch form
+ * Science 314, 1757 (2006)), class AII, four orbitals per site: 0 = (↑, a), 1 = (↑, b), 2 = (↓, a),
+ * 3 = (↓, b); σ acts on (a, b), s on spin. Bloch form
  *
  * <pre>  H(k) = diag(h(k), h*(−k)) + R (s_x sin ky − s_y sin kx) ⊗ 1_σ,
  *  h(k) = A sin kx σx + A sin ky σy + [M − 2B (2 − cos kx − cos ky)] σz.</pre>
  *
  * Real space (derived as for {@link QwzModel}): spin ↑ hops r → r + x with T_x = B σz + (iA/2) σx,
  * r → r + y with T_y = B σz + (iA/2) σy, onsite (M − 4B) σz; spin ↓ uses the complex conjugates.
- * The Rashba-like coupling R (parameter {@code rashba}) adds −(iR/2) s_y ⊗ 1 to T_x and (iR/2) s_x ⊗
- * 1 to T_y; it is odd in k and odd under spin flip, so it keeps T = i s_y K (T² = −1) and breaks S_z
- * conservation (form common practice in quantum spin Hall model studies).
+ * The Rashba-like coupling R (parameter {@code rashba}) adds −(iR/2) s_y ⊗ 1 to T_x and (iR/2) s_x
+ * ⊗ 1 to T_y; it is odd in k and odd under spin flip, so it keeps T = i s_y K (T² = −1) and breaks
+ * S_z conservation (form common practice in quantum spin Hall model studies).
  *
- * <p>Each spin block is the QWZ model with m = M/(2B) − 2 after rescaling, so for R = 0 and A, B &gt;
- * 0: C_↑ = +1 for 0 &lt; M/B &lt; 4, −1 for 4 &lt; M/B &lt; 8, 0 outside [0, 8], C_↓ = −C_↑, and Z2 is odd
- * for 0 &lt; M/B &lt; 8, M/B ≠ 4 (mapping derived; QWZ sign convention). Half filling: E_F = 0 (the
- * spectrum is symmetric about 0 at R = 0).
+ * <p>Each spin block is the QWZ model with m = M/(2B) − 2 after rescaling, so for R = 0 and A, B
+ * &gt; 0: C_↑ = +1 for 0 &lt; M/B &lt; 4, −1 for 4 &lt; M/B &lt; 8, 0 outside [0, 8], C_↓ = −C_↑,
+ * and Z2 is odd for 0 &lt; M/B &lt; 8, M/B ≠ 4 (mapping derived; QWZ sign convention). Half
+ * filling: E_F = 0 (the spectrum is symmetric about 0 at R = 0).
  */
 public final class BhzModel implements Model {
 
   public static final String NAME = "bhz";
 
-  private static final SymmetryOperator TIME_REVERSAL = SymmetryOperator.local(
-      Symmetry.TIME_REVERSAL,
-      new double[][] {{0, 0, 1, 0}, {0, 0, 0, 1}, {-1, 0, 0, 0}, {0, -1, 0, 0}},
-      new double[4][4]);
+  private static final SymmetryOperator TIME_REVERSAL =
+      SymmetryOperator.local(
+          Symmetry.TIME_REVERSAL,
+          new double[][] {{0, 0, 1, 0}, {0, 0, 0, 1}, {-1, 0, 0, 0}, {0, -1, 0, 0}},
+          new double[4][4]);
 
   private static final SpinZOperator SPIN_Z = new SpinZOperator(new int[] {1, 1, -1, -1});
 
@@ -65,7 +66,10 @@ public final class BhzModel implements Model {
         new ParameterInfo("A", 1.0, "spin-orbit (linear-in-k) amplitude A (energy)"),
         new ParameterInfo("B", 1.0, "band curvature B (energy unit)"),
         new ParameterInfo("M", null, "mass M (energy); Z2 odd for 0 < M/B < 8, M/B != 4"),
-        new ParameterInfo("rashba", 0.0, "T-preserving spin-mixing amplitude R of R (sx sin ky - sy sin kx) (energy)"));
+        new ParameterInfo(
+            "rashba",
+            0.0,
+            "T-preserving spin-mixing amplitude R of R (sx sin ky - sy sin kx) (energy)"));
   }
 
   @Override
@@ -137,7 +141,8 @@ public final class BhzModel implements Model {
   }
 
   /** Adds c†_to T c_from + h.c. for a 4 × 4 hopping matrix T. */
-  private static void addBond(HamiltonianBuilder out, int from, int to, double[][] re, double[][] im) {
+  private static void addBond(
+      HamiltonianBuilder out, int from, int to, double[][] re, double[][] im) {
     for (int i = 0; i < 4; i++) {
       for (int j = 0; j < 4; j++) {
         if (re[i][j] != 0.0 || im[i][j] != 0.0) {

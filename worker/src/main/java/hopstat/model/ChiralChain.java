@@ -6,9 +6,9 @@ import hopstat.lattice.Lattice;
 /**
  * Capability of a one-dimensional chain with sublattice (chiral) symmetry and two orbitals per unit
  * cell: orbital 0 is sublattice A (chiral eigenvalue +1), orbital 1 is sublattice B (−1); every
- * hopping joins A and B. Intracell bond j joins A_j and B_j; intercell bond j joins B_j and
- * A_{j+1} (A_0 for j = L−1 on a periodic chain). Used by {@code bond-box} disorder and the
- * {@code winding} observable.
+ * hopping joins A and B. Intracell bond j joins A_j and B_j; intercell bond j joins B_j and A_{j+1}
+ * (A_0 for j = L−1 on a periodic chain). Used by {@code bond-box} disorder and the {@code winding}
+ * observable.
  */
 public interface ChiralChain {
 
@@ -18,6 +18,9 @@ public interface ChiralChain {
   /** Adds a real δ to the hopping of intracell bond {@code cell}. */
   void addIntracellShift(Lattice lattice, int cell, double delta, HamiltonianBuilder out);
 
-  /** Adds a real δ to the hopping of intercell bond {@code bond}, 0 ≤ bond &lt; {@link #intercellBondCount}. */
+  /**
+   * Adds a real δ to the hopping of intercell bond {@code bond}, 0 ≤ bond &lt; {@link
+   * #intercellBondCount}.
+   */
   void addIntercellShift(Lattice lattice, int bond, double delta, HamiltonianBuilder out);
 }

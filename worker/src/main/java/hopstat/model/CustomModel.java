@@ -38,8 +38,14 @@ public final class CustomModel implements Model {
 
   @Override
   public String description() {
-    return "user-defined lattice model from the spec's \"lattice\" block: " + definition.orbitals().size() + " orbital(s) per cell, d = "
-        + definition.dimension() + (definition.isBdg() ? ", BdG (Nambu form)" : "") + ", declared class " + definition.symmetryClass() + ".";
+    return "user-defined lattice model from the spec's \"lattice\" block: "
+        + definition.orbitals().size()
+        + " orbital(s) per cell, d = "
+        + definition.dimension()
+        + (definition.isBdg() ? ", BdG (Nambu form)" : "")
+        + ", declared class "
+        + definition.symmetryClass()
+        + ".";
   }
 
   @Override
@@ -71,7 +77,9 @@ public final class CustomModel implements Model {
    */
   @Override
   public Lattice lattice(int linearSize, Boundary boundary) {
-    Lattice cells = CubicLattices.hypercubic(definition.dimension(), linearSize, definition.orbitalsPerCell(), boundary);
+    Lattice cells =
+        CubicLattices.hypercubic(
+            definition.dimension(), linearSize, definition.orbitalsPerCell(), boundary);
     int d = definition.dimension();
     int n = definition.orbitals().size();
     int o = definition.orbitalsPerCell();
@@ -147,7 +155,9 @@ public final class CustomModel implements Model {
     return result;
   }
 
-  /** In Nambu form, V on the particles and −V on the holes of the cell (a chemical-potential shift). */
+  /**
+   * In Nambu form, V on the particles and −V on the holes of the cell (a chemical-potential shift).
+   */
   @Override
   public void addOnsitePotential(Lattice lattice, int site, double value, HamiltonianBuilder out) {
     if (!definition.isBdg()) {
@@ -167,7 +177,8 @@ public final class CustomModel implements Model {
    * for a hole orbital (k ≥ n) adds nothing (its value came with the particle), so C is kept.
    */
   @Override
-  public void addOrbitalPotential(Lattice lattice, int site, int orbital, double value, HamiltonianBuilder out) {
+  public void addOrbitalPotential(
+      Lattice lattice, int site, int orbital, double value, HamiltonianBuilder out) {
     if (!definition.isBdg()) {
       Model.super.addOrbitalPotential(lattice, site, orbital, value, out);
       return;
@@ -187,7 +198,8 @@ public final class CustomModel implements Model {
   @Override
   public SymmetryOperators symmetryOperators() {
     List<SymmetryOperator> ops = new ArrayList<>(definition.symmetries());
-    if (definition.isBdg() && definition.symmetryClass().hasParticleHole()
+    if (definition.isBdg()
+        && definition.symmetryClass().hasParticleHole()
         && ops.stream().noneMatch(op -> op.symmetry() == Symmetry.PARTICLE_HOLE)) {
       ops.add(nambuParticleHole(definition.orbitals().size()));
     }
@@ -217,8 +229,14 @@ public final class CustomModel implements Model {
       if (op.symmetry() == Symmetry.CHIRAL) {
         double[] re = op.matrixRe();
         double[] im = op.matrixIm();
-        return re[0] == 1.0 && re[1] == 0.0 && re[2] == 0.0 && re[3] == -1.0
-            && im[0] == 0.0 && im[1] == 0.0 && im[2] == 0.0 && im[3] == 0.0;
+        return re[0] == 1.0
+            && re[1] == 0.0
+            && re[2] == 0.0
+            && re[3] == -1.0
+            && im[0] == 0.0
+            && im[1] == 0.0
+            && im[2] == 0.0
+            && im[3] == 0.0;
       }
     }
     return false;

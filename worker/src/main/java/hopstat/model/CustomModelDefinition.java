@@ -15,12 +15,13 @@ import java.util.Set;
  * <p>Conventions: the sample is the L^d grid of unit cells, cell index x + L·y + L²·z; matrix index
  * = cell·o + orbital with o = n (normal) or 2n (Nambu form, when {@code pairings} is non-empty:
  * orbitals 0..n−1 are particles, n..2n−1 the holes of the same orbitals). A hopping {@code (R, a →
- * b, t)} adds t c†_{b, r+R} c_{a, r} + h.c. for every cell r; a pairing {@code (R, a, b, Δ)} adds
- * Δ c†_{b, r+R} c†_{a, r} + h.c. Cells outside an open sample are dropped; a periodic sample wraps
+ * b, t)} adds t c†_{b, r+R} c_{a, r} + h.c. for every cell r; a pairing {@code (R, a, b, Δ)} adds Δ
+ * c†_{b, r+R} c†_{a, r} + h.c. Cells outside an open sample are dropped; a periodic sample wraps
  * offsets modulo L.
  *
  * @param dimension d = 1..3
- * @param vectors d lattice vectors of length d (recorded; observables use cell (fractional) coordinates)
+ * @param vectors d lattice vectors of length d (recorded; observables use cell (fractional)
+ *     coordinates)
  * @param orbitals the orbitals of one cell, in matrix order
  * @param onsite onsite energies (real per orbital)
  * @param hoppings hopping terms, each standing for itself plus its Hermitian conjugate
@@ -88,7 +89,10 @@ public record CustomModelDefinition(
     }
   }
 
-  /** A hopping or pairing term between orbital {@code from} in cell r and {@code to} in cell r + cell. */
+  /**
+   * A hopping or pairing term between orbital {@code from} in cell r and {@code to} in cell r +
+   * cell.
+   */
   public record Term(List<Integer> cell, int from, int to, Amplitude amplitude) {
     public Term {
       cell = List.copyOf(cell);
@@ -108,7 +112,8 @@ public record CustomModelDefinition(
     symmetries = List.copyOf(symmetries);
     Objects.requireNonNull(symmetryClass, "symmetryClass");
     if (vectors.size() != dimension || vectors.stream().anyMatch(v -> v.size() != dimension)) {
-      throw new IllegalArgumentException("need " + dimension + " lattice vectors of length " + dimension);
+      throw new IllegalArgumentException(
+          "need " + dimension + " lattice vectors of length " + dimension);
     }
     if (orbitals.isEmpty()) {
       throw new IllegalArgumentException("need at least one orbital");
@@ -123,14 +128,16 @@ public record CustomModelDefinition(
       checkOrbital(t.from(), n);
       checkOrbital(t.to(), n);
       if (t.cell().size() != dimension) {
-        throw new IllegalArgumentException("cell offset must have " + dimension + " entries: " + t.cell());
+        throw new IllegalArgumentException(
+            "cell offset must have " + dimension + " entries: " + t.cell());
       }
     }
     int o = pairings.isEmpty() ? n : 2 * n;
     Set<Symmetry> seen = new LinkedHashSet<>();
     for (SymmetryOperator op : symmetries) {
       if (op.orbitalsPerSite() != o) {
-        throw new IllegalArgumentException(op.symmetry() + " must act on " + o + " orbitals per cell");
+        throw new IllegalArgumentException(
+            op.symmetry() + " must act on " + o + " orbitals per cell");
       }
       if (!seen.add(op.symmetry())) {
         throw new IllegalArgumentException("two operators for " + op.symmetry());
@@ -154,7 +161,10 @@ public record CustomModelDefinition(
     return isBdg() ? 2 * orbitals.size() : orbitals.size();
   }
 
-  /** The parameter names the amplitudes read, in order of first appearance (onsite, hoppings, pairings). */
+  /**
+   * The parameter names the amplitudes read, in order of first appearance (onsite, hoppings,
+   * pairings).
+   */
   public List<String> parameterNames() {
     Set<String> names = new LinkedHashSet<>();
     for (Onsite e : onsite) {

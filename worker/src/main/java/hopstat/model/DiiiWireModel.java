@@ -18,51 +18,55 @@ import java.util.List;
  * (s = Pauli matrices on spin). Bloch form of the normal part (derived): ξ_k + 2λ sin k s_x with
  * ξ_k = −2t cos k − μ; each spin pairs with itself (equal-spin triplet).
  *
- * <p><b>Basis</b> (Nambu per spin, H = ½ Ψ† H_BdG Ψ): orbital 0 = c_↑, 1 = c†_↑, 2 = c_↓, 3 =
- * c†_↓; matrix index 4j + orbital. Each spin's BdG entries are those of {@link PWaveWireModel};
- * the spin–orbit term has H_BdG entries (j+1 ↑p, j ↓p) = (j+1 ↓p, j ↑p) = iλ and, for holes,
- * −(iλ)* = iλ at (j+1 ↑h, j ↓h), (j+1 ↓h, j ↑h) (derived: hole block −h*).
+ * <p><b>Basis</b> (Nambu per spin, H = ½ Ψ† H_BdG Ψ): orbital 0 = c_↑, 1 = c†_↑, 2 = c_↓, 3 = c†_↓;
+ * matrix index 4j + orbital. Each spin's BdG entries are those of {@link PWaveWireModel}; the
+ * spin–orbit term has H_BdG entries (j+1 ↑p, j ↓p) = (j+1 ↓p, j ↑p) = iλ and, for holes, −(iλ)* =
+ * iλ at (j+1 ↑h, j ↓h), (j+1 ↓h, j ↑h) (derived: hole block −h*).
  *
- * <p><b>Symmetries</b> (local 4 × 4 matrices, spin ⊗ Nambu): time reversal T = (i s_y ⊗ 1) K,
- * i.e. T c_↑ T⁻¹ = c_↓, T c_↓ T⁻¹ = −c_↑, T² = −1; particle–hole C = (1 ⊗ τ_x) K, C² = +1; chiral S
- * = T C = i s_y ⊗ τ_x. T invariance of the pairing needs Δ_↓ = Δ_↑*, so real Δ pairs both spins
- * alike (derived); any hopping c†_{j+1} M c_j is T-invariant iff s_y M* s_y = M, which holds for iλ
- * s_x (derived). The spin–orbit term mixes the spins, so S_z is conserved only at λ = 0. (A
- * unitary s_x symmetry remains: each s_x sector is a class-D Kitaev chain with complex hopping −t ±
- * iλ, exchanged by T; the DIII invariant does not use it.)
+ * <p><b>Symmetries</b> (local 4 × 4 matrices, spin ⊗ Nambu): time reversal T = (i s_y ⊗ 1) K, i.e.
+ * T c_↑ T⁻¹ = c_↓, T c_↓ T⁻¹ = −c_↑, T² = −1; particle–hole C = (1 ⊗ τ_x) K, C² = +1; chiral S = T
+ * C = i s_y ⊗ τ_x. T invariance of the pairing needs Δ_↓ = Δ_↑*, so real Δ pairs both spins alike
+ * (derived); any hopping c†_{j+1} M c_j is T-invariant iff s_y M* s_y = M, which holds for iλ s_x
+ * (derived). The spin–orbit term mixes the spins, so S_z is conserved only at λ = 0. (A unitary s_x
+ * symmetry remains: each s_x sector is a class-D Kitaev chain with complex hopping −t ± iλ,
+ * exchanged by T; the DIII invariant does not use it.)
  *
- * <p><b>Phases</b> (derived from the Bloch form): E(k) = ±2λ sin k ± √(ξ_k² + 4Δ² sin²k), so for |λ|
- * &lt; |Δ| the E = 0 gap closes only at μ = ±2t and the wire is DIII-topological (a Kramers pair of
- * Majorana zero modes at each end) iff |μ| &lt; 2|t|, Δ ≠ 0, as for λ = 0 (Kitaev 2001); for |λ| &gt;
- * |Δ| and |μ| &lt; 2|t| the E = 0 gap is closed (the spin–orbit tilt moves bands through zero).
+ * <p><b>Phases</b> (derived from the Bloch form): E(k) = ±2λ sin k ± √(ξ_k² + 4Δ² sin²k), so for
+ * |λ| &lt; |Δ| the E = 0 gap closes only at μ = ±2t and the wire is DIII-topological (a Kramers
+ * pair of Majorana zero modes at each end) iff |μ| &lt; 2|t|, Δ ≠ 0, as for λ = 0 (Kitaev 2001);
+ * for |λ| &gt; |Δ| and |μ| &lt; 2|t| the E = 0 gap is closed (the spin–orbit tilt moves bands
+ * through zero).
  *
  * <p>Onsite potentials ({@code onsite-box}, {@code onsite-gauss}) are spin-independent
  * chemical-potential shifts μ_j → μ_j + V: they keep T and C (class DIII). {@code onsite-box} with
  * {@code orbitals = independent} would put a draw on single Nambu orbitals, breaking T and C; the
- * symmetry check rejects it. {@code zeeman-box} ({@link ZeemanCoupling}) breaks T and keeps C (class
- * D); {@code pairing-box} shifts Δ on both spins alike (keeps DIII).
+ * symmetry check rejects it. {@code zeeman-box} ({@link ZeemanCoupling}) breaks T and keeps C
+ * (class D); {@code pairing-box} shifts Δ on both spins alike (keeps DIII).
  */
 public final class DiiiWireModel implements Model, MajoranaForm, PairingChain, ZeemanCoupling {
 
   public static final String NAME = "diii-wire";
 
   /** T = (i s_y ⊗ 1) K in the orbital order (↑p, ↑h, ↓p, ↓h). */
-  private static final SymmetryOperator TIME_REVERSAL = SymmetryOperator.local(
-      Symmetry.TIME_REVERSAL,
-      new double[][] {{0, 0, 1, 0}, {0, 0, 0, 1}, {-1, 0, 0, 0}, {0, -1, 0, 0}},
-      new double[4][4]);
+  private static final SymmetryOperator TIME_REVERSAL =
+      SymmetryOperator.local(
+          Symmetry.TIME_REVERSAL,
+          new double[][] {{0, 0, 1, 0}, {0, 0, 0, 1}, {-1, 0, 0, 0}, {0, -1, 0, 0}},
+          new double[4][4]);
 
   /** C = (1 ⊗ τ_x) K. */
-  private static final SymmetryOperator PARTICLE_HOLE = SymmetryOperator.local(
-      Symmetry.PARTICLE_HOLE,
-      new double[][] {{0, 1, 0, 0}, {1, 0, 0, 0}, {0, 0, 0, 1}, {0, 0, 1, 0}},
-      new double[4][4]);
+  private static final SymmetryOperator PARTICLE_HOLE =
+      SymmetryOperator.local(
+          Symmetry.PARTICLE_HOLE,
+          new double[][] {{0, 1, 0, 0}, {1, 0, 0, 0}, {0, 0, 0, 1}, {0, 0, 1, 0}},
+          new double[4][4]);
 
   /** S = T C = i s_y ⊗ τ_x (unitary; S² = −1, S H S† = −H). */
-  private static final SymmetryOperator CHIRAL = SymmetryOperator.local(
-      Symmetry.CHIRAL,
-      new double[][] {{0, 0, 0, 1}, {0, 0, 1, 0}, {0, -1, 0, 0}, {-1, 0, 0, 0}},
-      new double[4][4]);
+  private static final SymmetryOperator CHIRAL =
+      SymmetryOperator.local(
+          Symmetry.CHIRAL,
+          new double[][] {{0, 0, 0, 1}, {0, 0, 1, 0}, {0, -1, 0, 0}, {-1, 0, 0, 0}},
+          new double[4][4]);
 
   @Override
   public String name() {
@@ -91,11 +95,19 @@ public final class DiiiWireModel implements Model, MajoranaForm, PairingChain, Z
   @Override
   public List<ParameterInfo> parameters() {
     return List.of(
-        new ParameterInfo("mu", null, "chemical potential mu (energy unit), enters as -mu (n_up + n_dn)"),
-        new ParameterInfo("t", 1.0, "nearest-neighbour hopping t (energy unit), enters as -t c+_j,s c_j+1,s"),
-        new ParameterInfo("delta", 1.0, "equal-spin p-wave pairing delta (energy unit), +delta c_j,s c_j+1,s for both spins"),
-        new ParameterInfo("lambda", 0.0, "spin-orbit hopping lambda (energy unit): c+_j+1 (i lambda s_x) c_j + h.c.;"
-            + " breaks S_z conservation, keeps T"));
+        new ParameterInfo(
+            "mu", null, "chemical potential mu (energy unit), enters as -mu (n_up + n_dn)"),
+        new ParameterInfo(
+            "t", 1.0, "nearest-neighbour hopping t (energy unit), enters as -t c+_j,s c_j+1,s"),
+        new ParameterInfo(
+            "delta",
+            1.0,
+            "equal-spin p-wave pairing delta (energy unit), +delta c_j,s c_j+1,s for both spins"),
+        new ParameterInfo(
+            "lambda",
+            0.0,
+            "spin-orbit hopping lambda (energy unit): c+_j+1 (i lambda s_x) c_j + h.c.;"
+                + " breaks S_z conservation, keeps T"));
   }
 
   @Override
@@ -141,7 +153,9 @@ public final class DiiiWireModel implements Model, MajoranaForm, PairingChain, Z
     return lattice.boundary() == Boundary.PERIODIC ? lattice.sites() : lattice.sites() - 1;
   }
 
-  /** Δ_j → Δ_j + δ on both spins (real δ keeps T: Δ_↓ = Δ_↑*). Entries as in {@link PWaveWireModel}. */
+  /**
+   * Δ_j → Δ_j + δ on both spins (real δ keeps T: Δ_↓ = Δ_↑*). Entries as in {@link PWaveWireModel}.
+   */
   @Override
   public void addPairingShift(Lattice lattice, int bond, double delta, HamiltonianBuilder out) {
     int j = bond;

@@ -7,16 +7,16 @@ import java.util.List;
 import java.util.Optional;
 
 /**
- * The square-lattice tight-binding model in a uniform magnetic field (Harper–Hofstadter), flux
- * α = p/q flux quanta per plaquette, Landau gauge A = (0, B x):
+ * The square-lattice tight-binding model in a uniform magnetic field (Harper–Hofstadter), flux α =
+ * p/q flux quanta per plaquette, Landau gauge A = (0, B x):
  *
  * <pre>  H = −t Σ_r [ c†_{r+x} c_r + e^{2πi α x} c†_{r+y} c_r + h.c. ],</pre>
  *
  * one orbital per site, r = (x, y) with 0 ≤ x, y &lt; L. Going counter-clockwise around any
- * plaquette collects the phase e^{2πi α}. On the torus e^{2πi α x} must be periodic in x, so L
- * must be a multiple of q ({@link #whyNotValid}). For coprime p, q the spectrum has q bands; the
- * Chern number of the r lowest bands (E_F in the r-th gap) solves the Diophantine equation r = q
- * s_r + p t_r, |t_r| ≤ q/2 (Thouless, Kohmoto, Nightingale, den Nijs, PRL 49, 405 (1982)) up to a
+ * plaquette collects the phase e^{2πi α}. On the torus e^{2πi α x} must be periodic in x, so L must
+ * be a multiple of q ({@link #whyNotValid}). For coprime p, q the spectrum has q bands; the Chern
+ * number of the r lowest bands (E_F in the r-th gap) solves the Diophantine equation r = q s_r + p
+ * t_r, |t_r| ≤ q/2 (Thouless, Kohmoto, Nightingale, den Nijs, PRL 49, 405 (1982)) up to a
  * convention-dependent sign; with this sign of the phase the Bott index (and hence C in the
  * convention of {@link QwzModel}) of the r lowest bands is −t_r, e.g. C = −1 for the lowest band at
  * flux 1/3 (fixed by a test; flipping the sign of p flips it).
@@ -51,7 +51,8 @@ public final class FluxSquareModel implements Model {
   @Override
   public List<ParameterInfo> parameters() {
     return List.of(
-        new ParameterInfo("p", null, "flux numerator p (integer): flux per plaquette p/q flux quanta"),
+        new ParameterInfo(
+            "p", null, "flux numerator p (integer): flux per plaquette p/q flux quanta"),
         new ParameterInfo("q", null, "flux denominator q (integer >= 1)"),
         new ParameterInfo("t", 1.0, "hopping t (energy unit)"));
   }
@@ -62,17 +63,25 @@ public final class FluxSquareModel implements Model {
   }
 
   @Override
-  public Optional<String> whyNotValid(ParameterValues parameters, int linearSize, Boundary boundary) {
+  public Optional<String> whyNotValid(
+      ParameterValues parameters, int linearSize, Boundary boundary) {
     double p = parameters.get("p");
     double q = parameters.get("q");
-    if (p != Math.rint(p) || q != Math.rint(q) || Math.abs(p) > Integer.MAX_VALUE || q > Integer.MAX_VALUE) {
+    if (p != Math.rint(p)
+        || q != Math.rint(q)
+        || Math.abs(p) > Integer.MAX_VALUE
+        || q > Integer.MAX_VALUE) {
       return Optional.of("flux-square needs integer p and q, got p = " + p + ", q = " + q);
     }
     if (q < 1) {
       return Optional.of("flux-square needs q >= 1, got q = " + q);
     }
     if (boundary == Boundary.PERIODIC && linearSize % (int) q != 0) {
-      return Optional.of("a periodic flux-square sample needs L to be a multiple of q = " + (int) q + ", got L = " + linearSize);
+      return Optional.of(
+          "a periodic flux-square sample needs L to be a multiple of q = "
+              + (int) q
+              + ", got L = "
+              + linearSize);
     }
     return Optional.empty();
   }
@@ -91,7 +100,8 @@ public final class FluxSquareModel implements Model {
         }
         if (y + 1 < size || (periodic && size > 1)) {
           double angle = 2.0 * Math.PI * alpha * x;
-          out.addHopping(x + size * ((y + 1) % size), s, -t * Math.cos(angle), -t * Math.sin(angle));
+          out.addHopping(
+              x + size * ((y + 1) % size), s, -t * Math.cos(angle), -t * Math.sin(angle));
         }
       }
     }

@@ -15,9 +15,10 @@ import java.util.List;
  * nearest-neighbour bonds d1, d2 that lead from j to i (Haldane's convention). Geometry as in
  * {@link HoneycombLattices}: with a1 = (1, 0), a2 = (1/2, √3/2), the A → A hops along a1, a2 − a1
  * and −a2 have ν = −1, the B → B hops along the same vectors ν = +1 (derived from the bond
- * geometry). Clean phase diagram: |C| = 1 iff |M| &lt; 3√3 |t2 sin φ|, else C = 0 (Haldane 1988); in
- * this convention C = −1 for t2 sin φ &gt; 0 and +1 for t2 sin φ &lt; 0 (fixed by a test). At φ = ±π/2 the spectrum is symmetric about E = 0, so
- * E_F = 0 lies in the gap; for other φ the gap centre moves by −3 t2 cos φ.
+ * geometry). Clean phase diagram: |C| = 1 iff |M| &lt; 3√3 |t2 sin φ|, else C = 0 (Haldane 1988);
+ * in this convention C = −1 for t2 sin φ &gt; 0 and +1 for t2 sin φ &lt; 0 (fixed by a test). At φ
+ * = ±π/2 the spectrum is symmetric about E = 0, so E_F = 0 lies in the gap; for other φ the gap
+ * centre moves by −3 t2 cos φ.
  */
 public final class HaldaneModel implements Model {
 
@@ -51,7 +52,8 @@ public final class HaldaneModel implements Model {
   public List<ParameterInfo> parameters() {
     return List.of(
         new ParameterInfo("t1", 1.0, "nearest-neighbour hopping t1 (energy unit)"),
-        new ParameterInfo("t2", null, "next-nearest-neighbour hopping amplitude t2 (units of t1's energy)"),
+        new ParameterInfo(
+            "t2", null, "next-nearest-neighbour hopping amplitude t2 (units of t1's energy)"),
         new ParameterInfo("phi", null, "phase phi of the next-nearest-neighbour hopping (radians)"),
         new ParameterInfo("M", 0.0, "sublattice mass: +M on A, -M on B (energy)"));
   }
@@ -102,7 +104,9 @@ public final class HaldaneModel implements Model {
     }
   }
 
-  /** Site index of sublattice A in cell (n1, n2), wrapped if periodic, or −1 outside an open sample. */
+  /**
+   * Site index of sublattice A in cell (n1, n2), wrapped if periodic, or −1 outside an open sample.
+   */
   private static int neighbour(int size, int n1, int n2, boolean periodic) {
     if (size == 1 && !periodic) {
       return -1;

@@ -17,9 +17,9 @@ import java.util.List;
  * matrix is the fermionic BdG matrix in the {@link MajoranaForm} convention; its spectrum is ±ε_k,
  * ε_k = 2√(J² + h² − 2Jh cos k) for the clean chain. A periodic lattice closes the <i>fermion</i>
  * chain with the bond J_{L−1} b_{L−1} a_0 (periodic fermions); for the spin ring the fermion
- * boundary condition depends on the parity sector, which the Majorana number (z2) sidesteps:
- * z2 = 1 (Q = −1) is the ordered phase, clean |h| &lt; |J|. Onsite potentials shift the field:
- * value V gives h_j → h_j + V. Real couplings: class BDI.
+ * boundary condition depends on the parity sector, which the Majorana number (z2) sidesteps: z2 = 1
+ * (Q = −1) is the ordered phase, clean |h| &lt; |J|. Onsite potentials shift the field: value V
+ * gives h_j → h_j + V. Real couplings: class BDI.
  */
 public final class IsingChainModel implements Model, MajoranaForm, TransverseFieldChain {
 

@@ -8,9 +8,9 @@ import java.util.List;
 
 /**
  * A zero-dimensional cluster of L fermion modes = 2L Majoranas (class D), H = (i/4) Σ A_{mn} γ_m
- * γ_n in the {@link MajoranaForm} convention. The clean part is a uniform chemical potential,
- * H_0 = −μ Σ_s c†_s c_s (A_{a_s b_s} = −μ); the random real antisymmetric part comes from the
- * {@code majorana-gauss} disorder (A_{mn} += W g_{mn}, g standard normal, all m &lt; n), the class-D
+ * γ_n in the {@link MajoranaForm} convention. The clean part is a uniform chemical potential, H_0 =
+ * −μ Σ_s c†_s c_s (A_{a_s b_s} = −μ); the random real antisymmetric part comes from the {@code
+ * majorana-gauss} disorder (A_{mn} += W g_{mn}, g standard normal, all m &lt; n), the class-D
  * random-matrix ensemble (Altland &amp; Zirnbauer, PRB 55, 1142 (1997)). Observable: {@code parity}
  * = ground-state fermion parity from sign Pf(A). The spec's L is the number of fermion modes; the
  * boundary is ignored (nothing to close).
@@ -43,7 +43,9 @@ public final class MajoranaClusterModel implements Model, MajoranaForm {
 
   @Override
   public List<ParameterInfo> parameters() {
-    return List.of(new ParameterInfo("mu", 0.0, "uniform chemical potential mu (energy unit), enters as -mu c+c"));
+    return List.of(
+        new ParameterInfo(
+            "mu", 0.0, "uniform chemical potential mu (energy unit), enters as -mu c+c"));
   }
 
   @Override

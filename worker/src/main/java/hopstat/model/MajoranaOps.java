@@ -16,16 +16,16 @@ import org.ejml.data.DMatrixRMaj;
  *
  * <pre>  A = −2i W† H_BdG W,    H_BdG = 2i W A W†     (derived)</pre>
  *
- * Check (derived): one site with −μ c†c has H_BdG = diag(−μ, μ) and A_{ab} = −μ, i.e. H = −(iμ/2)
- * a b; with the parity operator 1 − 2c†c = −i a b the ground state for μ &gt; 0 is occupied (odd)
- * and Pf(A) = −μ &lt; 0: sign Pf(A) = +1 means even parity, as in Kitaev (2001), Eq. (13)–(14)
- * (cited, equation numbers from memory).
+ * Check (derived): one site with −μ c†c has H_BdG = diag(−μ, μ) and A_{ab} = −μ, i.e. H = −(iμ/2) a
+ * b; with the parity operator 1 − 2c†c = −i a b the ground state for μ &gt; 0 is occupied (odd) and
+ * Pf(A) = −μ &lt; 0: sign Pf(A) = +1 means even parity, as in Kitaev (2001), Eq. (13)–(14) (cited,
+ * equation numbers from memory).
  */
 public final class MajoranaOps {
 
   /**
-   * Relative size of the imaginary or symmetric part of A (off the diagonal) above which the
-   * terms are rejected as not particle–hole symmetric.
+   * Relative size of the imaginary or symmetric part of A (off the diagonal) above which the terms
+   * are rejected as not particle–hole symmetric.
    */
   public static final double BDG_FORM_TOLERANCE = 1e-10;
 
@@ -56,7 +56,10 @@ public final class MajoranaOps {
     }
     int sm = m / 2;
     int sn = n / 2;
-    int[] nambu = sm == sn ? new int[] {2 * sm, 2 * sm + 1} : new int[] {2 * sm, 2 * sm + 1, 2 * sn, 2 * sn + 1};
+    int[] nambu =
+        sm == sn
+            ? new int[] {2 * sm, 2 * sm + 1}
+            : new int[] {2 * sm, 2 * sm + 1, 2 * sn, 2 * sn + 1};
     for (int i = 0; i < nambu.length; i++) {
       for (int j = i; j < nambu.length; j++) {
         int p = nambu[i];
@@ -94,17 +97,24 @@ public final class MajoranaOps {
    * @param scratch overwritten: imaginary parts, checked to vanish
    * @throws IllegalStateException if A is not real antisymmetric to {@link #BDG_FORM_TOLERANCE}
    */
-  public static void toMajoranaMatrix(Lattice lattice, HamiltonianBuilder terms, int closurePhase, DMatrixRMaj out, DMatrixRMaj scratch) {
+  public static void toMajoranaMatrix(
+      Lattice lattice,
+      HamiltonianBuilder terms,
+      int closurePhase,
+      DMatrixRMaj out,
+      DMatrixRMaj scratch) {
     if (closurePhase != 1 && closurePhase != -1) {
       throw new IllegalArgumentException("closure phase must be +1 or -1: " + closurePhase);
     }
     int o = lattice.orbitalsPerSite();
     if (o % 2 != 0 || terms.dimension() != lattice.orbitals()) {
-      throw new IllegalArgumentException("Majorana form needs Nambu pairs (an even number of orbitals per site) and a matching builder");
+      throw new IllegalArgumentException(
+          "Majorana form needs Nambu pairs (an even number of orbitals per site) and a matching builder");
     }
     boolean ring = lattice.dimension() == 1 && lattice.boundary() == Boundary.PERIODIC;
     if (ring && closurePhase == -1 && lattice.linearSize() < 3) {
-      throw new IllegalArgumentException("antiperiodic closure needs L >= 3 to tell the closing bond apart");
+      throw new IllegalArgumentException(
+          "antiperiodic closure needs L >= 3 to tell the closing bond apart");
     }
     int n = terms.dimension();
     out.reshape(n, n);
@@ -133,10 +143,18 @@ public final class MajoranaOps {
       out.data[i * n + i] = 0.0; // constants (γ² = 1), no dynamics
       for (int j = i + 1; j < n; j++) {
         double sym = out.data[i * n + j] + out.data[j * n + i];
-        double imag = Math.max(Math.abs(scratch.data[i * n + j]), Math.abs(scratch.data[j * n + i]));
+        double imag =
+            Math.max(Math.abs(scratch.data[i * n + j]), Math.abs(scratch.data[j * n + i]));
         if (Math.abs(sym) > BDG_FORM_TOLERANCE * max || imag > BDG_FORM_TOLERANCE * max) {
-          throw new IllegalStateException("the Hamiltonian is not of particle-hole symmetric BdG form at Majoranas ("
-              + i + ", " + j + "): symmetric part " + sym + ", imaginary part " + imag);
+          throw new IllegalStateException(
+              "the Hamiltonian is not of particle-hole symmetric BdG form at Majoranas ("
+                  + i
+                  + ", "
+                  + j
+                  + "): symmetric part "
+                  + sym
+                  + ", imaginary part "
+                  + imag);
         }
         double anti = 0.5 * (out.data[i * n + j] - out.data[j * n + i]);
         out.data[i * n + j] = anti;
@@ -146,7 +164,8 @@ public final class MajoranaOps {
   }
 
   /** Adds −2i conj(W_pm) z W_qn to entry (m, n) for the two Majoranas of each site. */
-  private static void accumulate(int p, int q, double zr, double zi, DMatrixRMaj re, DMatrixRMaj im) {
+  private static void accumulate(
+      int p, int q, double zr, double zi, DMatrixRMaj re, DMatrixRMaj im) {
     int n = re.numCols;
     int sp = p / 2;
     int sq = q / 2;

@@ -41,8 +41,8 @@ public interface Model {
 
   /**
    * Adds an onsite potential V on site {@code site}. Default: V on every orbital of the site (a
-   * scalar potential). BdG models override this so that V enters as a chemical-potential shift
-   * (+V on particles, −V on holes).
+   * scalar potential). BdG models override this so that V enters as a chemical-potential shift (+V
+   * on particles, −V on holes).
    */
   default void addOnsitePotential(Lattice lattice, int site, double value, HamiltonianBuilder out) {
     int base = site * lattice.orbitalsPerSite();
@@ -52,7 +52,8 @@ public interface Model {
   }
 
   /** Adds V on one orbital of one site (for independent-per-orbital disorder). */
-  default void addOrbitalPotential(Lattice lattice, int site, int orbital, double value, HamiltonianBuilder out) {
+  default void addOrbitalPotential(
+      Lattice lattice, int site, int orbital, double value, HamiltonianBuilder out) {
     out.addOnsite(site * lattice.orbitalsPerSite() + orbital, value);
   }
 
@@ -81,7 +82,8 @@ public interface Model {
    * @param linearSize L
    * @param boundary boundary condition
    */
-  default Optional<String> whyNotValid(ParameterValues parameters, int linearSize, Boundary boundary) {
+  default Optional<String> whyNotValid(
+      ParameterValues parameters, int linearSize, Boundary boundary) {
     return Optional.empty();
   }
 }

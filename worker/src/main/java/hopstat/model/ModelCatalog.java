@@ -56,7 +56,8 @@ public final class ModelCatalog {
       return new CustomModel(definition);
     }
     if (definition != null) {
-      throw new IllegalStateException("a lattice definition is only read by model custom, not " + name);
+      throw new IllegalStateException(
+          "a lattice definition is only read by model custom, not " + name);
     }
     return find(name).orElseThrow(() -> new IllegalStateException("unknown model " + name));
   }

@@ -52,8 +52,12 @@ public final class PWaveWireModel implements Model, MajoranaForm, PairingChain {
   public List<ParameterInfo> parameters() {
     return List.of(
         new ParameterInfo("mu", null, "chemical potential mu (energy unit), enters as -mu c+c"),
-        new ParameterInfo("t", 1.0, "nearest-neighbour hopping t (energy unit), enters as -t c+_j c_j+1"),
-        new ParameterInfo("delta", 1.0, "p-wave pairing delta (energy unit), enters as +delta c_j c_j+1; default 1 = default t"));
+        new ParameterInfo(
+            "t", 1.0, "nearest-neighbour hopping t (energy unit), enters as -t c+_j c_j+1"),
+        new ParameterInfo(
+            "delta",
+            1.0,
+            "p-wave pairing delta (energy unit), enters as +delta c_j c_j+1; default 1 = default t"));
   }
 
   @Override

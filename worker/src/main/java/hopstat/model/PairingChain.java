@@ -5,8 +5,8 @@ import hopstat.lattice.Lattice;
 
 /**
  * Capability of a one-dimensional BdG chain with a nearest-neighbour p-wave pairing Δ_j on bond j
- * (between sites j and j+1, the closing bond j = L−1 → 0 on a periodic chain). Used by the
- * {@code pairing-box} disorder.
+ * (between sites j and j+1, the closing bond j = L−1 → 0 on a periodic chain). Used by the {@code
+ * pairing-box} disorder.
  */
 public interface PairingChain {
 

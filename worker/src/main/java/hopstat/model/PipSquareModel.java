@@ -19,15 +19,16 @@ import java.util.List;
  * up to positive rescaling of the x, y components, with R_z = diag(1, 1, −1) and QWZ mass m =
  * μ/(2t); the mirror R_z reverses the orientation, so C = −C_QWZ(μ/2t): for t, Δ &gt; 0, C = +1 for
  * 0 &lt; μ &lt; 4t, C = −1 for −4t &lt; μ &lt; 0, C = 0 for |μ| &gt; 4t (sign convention of {@link
- * QwzModel}, checked by a test). An onsite potential V enters as a chemical-potential shift, +V
- * on particles and −V on holes.
+ * QwzModel}, checked by a test). An onsite potential V enters as a chemical-potential shift, +V on
+ * particles and −V on holes.
  */
 public final class PipSquareModel implements Model {
 
   public static final String NAME = "pip-square";
 
-  private static final SymmetryOperator PARTICLE_HOLE = SymmetryOperator.local(
-      Symmetry.PARTICLE_HOLE, new double[][] {{0, 1}, {1, 0}}, new double[][] {{0, 0}, {0, 0}});
+  private static final SymmetryOperator PARTICLE_HOLE =
+      SymmetryOperator.local(
+          Symmetry.PARTICLE_HOLE, new double[][] {{0, 1}, {1, 0}}, new double[][] {{0, 0}, {0, 0}});
 
   @Override
   public String name() {
@@ -93,10 +94,11 @@ public final class PipSquareModel implements Model {
   }
 
   /**
-   * Adds c†_to T c_from + h.c. with T = −t τz + (iΔ/2) τ, τ = τx or τy. iτx = [[0, i], [i, 0]],
-   * iτy = [[0, 1], [−1, 0]].
+   * Adds c†_to T c_from + h.c. with T = −t τz + (iΔ/2) τ, τ = τx or τy. iτx = [[0, i], [i, 0]], iτy
+   * = [[0, 1], [−1, 0]].
    */
-  private static void addBond(HamiltonianBuilder out, int from, int to, double t, double delta, boolean alongX) {
+  private static void addBond(
+      HamiltonianBuilder out, int from, int to, double t, double delta, boolean alongX) {
     double h = 0.5 * delta;
     out.addHopping(2 * to, 2 * from, -t, 0.0);
     out.addHopping(2 * to + 1, 2 * from + 1, t, 0.0);

@@ -10,10 +10,10 @@ import java.util.List;
  * (2006)), Bloch form H(k) = t [sin kx σx + sin ky σy + (m + cos kx + cos ky) σz].
  *
  * <p>Real space, with c_r = N^{−1/2} Σ_k e^{ik·r} c_k: H = Σ_r [ t·m c†_r σz c_r + (c†_{r+x} T_x
- * c_r + c†_{r+y} T_y c_r + h.c.) ] with T_x = t(σz + iσx)/2, T_y = t(σz + iσy)/2 (derived: T e^{−ik}
- * + T† e^{ik} = t(cos k σz + sin k σ)). Orbital 0 is the σz = +1 component. Clean Chern number of
- * the lower band: +1 for −2 &lt; m &lt; 0, −1 for 0 &lt; m &lt; 2, 0 for |m| &gt; 2 (sign: see
- * REFERENCE conventions, checked in tests).
+ * c_r + c†_{r+y} T_y c_r + h.c.) ] with T_x = t(σz + iσx)/2, T_y = t(σz + iσy)/2 (derived: T
+ * e^{−ik} + T† e^{ik} = t(cos k σz + sin k σ)). Orbital 0 is the σz = +1 component. Clean Chern
+ * number of the lower band: +1 for −2 &lt; m &lt; 0, −1 for 0 &lt; m &lt; 2, 0 for |m| &gt; 2
+ * (sign: see REFERENCE conventions, checked in tests).
  */
 public final class QwzModel implements Model {
 
@@ -80,10 +80,11 @@ public final class QwzModel implements Model {
   }
 
   /**
-   * Adds c†_to T c_from + h.c. with T = t(σz + i σ)/2 and σ = σx (sx = 1, sy = 0) or σy.
-   * σx = [[0,1],[1,0]], σy = [[0,−i],[i,0]], so iσx = [[0,i],[i,0]], iσy = [[0,1],[−1,0]].
+   * Adds c†_to T c_from + h.c. with T = t(σz + i σ)/2 and σ = σx (sx = 1, sy = 0) or σy. σx =
+   * [[0,1],[1,0]], σy = [[0,−i],[i,0]], so iσx = [[0,i],[i,0]], iσy = [[0,1],[−1,0]].
    */
-  private static void addBond(HamiltonianBuilder out, int from, int to, double t, double sy, double sx) {
+  private static void addBond(
+      HamiltonianBuilder out, int from, int to, double t, double sy, double sx) {
     double h = 0.5 * t;
     int a0 = 2 * to;
     int a1 = 2 * to + 1;

@@ -3,9 +3,9 @@ package hopstat.model;
 import java.util.Arrays;
 
 /**
- * A local, diagonal spin operator S_z (in units of ħ/2): orbital o of every site has S_z =
- * {@code orbitalSpins[o]} = +1 (up) or −1 (down). Models with a spin degree of freedom declare it
- * through {@link Model#spinZ()}; spin-resolved invariants use it, and check themselves whether the
+ * A local, diagonal spin operator S_z (in units of ħ/2): orbital o of every site has S_z = {@code
+ * orbitalSpins[o]} = +1 (up) or −1 (down). Models with a spin degree of freedom declare it through
+ * {@link Model#spinZ()}; spin-resolved invariants use it, and check themselves whether the
  * Hamiltonian of a realisation conserves it.
  *
  * @param orbitalSpins +1 or −1 per orbital of a site; copied in and out

@@ -14,9 +14,9 @@ import java.util.List;
  * v intracell, w intercell; orbital 0 = A, orbital 1 = B (see {@link ChiralChain}). Sublattice
  * symmetry S = diag(+1 on A, −1 on B); with real hoppings also T = K, hence class BDI. Complex
  * hoppings (class AIII) come from the {@code bond-phase} disorder: the declared class of a model is
- * fixed, and uniform clean phases on the open chain would be a pure gauge. Clean winding ν = 1 iff |v| &lt; |w|, else 0, with
- * the sign convention of the {@code winding} observable. An onsite potential is a scalar (same
- * value on A and B) and breaks the chiral symmetry.
+ * fixed, and uniform clean phases on the open chain would be a pure gauge. Clean winding ν = 1 iff
+ * |v| &lt; |w|, else 0, with the sign convention of the {@code winding} observable. An onsite
+ * potential is a scalar (same value on A and B) and breaks the chiral symmetry.
  */
 public final class SshModel implements Model, ChiralChain {
 
@@ -50,10 +50,11 @@ public final class SshModel implements Model, ChiralChain {
   }
 
   private static final double[][] ZERO = {{0, 0}, {0, 0}};
-  private static final List<SymmetryOperator> OPERATORS = List.of(
-      SymmetryOperator.local(Symmetry.TIME_REVERSAL, new double[][] {{1, 0}, {0, 1}}, ZERO),
-      SymmetryOperator.local(Symmetry.PARTICLE_HOLE, new double[][] {{1, 0}, {0, -1}}, ZERO),
-      SymmetryOperator.local(Symmetry.CHIRAL, new double[][] {{1, 0}, {0, -1}}, ZERO));
+  private static final List<SymmetryOperator> OPERATORS =
+      List.of(
+          SymmetryOperator.local(Symmetry.TIME_REVERSAL, new double[][] {{1, 0}, {0, 1}}, ZERO),
+          SymmetryOperator.local(Symmetry.PARTICLE_HOLE, new double[][] {{1, 0}, {0, -1}}, ZERO),
+          SymmetryOperator.local(Symmetry.CHIRAL, new double[][] {{1, 0}, {0, -1}}, ZERO));
 
   @Override
   public int dimension() {

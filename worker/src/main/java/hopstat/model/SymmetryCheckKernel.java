@@ -31,17 +31,38 @@ public final class SymmetryCheckKernel {
    * @param tolerance threshold on the relative violation
    * @param workspace scratch
    */
-  public static SymmetryCheckResult check(ZMatrixRMaj hamiltonian, Lattice lattice, SymmetryOperator operator, double tolerance, SymmetryCheckWorkspace workspace) {
+  public static SymmetryCheckResult check(
+      ZMatrixRMaj hamiltonian,
+      Lattice lattice,
+      SymmetryOperator operator,
+      double tolerance,
+      SymmetryCheckWorkspace workspace) {
     int o = lattice.orbitalsPerSite();
     int n = lattice.orbitals();
     if (hamiltonian.numRows != n || hamiltonian.numCols != n) {
-      throw new IllegalArgumentException("H is " + hamiltonian.numRows + "x" + hamiltonian.numCols + ", lattice has " + n + " orbitals");
+      throw new IllegalArgumentException(
+          "H is "
+              + hamiltonian.numRows
+              + "x"
+              + hamiltonian.numCols
+              + ", lattice has "
+              + n
+              + " orbitals");
     }
     if (operator.orbitalsPerSite() != o) {
-      throw new IllegalArgumentException("operator acts on " + operator.orbitalsPerSite() + " orbitals per site, lattice has " + o);
+      throw new IllegalArgumentException(
+          "operator acts on "
+              + operator.orbitalsPerSite()
+              + " orbitals per site, lattice has "
+              + o);
     }
     if (operator.siteSignCount() != 0 && operator.siteSignCount() != lattice.sites()) {
-      throw new IllegalArgumentException("operator has " + operator.siteSignCount() + " site signs, lattice has " + lattice.sites() + " sites");
+      throw new IllegalArgumentException(
+          "operator has "
+              + operator.siteSignCount()
+              + " site signs, lattice has "
+              + lattice.sites()
+              + " sites");
     }
     workspace.ensure(o);
     double conj = operator.isAntiunitary() ? -1.0 : 1.0;

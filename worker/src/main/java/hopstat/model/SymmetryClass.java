@@ -27,7 +27,8 @@ public enum SymmetryClass {
   private final boolean chiral;
   private final String[] invariantGroups;
 
-  SymmetryClass(int timeReversalSquare, int particleHoleSquare, boolean chiral, String... invariantGroups) {
+  SymmetryClass(
+      int timeReversalSquare, int particleHoleSquare, boolean chiral, String... invariantGroups) {
     this.timeReversalSquare = timeReversalSquare;
     this.particleHoleSquare = particleHoleSquare;
     this.chiral = chiral;
@@ -55,8 +56,8 @@ public enum SymmetryClass {
   }
 
   /**
-   * The group of strong invariants of gapped free-fermion phases in dimension d: "0", "Z", "2Z"
-   * or "Z2".
+   * The group of strong invariants of gapped free-fermion phases in dimension d: "0", "Z", "2Z" or
+   * "Z2".
    *
    * @param dimension 0..3
    */
@@ -71,7 +72,8 @@ public enum SymmetryClass {
    * The class that remains when only the symmetries in {@code kept} survive. Keeping T and C
    * implies S = TC; a chiral class that loses T and C but keeps S becomes AIII.
    */
-  public SymmetryClass restrictTo(boolean keepTimeReversal, boolean keepParticleHole, boolean keepChiral) {
+  public SymmetryClass restrictTo(
+      boolean keepTimeReversal, boolean keepParticleHole, boolean keepChiral) {
     int t = keepTimeReversal ? timeReversalSquare : 0;
     int c = keepParticleHole ? particleHoleSquare : 0;
     boolean s = (t != 0 && c != 0) || (chiral && keepChiral && t == 0 && c == 0);
@@ -81,11 +83,19 @@ public enum SymmetryClass {
   /** The class with these symmetry data. */
   public static SymmetryClass of(int timeReversalSquare, int particleHoleSquare, boolean chiral) {
     for (SymmetryClass k : values()) {
-      if (k.timeReversalSquare == timeReversalSquare && k.particleHoleSquare == particleHoleSquare && k.chiral == chiral) {
+      if (k.timeReversalSquare == timeReversalSquare
+          && k.particleHoleSquare == particleHoleSquare
+          && k.chiral == chiral) {
         return k;
       }
     }
-    throw new IllegalArgumentException("no AZ class with T^2=" + timeReversalSquare + ", C^2=" + particleHoleSquare + ", S=" + chiral);
+    throw new IllegalArgumentException(
+        "no AZ class with T^2="
+            + timeReversalSquare
+            + ", C^2="
+            + particleHoleSquare
+            + ", S="
+            + chiral);
   }
 
   /** Parses a class label such as {@code "BDI"} (case-insensitive). */

@@ -20,7 +20,12 @@ import java.util.Objects;
  * @param matrixIm imaginary part of u, length o², row-major; copied in and out
  * @param siteSigns ±1 per site, or an empty array for all +1; copied in and out
  */
-public record SymmetryOperator(Symmetry symmetry, int orbitalsPerSite, double[] matrixRe, double[] matrixIm, double[] siteSigns) {
+public record SymmetryOperator(
+    Symmetry symmetry,
+    int orbitalsPerSite,
+    double[] matrixRe,
+    double[] matrixIm,
+    double[] siteSigns) {
 
   /** Tolerance on ‖u u† − 1‖_max for accepting a declared local matrix as unitary. */
   public static final double UNITARITY_TOLERANCE = 1e-12;
@@ -55,7 +60,8 @@ public record SymmetryOperator(Symmetry symmetry, int orbitalsPerSite, double[] 
           re += ar * br - ai * bi;
           im += ar * bi + ai * br;
         }
-        if (Math.abs(re - (i == j ? 1.0 : 0.0)) > UNITARITY_TOLERANCE || Math.abs(im) > UNITARITY_TOLERANCE) {
+        if (Math.abs(re - (i == j ? 1.0 : 0.0)) > UNITARITY_TOLERANCE
+            || Math.abs(im) > UNITARITY_TOLERANCE) {
           throw new IllegalArgumentException("the local matrix of " + symmetry + " is not unitary");
         }
       }
@@ -141,11 +147,22 @@ public record SymmetryOperator(Symmetry symmetry, int orbitalsPerSite, double[] 
 
   @Override
   public int hashCode() {
-    return Objects.hash(symmetry, orbitalsPerSite, Arrays.hashCode(matrixRe), Arrays.hashCode(matrixIm), Arrays.hashCode(siteSigns));
+    return Objects.hash(
+        symmetry,
+        orbitalsPerSite,
+        Arrays.hashCode(matrixRe),
+        Arrays.hashCode(matrixIm),
+        Arrays.hashCode(siteSigns));
   }
 
   @Override
   public String toString() {
-    return "SymmetryOperator[" + symmetry + ", " + orbitalsPerSite + " orbitals/site" + (siteSigns.length == 0 ? "" : ", staggered") + "]";
+    return "SymmetryOperator["
+        + symmetry
+        + ", "
+        + orbitalsPerSite
+        + " orbitals/site"
+        + (siteSigns.length == 0 ? "" : ", staggered")
+        + "]";
   }
 }

@@ -4,9 +4,9 @@ import hopstat.lattice.HamiltonianBuilder;
 import hopstat.lattice.Lattice;
 
 /**
- * Capability of a transverse-field Ising chain: fields h_j on sites and couplings J_j on bonds
- * (j, j+1), the closing bond j = L−1 → 0 on a periodic chain. Used by the {@code field-box} and
- * {@code coupling-box} disorders.
+ * Capability of a transverse-field Ising chain: fields h_j on sites and couplings J_j on bonds (j,
+ * j+1), the closing bond j = L−1 → 0 on a periodic chain. Used by the {@code field-box} and {@code
+ * coupling-box} disorders.
  */
 public interface TransverseFieldChain {
 

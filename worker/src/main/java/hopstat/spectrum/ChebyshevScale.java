@@ -11,7 +11,8 @@ public record ChebyshevScale(double centre, double halfWidth) {
 
   public ChebyshevScale {
     if (!(halfWidth > 0) || !Double.isFinite(halfWidth) || !Double.isFinite(centre)) {
-      throw new IllegalArgumentException("need a finite centre and a positive finite half-width: " + centre + ", " + halfWidth);
+      throw new IllegalArgumentException(
+          "need a finite centre and a positive finite half-width: " + centre + ", " + halfWidth);
     }
   }
 

@@ -44,7 +44,8 @@ public final class CsrHermitianMatrix {
       rowStart = new int[n + 1];
       fill = new int[n];
     }
-    // Count: one diagonal slot per row, plus each term in its row and (off-diagonal) its mirror row.
+    // Count: one diagonal slot per row, plus each term in its row and (off-diagonal) its mirror
+    // row.
     Arrays.fill(fill, 0, n, 1);
     for (int k = 0; k < count; k++) {
       int r = terms.row(k);
@@ -144,7 +145,10 @@ public final class CsrHermitianMatrix {
     return 4L * (rowStart.length + fill.length + columns.length) + 8L * (re.length + im.length);
   }
 
-  /** Index of the first stored entry of row i (0-based); row i holds entries rowStart(i) .. rowStart(i + 1) − 1. */
+  /**
+   * Index of the first stored entry of row i (0-based); row i holds entries rowStart(i) ..
+   * rowStart(i + 1) − 1.
+   */
   public int rowStart(int i) {
     return rowStart[i];
   }
@@ -165,9 +169,9 @@ public final class CsrHermitianMatrix {
   }
 
   /**
-   * Lower and upper Gershgorin bounds of the spectrum: every eigenvalue lies in [min_i (H_ii − R_i),
-   * max_i (H_ii + R_i)], R_i = Σ_{j≠i} |H_ij| (Gershgorin circle theorem; for a Hermitian matrix the
-   * discs meet the real axis in these intervals).
+   * Lower and upper Gershgorin bounds of the spectrum: every eigenvalue lies in [min_i (H_ii −
+   * R_i), max_i (H_ii + R_i)], R_i = Σ_{j≠i} |H_ij| (Gershgorin circle theorem; for a Hermitian
+   * matrix the discs meet the real axis in these intervals).
    *
    * @param out overwritten: out[0] lower, out[1] upper bound
    */
@@ -202,14 +206,16 @@ public final class CsrHermitianMatrix {
   }
 
   /**
-   * y = α·H x + β·x + γ·z: one Chebyshev step T_{n+1} = 2H̃T_n − T_{n−1} with H̃ = (H − b)/a is
-   * α = 2/a, β = −2b/a, γ = −1, z = T_{n−1}.
+   * y = α·H x + β·x + γ·z: one Chebyshev step T_{n+1} = 2H̃T_n − T_{n−1} with H̃ = (H − b)/a is α =
+   * 2/a, β = −2b/a, γ = −1, z = T_{n−1}.
    *
    * @param x read, not modified
-   * @param z read, not modified (may be {@code null} when γ = 0); may be {@code y} (read before written, entry by entry)
+   * @param z read, not modified (may be {@code null} when γ = 0); may be {@code y} (read before
+   *     written, entry by entry)
    * @param y overwritten; must not be {@code x}
    */
-  public void multiplyAffine(double alpha, double beta, double[] x, double gamma, double[] z, double[] y) {
+  public void multiplyAffine(
+      double alpha, double beta, double[] x, double gamma, double[] z, double[] y) {
     int n = dimension;
     if (x.length < 2 * n || y.length < 2 * n || (z != null && z.length < 2 * n)) {
       throw new IllegalArgumentException("vectors must have length >= " + 2 * n);
@@ -256,7 +262,8 @@ public final class CsrHermitianMatrix {
    * @param y read and overwritten; must not be {@code x} or {@code acc}
    * @param acc accumulated into; must not be {@code x} or {@code y}
    */
-  public void chebyshevStep(double alpha, double beta, double[] x, double[] y, double coefficient, double[] acc) {
+  public void chebyshevStep(
+      double alpha, double beta, double[] x, double[] y, double coefficient, double[] acc) {
     int n = dimension;
     if (x.length < 2 * n || y.length < 2 * n || acc.length < 2 * n) {
       throw new IllegalArgumentException("vectors must have length >= " + 2 * n);

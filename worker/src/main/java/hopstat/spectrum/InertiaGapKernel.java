@@ -5,8 +5,8 @@ import hopstat.lattice.Lattice;
 import hopstat.linalg.InertiaResult;
 
 /**
- * The spectral gap around E_F without diagonalisation: eigenvalue counting by inertia
- * (Sylvester's law: neg(H − E) = #eigenvalues below E) and bisection on the counts.
+ * The spectral gap around E_F without diagonalisation: eigenvalue counting by inertia (Sylvester's
+ * law: neg(H − E) = #eigenvalues below E) and bisection on the counts.
  *
  * <p>With n_F = #eigenvalues below E_F, the highest eigenvalue below E_F is bracketed in [−R, E_F)
  * and the lowest at or above E_F in [E_F, R] (R the Gershgorin bound), each by bisection to an
@@ -25,12 +25,17 @@ public final class InertiaGapKernel {
    * @param workspace scratch
    * @return the gap, its edges, n_F; gap NaN when E_F lies outside the spectrum
    */
-  public static InertiaGapResult compute(HamiltonianBuilder terms, Lattice lattice, double fermiEnergy, double tolerance,
+  public static InertiaGapResult compute(
+      HamiltonianBuilder terms,
+      Lattice lattice,
+      double fermiEnergy,
+      double tolerance,
       SliceInertiaWorkspace workspace) {
     if (!(tolerance > 0)) {
       throw new IllegalArgumentException("tolerance must be positive: " + tolerance);
     }
-    double radius = SliceInertiaKernel.gershgorinRadius(terms, new double[2 * terms.dimension()]) + 1.0;
+    double radius =
+        SliceInertiaKernel.gershgorinRadius(terms, new double[2 * terms.dimension()]) + 1.0;
     int n = terms.dimension();
     int nF = below(terms, lattice, fermiEnergy, workspace);
     if (nF == 0 || nF == n) {
@@ -63,8 +68,12 @@ public final class InertiaGapKernel {
     return new InertiaGapResult(upper - lower, lower, upper, nF);
   }
 
-  /** Number of eigenvalues strictly below E (an exactly singular H − E counts its zero as not below). */
-  public static int below(HamiltonianBuilder terms, Lattice lattice, double energy, SliceInertiaWorkspace workspace) {
+  /**
+   * Number of eigenvalues strictly below E (an exactly singular H − E counts its zero as not
+   * below).
+   */
+  public static int below(
+      HamiltonianBuilder terms, Lattice lattice, double energy, SliceInertiaWorkspace workspace) {
     InertiaResult in = SliceInertiaKernel.hamiltonianInertia(terms, lattice, energy, workspace);
     return in.negative();
   }

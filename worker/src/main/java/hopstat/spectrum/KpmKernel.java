@@ -3,26 +3,26 @@ package hopstat.spectrum;
 import java.util.random.RandomGenerator;
 
 /**
- * Kernel polynomial method (Weiße, Wellein, Alvermann, Fehske, "The kernel polynomial method",
- * RMP 78, 275 (2006); equation numbers below refer to that paper) on a sparse Hermitian matrix.
+ * Kernel polynomial method (Weiße, Wellein, Alvermann, Fehske, "The kernel polynomial method", RMP
+ * 78, 275 (2006); equation numbers below refer to that paper) on a sparse Hermitian matrix.
  *
  * <p><b>Rescaling.</b> {@link #scale} maps the Gershgorin interval [E_lo, E_hi] of H onto [−1 + ε,
  * 1 − ε] with ε = {@link #EPSILON}: b = (E_lo + E_hi)/2, a = (E_hi − E_lo)/(2(1 − ε)), H̃ = (H −
  * b)/a (Sec. II.B). Gershgorin is a true bound, so the spectrum of H̃ lies inside [−1 + ε, 1 − ε]
- * and the Chebyshev recursion stays bounded; the margin ε keeps the Jackson-broadened features
- * of the band edges away from the ±1 singularities of the weight 1/√(1 − x²). A loose bound costs
+ * and the Chebyshev recursion stays bounded; the margin ε keeps the Jackson-broadened features of
+ * the band edges away from the ±1 singularities of the weight 1/√(1 − x²). A loose bound costs
  * resolution only (the energy resolution scales with a).
  *
  * <p><b>Moments.</b> μ_n = (1/N) Tr T_n(H̃) (eq. 27) is estimated stochastically (Sec. II.D, eq.
  * 48): Tr A ≈ (1/R) Σ_r ⟨r|A|r⟩ over R random-phase vectors r_i = e^{iφ_i}, φ_i = 2π u_i, u_i
  * uniform in [0, 1) from the caller's generator (drawn vector after vector, entry i = 0..N−1). Each
- * vector gives μ_0 = 1 exactly (|r_i| = 1); the variance of ⟨r|A|r⟩ is Σ_{i≠j} |A_ij|² ≤ N (for
- * ‖A‖ ≤ 1), so the error of μ_n is at most 1/√(N R) (derived). Products use the doubling
- * relations μ_{2n} = 2⟨α_n|α_n⟩ − μ_0, μ_{2n+1} = 2⟨α_{n+1}|α_n⟩ − μ_1, |α_n⟩ = T_n(H̃)|r⟩ (eq.
- * 34), so M moments cost ≈ M/2 products per vector.
+ * vector gives μ_0 = 1 exactly (|r_i| = 1); the variance of ⟨r|A|r⟩ is Σ_{i≠j} |A_ij|² ≤ N (for ‖A‖
+ * ≤ 1), so the error of μ_n is at most 1/√(N R) (derived). Products use the doubling relations
+ * μ_{2n} = 2⟨α_n|α_n⟩ − μ_0, μ_{2n+1} = 2⟨α_{n+1}|α_n⟩ − μ_1, |α_n⟩ = T_n(H̃)|r⟩ (eq. 34), so M
+ * moments cost ≈ M/2 products per vector.
  *
- * <p><b>Kernel.</b> Jackson kernel g_n (eq. 71), whose broadening of a delta peak at x is ≈ π/M
- * in rescaled units (σ = π/M at the band centre, eq. 72), i.e. ≈ π·a/M in energy.
+ * <p><b>Kernel.</b> Jackson kernel g_n (eq. 71), whose broadening of a delta peak at x is ≈ π/M in
+ * rescaled units (σ = π/M at the band centre, eq. 72), i.e. ≈ π·a/M in energy.
  *
  * <p><b>Density of states.</b> ρ(E) = [g_0 μ_0 + 2 Σ_{n≥1} g_n μ_n T_n(x)] / (π a √(1 − x²)), x =
  * (E − b)/a (eqs. 39, 40 with the change of variable to E), in states per orbital per energy unit,
@@ -71,7 +71,8 @@ public final class KpmKernel {
    */
   public static void jacksonKernel(int moments, double[] out) {
     if (moments < 1 || out.length < moments) {
-      throw new IllegalArgumentException("need moments >= 1 and out.length >= moments: " + moments + ", " + out.length);
+      throw new IllegalArgumentException(
+          "need moments >= 1 and out.length >= moments: " + moments + ", " + out.length);
     }
     double q = Math.PI / (moments + 1);
     double cot = Math.cos(q) / Math.sin(q);
@@ -91,15 +92,22 @@ public final class KpmKernel {
    * @param workspace scratch (vectors a, b)
    * @param acc accumulated into: entries 0..M−1
    */
-  public static void accumulateMoments(CsrHermitianMatrix h, ChebyshevScale scale, double[] start, int moments,
-      KpmWorkspace workspace, double[] acc) {
+  public static void accumulateMoments(
+      CsrHermitianMatrix h,
+      ChebyshevScale scale,
+      double[] start,
+      int moments,
+      KpmWorkspace workspace,
+      double[] acc) {
     int n = h.dimension();
     if (moments < 2 || acc.length < moments) {
-      throw new IllegalArgumentException("need moments >= 2 and acc.length >= moments: " + moments + ", " + acc.length);
+      throw new IllegalArgumentException(
+          "need moments >= 2 and acc.length >= moments: " + moments + ", " + acc.length);
     }
     workspace.ensure(n, moments);
     if (start == workspace.a || start == workspace.b || start.length < 2 * n) {
-      throw new IllegalArgumentException("start vector aliases the workspace or is shorter than 2N");
+      throw new IllegalArgumentException(
+          "start vector aliases the workspace or is shorter than 2N");
     }
     double inverse = 1.0 / scale.halfWidth();
     double shift = -scale.centre() * inverse;
@@ -152,8 +160,14 @@ public final class KpmKernel {
    * @param workspace scratch
    * @param mu overwritten: entries 0..M−1
    */
-  public static void stochasticMoments(CsrHermitianMatrix h, ChebyshevScale scale, int moments, int vectors,
-      RandomGenerator random, KpmWorkspace workspace, double[] mu) {
+  public static void stochasticMoments(
+      CsrHermitianMatrix h,
+      ChebyshevScale scale,
+      int moments,
+      int vectors,
+      RandomGenerator random,
+      KpmWorkspace workspace,
+      double[] mu) {
     if (vectors < 1) {
       throw new IllegalArgumentException("need at least one random vector: " + vectors);
     }
@@ -180,7 +194,8 @@ public final class KpmKernel {
    * @param energy E in the model's energy unit
    * @return ρ(E) (0 outside the rescaled interval)
    */
-  public static double density(double[] mu, double[] jackson, int moments, ChebyshevScale scale, double energy) {
+  public static double density(
+      double[] mu, double[] jackson, int moments, ChebyshevScale scale, double energy) {
     double x = scale.rescaled(energy);
     if (!(Math.abs(x) < 1.0)) {
       return 0.0;
@@ -195,7 +210,8 @@ public final class KpmKernel {
 
   /**
    * Chebyshev coefficients c_n = g_n·s_n of the step θ(x_F − x) with the Jackson kernel (class
-   * Javadoc): s_0 = 1 − φ_F/π, s_n = −2 sin(nφ_F)/(nπ), φ_F = arccos x_F; x_F is clamped to [−1, 1].
+   * Javadoc): s_0 = 1 − φ_F/π, s_n = −2 sin(nφ_F)/(nπ), φ_F = arccos x_F; x_F is clamped to [−1,
+   * 1].
    *
    * @param fermi x_F, the rescaled Fermi energy
    * @param moments M ≥ 1
@@ -220,8 +236,14 @@ public final class KpmKernel {
    * @param y overwritten; must not alias x or the workspace
    * @param workspace scratch (vectors a, b)
    */
-  public static void applySeries(CsrHermitianMatrix h, ChebyshevScale scale, double[] coefficients, int moments,
-      double[] x, double[] y, KpmWorkspace workspace) {
+  public static void applySeries(
+      CsrHermitianMatrix h,
+      ChebyshevScale scale,
+      double[] coefficients,
+      int moments,
+      double[] x,
+      double[] y,
+      KpmWorkspace workspace) {
     int n = h.dimension();
     if (moments < 2) {
       throw new IllegalArgumentException("need moments >= 2: " + moments);

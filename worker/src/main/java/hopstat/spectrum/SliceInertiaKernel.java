@@ -17,15 +17,16 @@ import org.ejml.data.ZMatrixRMaj;
  *
  * <p><b>Sweep.</b> For M block tridiagonal with diagonal blocks A_g and couplings B_g, Haynsworth's
  * inertia additivity In(M) = In(A) + In(M/A) (Haynsworth, Linear Algebra Appl. 1, 73 (1968)) gives
- * In(M) = Σ_g In(S_g) with S_0 = A_0 and S_{g+1} = A_{g+1} − B_gᴴ S_g⁻¹ B_g. Each S_g is factored by
- * Bunch–Kaufman ({@link hopstat.linalg.HermitianLdltSolver}); B_gᴴ (S_g⁻¹ B_g) uses the sparsity of
- * B_g (each nonzero updates one row). An exactly singular S_g stops the sweep and is reported as a
- * zero count (the caller treats it as a failed realisation); near-singular S_g are not detected
+ * In(M) = Σ_g In(S_g) with S_0 = A_0 and S_{g+1} = A_{g+1} − B_gᴴ S_g⁻¹ B_g. Each S_g is factored
+ * by Bunch–Kaufman ({@link hopstat.linalg.HermitianLdltSolver}); B_gᴴ (S_g⁻¹ B_g) uses the sparsity
+ * of B_g (each nonzero updates one row). An exactly singular S_g stops the sweep and is reported as
+ * a zero count (the caller treats it as a failed realisation); near-singular S_g are not detected
  * here — the localizer gap observable measures the distance of the spectrum from the shift.
  *
  * <p><b>Localizer.</b> With {@code doubled}, M is L_κ − δ = [[H − E, κ(X − x0 − i(Y − y0))], [κ(X −
  * x0 + i(Y − y0)), −(H − E)]] − δ (Loring, Ann. Phys. 356, 383 (2015)), each orbital carrying two
- * localizer components, both in its slice. X, Y are the orbital positions ({@link Lattice#orbitalPosition}; d ≥ 2; for d = 1 Y = 0).
+ * localizer components, both in its slice. X, Y are the orbital positions ({@link
+ * Lattice#orbitalPosition}; d ≥ 2; for d = 1 Y = 0).
  *
  * <p>Cost O(Σ_g n_g³) ≈ L · n_slice³ (factorisation n³/3 plus the solve with n_{g+1} right-hand
  * sides ≈ n³ complex multiply–adds per slice); memory O(n_slice²) plus O(N) integers. Only valid
@@ -47,7 +48,8 @@ public final class SliceInertiaKernel {
    * @param workspace scratch
    * @return negative count = number of eigenvalues below E (Sylvester)
    */
-  public static InertiaResult hamiltonianInertia(HamiltonianBuilder terms, Lattice lattice, double energy, SliceInertiaWorkspace workspace) {
+  public static InertiaResult hamiltonianInertia(
+      HamiltonianBuilder terms, Lattice lattice, double energy, SliceInertiaWorkspace workspace) {
     return sweep(terms, lattice, energy, false, 0, 0, 0, 0, workspace);
   }
 
@@ -63,8 +65,15 @@ public final class SliceInertiaKernel {
    * @param shift δ
    * @param workspace scratch
    */
-  public static InertiaResult localizerInertia(HamiltonianBuilder terms, Lattice lattice, double energy, double kappa,
-      double x0, double y0, double shift, SliceInertiaWorkspace workspace) {
+  public static InertiaResult localizerInertia(
+      HamiltonianBuilder terms,
+      Lattice lattice,
+      double energy,
+      double kappa,
+      double x0,
+      double y0,
+      double shift,
+      SliceInertiaWorkspace workspace) {
     if (!(kappa > 0) || !Double.isFinite(kappa)) {
       throw new IllegalArgumentException("kappa must be positive and finite: " + kappa);
     }
@@ -104,8 +113,16 @@ public final class SliceInertiaKernel {
     return max;
   }
 
-  private static InertiaResult sweep(HamiltonianBuilder terms, Lattice lattice, double energy, boolean doubled,
-      double kappa, double x0, double y0, double shift, SliceInertiaWorkspace ws) {
+  private static InertiaResult sweep(
+      HamiltonianBuilder terms,
+      Lattice lattice,
+      double energy,
+      boolean doubled,
+      double kappa,
+      double x0,
+      double y0,
+      double shift,
+      SliceInertiaWorkspace ws) {
     int n = terms.dimension();
     if (n != lattice.orbitals()) {
       throw new IllegalArgumentException("terms of dimension " + n + " do not match " + lattice);
@@ -132,15 +149,20 @@ public final class SliceInertiaKernel {
       if (g + 1 < groups) {
         buildCoupling(g, terms, doubled, ws);
         ws.solver.solve(ws.coupling);
-        buildDiagonalBlock(g + 1, terms, lattice, energy, doubled, kappa, x0, y0, shift, ws, ws.schur);
+        buildDiagonalBlock(
+            g + 1, terms, lattice, energy, doubled, kappa, x0, y0, shift, ws, ws.schur);
         subtractCouplingProduct(g, terms, doubled, ws);
       }
     }
     return new InertiaResult(pos, neg, zero);
   }
 
-  /** Slices by x, merged into groups so that terms connect only equal or neighbouring groups; buckets the terms. */
-  private static void partition(HamiltonianBuilder terms, Lattice lattice, int copies, SliceInertiaWorkspace ws) {
+  /**
+   * Slices by x, merged into groups so that terms connect only equal or neighbouring groups;
+   * buckets the terms.
+   */
+  private static void partition(
+      HamiltonianBuilder terms, Lattice lattice, int copies, SliceInertiaWorkspace ws) {
     int sites = lattice.sites();
     int per = lattice.orbitalsPerSite();
     int n = terms.dimension();
@@ -214,8 +236,12 @@ public final class SliceInertiaKernel {
       int ga = ws.groupOfOrbital[terms.row(k)];
       int gb = ws.groupOfOrbital[terms.column(k)];
       if (Math.abs(ga - gb) > 1) {
-        throw new IllegalArgumentException("a term couples slice groups " + ga + " and " + gb
-            + ": the sample must have open boundaries along x for the slice sweep");
+        throw new IllegalArgumentException(
+            "a term couples slice groups "
+                + ga
+                + " and "
+                + gb
+                + ": the sample must have open boundaries along x for the slice sweep");
       }
       ws.termStart[Math.min(ga, gb) + 1]++;
     }
@@ -232,15 +258,26 @@ public final class SliceInertiaKernel {
   }
 
   /** Writes the diagonal block A_g (localizer or H − E, minus the shift) into {@code out}. */
-  private static void buildDiagonalBlock(int g, HamiltonianBuilder terms, Lattice lattice, double energy, boolean doubled,
-      double kappa, double x0, double y0, double shift, SliceInertiaWorkspace ws, ZMatrixRMaj out) {
+  private static void buildDiagonalBlock(
+      int g,
+      HamiltonianBuilder terms,
+      Lattice lattice,
+      double energy,
+      boolean doubled,
+      double kappa,
+      double x0,
+      double y0,
+      double shift,
+      SliceInertiaWorkspace ws,
+      ZMatrixRMaj out) {
     int size = ws.groupSize[g];
     out.reshape(size, size);
     out.zero();
     double[] a = out.data;
     int stride = 2 * size;
     int copies = doubled ? 2 : 1;
-    // Terms inside group g live in bucket g (both ends in g) or bucket g-1 (no: those couple g-1 and g).
+    // Terms inside group g live in bucket g (both ends in g) or bucket g-1 (no: those couple g-1
+    // and g).
     for (int b = ws.termStart[g]; b < ws.termStart[g + 1]; b++) {
       int k = ws.termOrder[b];
       int r = terms.row(k);
@@ -291,7 +328,8 @@ public final class SliceInertiaKernel {
   }
 
   /** Dense B_g (rows: group g, columns: group g+1) into ws.coupling. */
-  private static void buildCoupling(int g, HamiltonianBuilder terms, boolean doubled, SliceInertiaWorkspace ws) {
+  private static void buildCoupling(
+      int g, HamiltonianBuilder terms, boolean doubled, SliceInertiaWorkspace ws) {
     int rows = ws.groupSize[g];
     int cols = ws.groupSize[g + 1];
     ZMatrixRMaj out = ws.coupling;
@@ -328,7 +366,8 @@ public final class SliceInertiaKernel {
   }
 
   /** S_{g+1} −= B_gᴴ X with X = S_g⁻¹ B_g in ws.coupling: row c of S −= conj(B_rc) · row r of X. */
-  private static void subtractCouplingProduct(int g, HamiltonianBuilder terms, boolean doubled, SliceInertiaWorkspace ws) {
+  private static void subtractCouplingProduct(
+      int g, HamiltonianBuilder terms, boolean doubled, SliceInertiaWorkspace ws) {
     int cols = ws.groupSize[g + 1];
     double[] s = ws.schur.data;
     double[] x = ws.coupling.data;

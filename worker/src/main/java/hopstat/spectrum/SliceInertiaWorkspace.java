@@ -14,10 +14,13 @@ import org.ejml.data.ZMatrixRMaj;
 public final class SliceInertiaWorkspace {
 
   final HermitianLdltSolver solver;
+
   /** Current Schur complement S_g (n_g × n_g). */
   final ZMatrixRMaj schur = new ZMatrixRMaj(1, 1);
+
   /** Coupling B_g, then overwritten by S_g⁻¹ B_g (n_g × n_{g+1}). */
   final ZMatrixRMaj coupling = new ZMatrixRMaj(1, 1);
+
   double[] sortedX = new double[1];
   int[] sliceOfSite = new int[1];
   int[] reach = new int[1];

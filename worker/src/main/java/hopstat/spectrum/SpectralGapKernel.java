@@ -12,9 +12,11 @@ public final class SpectralGapKernel {
    * @return the gap; when E_F lies outside the spectrum, {@code gap} is NaN and {@code
    *     fermiDistance} is the distance to the spectrum's nearer edge
    */
-  public static SpectralGapResult compute(double[] sortedEigenvalues, int count, double fermiEnergy) {
+  public static SpectralGapResult compute(
+      double[] sortedEigenvalues, int count, double fermiEnergy) {
     if (count < 1 || count > sortedEigenvalues.length) {
-      throw new IllegalArgumentException("count must be 1.." + sortedEigenvalues.length + ": " + count);
+      throw new IllegalArgumentException(
+          "count must be 1.." + sortedEigenvalues.length + ": " + count);
     }
     int lo = 0;
     int hi = count;

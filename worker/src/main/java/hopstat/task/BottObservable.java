@@ -31,7 +31,11 @@ final class BottObservable implements Observable {
   public List<Quantity> quantities() {
     return List.of(
         new Quantity("bott", true, "1", "Bott index, unrounded"),
-        new Quantity("bott-min-modulus", false, "1", "smallest |eigenvalue| of V U V^+ U^+ (near 1: well defined)"));
+        new Quantity(
+            "bott-min-modulus",
+            false,
+            "1",
+            "smallest |eigenvalue| of V U V^+ U^+ (near 1: well defined)"));
   }
 
   @Override
@@ -40,9 +44,14 @@ final class BottObservable implements Observable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
     if (model.dimension() != 2) {
-      return Optional.of("the Bott index is defined for d = 2 models; " + model.name() + " has d = " + model.dimension());
+      return Optional.of(
+          "the Bott index is defined for d = 2 models; "
+              + model.name()
+              + " has d = "
+              + model.dimension());
     }
     Optional<String> noChern = TenfoldOps.whyNoChernNumber("the Bott index", effectiveClass);
     if (noChern.isPresent()) {
@@ -56,7 +65,9 @@ final class BottObservable implements Observable {
 
   @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
-    BottIndexResult r = BottIndexKernel.compute(context.lattice(), context.occupiedStates(), context.workspace().bott);
+    BottIndexResult r =
+        BottIndexKernel.compute(
+            context.lattice(), context.occupiedStates(), context.workspace().bott);
     if (!r.converged()) {
       throw new ConvergenceFailure("general eigenvalue routine did not converge in the Bott index");
     }

@@ -52,7 +52,9 @@ public final class BuildInfo {
     m.put("commit", commit());
     m.put("ejml", get("ejml"));
     m.put("openblas", get("openblas"));
-    m.put("jvm", System.getProperty("java.vm.name") + " " + System.getProperty("java.runtime.version"));
+    m.put(
+        "jvm",
+        System.getProperty("java.vm.name") + " " + System.getProperty("java.runtime.version"));
     m.put("os", System.getProperty("os.name") + " " + System.getProperty("os.arch"));
     return m;
   }

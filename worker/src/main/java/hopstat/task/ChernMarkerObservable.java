@@ -40,24 +40,32 @@ final class ChernMarkerObservable implements Observable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
     if (model.dimension() != 2) {
-      return Optional.of("the Chern marker is defined for d = 2 models; " + model.name() + " has d = " + model.dimension());
+      return Optional.of(
+          "the Chern marker is defined for d = 2 models; "
+              + model.name()
+              + " has d = "
+              + model.dimension());
     }
     Optional<String> noChern = TenfoldOps.whyNoChernNumber("the Chern marker", effectiveClass);
     if (noChern.isPresent()) {
       return noChern;
     }
     if (boundary != Boundary.OPEN) {
-      return Optional.of("the Chern marker needs \"boundary\": \"open\" (position operators on a torus are not defined)");
+      return Optional.of(
+          "the Chern marker needs \"boundary\": \"open\" (position operators on a torus are not defined)");
     }
     return Optional.empty();
   }
 
   @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
-    ChernMarkerWorkspace ws = context.workspace().scratch(ChernMarkerWorkspace.class, ChernMarkerWorkspace::new);
-    ChernMarkerResult r = ChernMarkerKernel.compute(context.lattice(), context.occupiedStates(), ws);
+    ChernMarkerWorkspace ws =
+        context.workspace().scratch(ChernMarkerWorkspace.class, ChernMarkerWorkspace::new);
+    ChernMarkerResult r =
+        ChernMarkerKernel.compute(context.lattice(), context.occupiedStates(), ws);
     if (r.bulkSites() == 0) {
       throw new IllegalStateException("the bulk region of the sample holds no site (L too small)");
     }

@@ -30,7 +30,11 @@ final class GapObservable implements Observable {
   public List<Quantity> quantities() {
     return List.of(
         new Quantity("gap", false, "energy", "E_above - E_below around the Fermi energy"),
-        new Quantity("fermi-gap", false, "energy", "distance from the Fermi energy to the nearest eigenvalue"));
+        new Quantity(
+            "fermi-gap",
+            false,
+            "energy",
+            "distance from the Fermi energy to the nearest eigenvalue"));
   }
 
   @Override
@@ -39,16 +43,24 @@ final class GapObservable implements Observable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
     return Optional.empty();
   }
 
   @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
-    SpectralGapResult r = SpectralGapKernel.compute(context.spectrum(), context.dimension(), context.fermiEnergy());
+    SpectralGapResult r =
+        SpectralGapKernel.compute(context.spectrum(), context.dimension(), context.fermiEnergy());
     if (Double.isNaN(r.gap())) {
-      throw new IllegalStateException("the Fermi energy " + context.fermiEnergy() + " lies outside the spectrum ["
-          + context.spectrum()[0] + ", " + context.spectrum()[context.dimension() - 1] + "]");
+      throw new IllegalStateException(
+          "the Fermi energy "
+              + context.fermiEnergy()
+              + " lies outside the spectrum ["
+              + context.spectrum()[0]
+              + ", "
+              + context.spectrum()[context.dimension() - 1]
+              + "]");
     }
     out.put("gap", r.gap());
     out.put("fermi-gap", r.fermiDistance());

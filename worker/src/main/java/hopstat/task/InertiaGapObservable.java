@@ -10,7 +10,10 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
-/** {@code gap-inertia}: the gap around E_F by eigenvalue counting (inertia of H − E), no diagonalisation. */
+/**
+ * {@code gap-inertia}: the gap around E_F by eigenvalue counting (inertia of H − E), no
+ * diagonalisation.
+ */
 final class InertiaGapObservable implements Observable {
 
   static final String NAME = "gap-inertia";
@@ -34,8 +37,13 @@ final class InertiaGapObservable implements Observable {
   @Override
   public List<Quantity> quantities() {
     return List.of(
-        new Quantity("gap-inertia", false, "energy", "E_above - E_below around the Fermi energy, +-1e-5"),
-        new Quantity("states-below-fermi", true, "1", "number of eigenvalues below E_F (integrated density of states times N)"));
+        new Quantity(
+            "gap-inertia", false, "energy", "E_above - E_below around the Fermi energy, +-1e-5"),
+        new Quantity(
+            "states-below-fermi",
+            true,
+            "1",
+            "number of eigenvalues below E_F (integrated density of states times N)"));
   }
 
   @Override
@@ -49,22 +57,29 @@ final class InertiaGapObservable implements Observable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
     if (model.dimension() < 1) {
-      return Optional.of("gap-inertia slices the sample along x; " + model.name() + " has no positions (d = 0)");
+      return Optional.of(
+          "gap-inertia slices the sample along x; " + model.name() + " has no positions (d = 0)");
     }
     if (boundary != Boundary.OPEN) {
-      return Optional.of("gap-inertia needs \"boundary\": \"open\" (the slice sweep cannot follow a periodic wrap)");
+      return Optional.of(
+          "gap-inertia needs \"boundary\": \"open\" (the slice sweep cannot follow a periodic wrap)");
     }
     return Optional.empty();
   }
 
   @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
-    SliceInertiaWorkspace ws = context.workspace().scratch(SliceInertiaWorkspace.class, SliceInertiaWorkspace::new);
-    InertiaGapResult r = InertiaGapKernel.compute(context.terms(), context.lattice(), context.fermiEnergy(), TOLERANCE, ws);
+    SliceInertiaWorkspace ws =
+        context.workspace().scratch(SliceInertiaWorkspace.class, SliceInertiaWorkspace::new);
+    InertiaGapResult r =
+        InertiaGapKernel.compute(
+            context.terms(), context.lattice(), context.fermiEnergy(), TOLERANCE, ws);
     if (Double.isNaN(r.gap())) {
-      throw new IllegalStateException("the Fermi energy " + context.fermiEnergy() + " lies outside the spectrum");
+      throw new IllegalStateException(
+          "the Fermi energy " + context.fermiEnergy() + " lies outside the spectrum");
     }
     out.put("gap-inertia", r.gap());
     out.put("states-below-fermi", (double) r.statesBelow());

@@ -5,9 +5,9 @@ import java.util.List;
 import java.util.Objects;
 
 /**
- * The one exception type for bad user input. It carries every violation found, each with the
- * field path from the root of the user's file (e.g. {@code parameters.L[1]}), the rejected value
- * and what is allowed. Validation collects all violations and throws once.
+ * The one exception type for bad user input. It carries every violation found, each with the field
+ * path from the root of the user's file (e.g. {@code parameters.L[1]}), the rejected value and what
+ * is allowed. Validation collects all violations and throws once.
  */
 public final class InvalidInputException extends RuntimeException {
 
@@ -29,7 +29,9 @@ public final class InvalidInputException extends RuntimeException {
     /** One readable line: {@code path: reason (got value)}. */
     public String describe() {
       String path = fieldPath.isEmpty() ? "(root)" : fieldPath;
-      return rejectedValue == null ? path + ": " + reason : path + ": " + reason + " (got " + rejectedValue + ")";
+      return rejectedValue == null
+          ? path + ": " + reason
+          : path + ": " + reason + " (got " + rejectedValue + ")";
     }
   }
 
@@ -44,7 +46,10 @@ public final class InvalidInputException extends RuntimeException {
   }
 
   public InvalidInputException(String fieldPath, Object rejectedValue, String reason) {
-    this(List.of(new Violation(fieldPath, rejectedValue == null ? null : String.valueOf(rejectedValue), reason)));
+    this(
+        List.of(
+            new Violation(
+                fieldPath, rejectedValue == null ? null : String.valueOf(rejectedValue), reason)));
   }
 
   /** All violations, in the order they were found. */
@@ -65,7 +70,9 @@ public final class InvalidInputException extends RuntimeException {
     private final List<Violation> found = new ArrayList<>();
 
     public void add(String fieldPath, Object rejectedValue, String reason) {
-      found.add(new Violation(fieldPath, rejectedValue == null ? null : String.valueOf(rejectedValue), reason));
+      found.add(
+          new Violation(
+              fieldPath, rejectedValue == null ? null : String.valueOf(rejectedValue), reason));
     }
 
     public void addAll(InvalidInputException e) {

@@ -19,8 +19,8 @@ import org.ejml.data.ZMatrixRMaj;
  * computed ({@link RealisationContext#eigenvectorsInWindow}).
  *
  * <p>No level selection: ±E partners and Kramers partners fall in their own windows and are all
- * averaged. Caveat: within an exactly degenerate level (Kramers pair, clean lattice symmetries)
- * the eigenvectors are an arbitrary basis of the eigenspace and the per-state IPR depends on it.
+ * averaged. Caveat: within an exactly degenerate level (Kramers pair, clean lattice symmetries) the
+ * eigenvectors are an arbitrary basis of the eigenspace and the per-state IPR depends on it.
  * Quantities: {@code ipr} = mean over all states in [windowMin, windowMax], {@code ipr.w<k>},
  * {@code ipr.e<k>} as for level-ratio.
  */
@@ -59,12 +59,14 @@ final class IprObservable implements Observable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
     return Optional.empty();
   }
 
   @Override
-  public Optional<String> whyNotApplicableWith(hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
+  public Optional<String> whyNotApplicableWith(
+      hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
     return WindowParameters.whyNotWith(NAME, kind, parameters);
   }
 
@@ -72,9 +74,11 @@ final class IprObservable implements Observable {
   public void compute(RealisationContext context, Map<String, Double> out) {
     double[] spectrum = context.spectrum();
     int n = context.dimension();
-    EnergyWindows windows = WindowParameters.resolve(context.point().parameters(), spectrum[0], spectrum[n - 1]);
+    EnergyWindows windows =
+        WindowParameters.resolve(context.point().parameters(), spectrum[0], spectrum[n - 1]);
     int first = context.firstIndexAtOrAbove(windows.lower());
-    ZMatrixRMaj vectors = context.eigenvectorsInWindow(windows.lower(), Math.nextUp(windows.upper()));
+    ZMatrixRMaj vectors =
+        context.eigenvectorsInWindow(windows.lower(), Math.nextUp(windows.upper()));
     double[] sums = new double[windows.count()];
     int[] counts = new int[windows.count()];
     double total = 0;
@@ -86,7 +90,8 @@ final class IprObservable implements Observable {
       total += p;
     }
     if (vectors.numCols == 0) {
-      throw new IllegalStateException("no eigenstate in [" + windows.lower() + ", " + windows.upper() + "]");
+      throw new IllegalStateException(
+          "no eigenstate in [" + windows.lower() + ", " + windows.upper() + "]");
     }
     out.put(NAME, total / vectors.numCols);
     for (int w = 0; w < windows.count(); w++) {

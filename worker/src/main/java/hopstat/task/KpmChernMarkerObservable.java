@@ -17,8 +17,8 @@ import java.util.Optional;
 /**
  * {@code kpm-chern-marker}: the bulk-averaged Bianco–Resta local Chern marker with the projector
  * expanded in Chebyshev polynomials and a stochastic trace over the bulk ({@link
- * KpmChernMarkerKernel}); same region and sign as {@code chern-marker}. Random vectors come from the
- * realisation's generator after the disorder and after observables listed earlier in the spec.
+ * KpmChernMarkerKernel}); same region and sign as {@code chern-marker}. Random vectors come from
+ * the realisation's generator after the disorder and after observables listed earlier in the spec.
  */
 final class KpmChernMarkerObservable implements KpmObservable {
 
@@ -48,8 +48,16 @@ final class KpmChernMarkerObservable implements KpmObservable {
   @Override
   public List<Quantity> quantities() {
     return List.of(
-        new Quantity("kpm-chern-marker", true, "1", "bulk-averaged local Chern marker (KPM, stochastic trace), unrounded"),
-        new Quantity("kpm-chern-marker-error", false, "1", "standard error of kpm-chern-marker over the random vectors"));
+        new Quantity(
+            "kpm-chern-marker",
+            true,
+            "1",
+            "bulk-averaged local Chern marker (KPM, stochastic trace), unrounded"),
+        new Quantity(
+            "kpm-chern-marker-error",
+            false,
+            "1",
+            "standard error of kpm-chern-marker over the random vectors"));
   }
 
   @Override
@@ -63,12 +71,14 @@ final class KpmChernMarkerObservable implements KpmObservable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
     return new ChernMarkerObservable().whyNotApplicable(model, boundary, effectiveClass);
   }
 
   @Override
-  public Optional<String> whyNotApplicableWith(hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
+  public Optional<String> whyNotApplicableWith(
+      hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
     return KpmSupport.whyNotWith(NAME, kind);
   }
 
@@ -78,9 +88,20 @@ final class KpmChernMarkerObservable implements KpmObservable {
     int moments = KpmSupport.integer(p, KpmSupport.MOMENTS_PARAMETER, 2, KpmSupport.MAX_MOMENTS);
     int vectors = KpmSupport.integer(p, KpmSupport.VECTORS_PARAMETER, 2, KpmSupport.MAX_VECTORS);
     CsrHermitianMatrix h = context.sparseHamiltonian();
-    KpmChernMarkerWorkspace ws = context.workspace().scratch(KpmChernMarkerWorkspace.class, linalg -> new KpmChernMarkerWorkspace());
-    KpmChernMarkerResult r = KpmChernMarkerKernel.compute(h, context.lattice(), KpmKernel.scale(h), context.fermiEnergy(), moments,
-        vectors, context.random(), ws);
+    KpmChernMarkerWorkspace ws =
+        context
+            .workspace()
+            .scratch(KpmChernMarkerWorkspace.class, linalg -> new KpmChernMarkerWorkspace());
+    KpmChernMarkerResult r =
+        KpmChernMarkerKernel.compute(
+            h,
+            context.lattice(),
+            KpmKernel.scale(h),
+            context.fermiEnergy(),
+            moments,
+            vectors,
+            context.random(),
+            ws);
     if (r.bulkSites() == 0) {
       throw new IllegalStateException("the bulk region of the sample holds no site (L too small)");
     }

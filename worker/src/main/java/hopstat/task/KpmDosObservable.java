@@ -15,20 +15,20 @@ import java.util.Map;
 import java.util.Optional;
 
 /**
- * {@code dos}: density of states by the kernel polynomial method (Weiße, Wellein, Alvermann, Fehske,
- * RMP 78, 275 (2006); {@link KpmKernel}) on the sparse Hamiltonian, without a dense matrix.
+ * {@code dos}: density of states by the kernel polynomial method (Weiße, Wellein, Alvermann,
+ * Fehske, RMP 78, 275 (2006); {@link KpmKernel}) on the sparse Hamiltonian, without a dense matrix.
  *
  * <p>Energies E_k = dosEnergyMin + k·(dosEnergyMax − dosEnergyMin)/(dosEnergies − 1), k =
- * 0..dosEnergies−1 (E_0 = dosEnergyMin when the count is 1). Quantities {@code dos@E<k>} = ρ(E_k) in
- * states per orbital per energy unit, normalised ∫ρ dE = 1 over the whole spectrum, and {@code
+ * 0..dosEnergies−1 (E_0 = dosEnergyMin when the count is 1). Quantities {@code dos@E<k>} = ρ(E_k)
+ * in states per orbital per energy unit, normalised ∫ρ dE = 1 over the whole spectrum, and {@code
  * dos@E<k>.energy} = E_k; names fixed for k &lt; {@link #MAX_ENERGIES}, a realisation writes k &lt;
  * dosEnergies only.
  *
- * <p>Randomness: the R = kpmVectors random-phase vectors are drawn from the realisation's
- * generator ({@link RealisationContext#random()}) after all disorder draws and after the draws of
- * observables listed earlier in the spec, vector after vector, one number per orbital in matrix
- * index order. Resolution: Jackson broadening ≈ π a/M in energy (a = half-width of the rescaled
- * Gershgorin interval, M = kpmMoments); statistical error of each moment ≤ 1/√(N R).
+ * <p>Randomness: the R = kpmVectors random-phase vectors are drawn from the realisation's generator
+ * ({@link RealisationContext#random()}) after all disorder draws and after the draws of observables
+ * listed earlier in the spec, vector after vector, one number per orbital in matrix index order.
+ * Resolution: Jackson broadening ≈ π a/M in energy (a = half-width of the rescaled Gershgorin
+ * interval, M = kpmMoments); statistical error of each moment ≤ 1/√(N R).
  */
 final class KpmDosObservable implements KpmObservable {
 
@@ -51,18 +51,27 @@ final class KpmDosObservable implements KpmObservable {
 
   @Override
   public List<ParameterInfo> parameters() {
-    return List.of(KpmSupport.MOMENTS_PARAMETER, KpmSupport.VECTORS_PARAMETER,
-        new ParameterInfo("dosEnergyMin", null, "lowest energy of the density of states (model energy unit)"),
-        new ParameterInfo("dosEnergyMax", null, "highest energy of the density of states (model energy unit)"),
-        new ParameterInfo("dosEnergies", 33.0, "number of equally spaced energies, 1.." + MAX_ENERGIES));
+    return List.of(
+        KpmSupport.MOMENTS_PARAMETER,
+        KpmSupport.VECTORS_PARAMETER,
+        new ParameterInfo(
+            "dosEnergyMin", null, "lowest energy of the density of states (model energy unit)"),
+        new ParameterInfo(
+            "dosEnergyMax", null, "highest energy of the density of states (model energy unit)"),
+        new ParameterInfo(
+            "dosEnergies", 33.0, "number of equally spaced energies, 1.." + MAX_ENERGIES));
   }
 
   @Override
   public List<Quantity> quantities() {
     List<Quantity> q = new ArrayList<>();
     for (int k = 0; k < MAX_ENERGIES; k++) {
-      q.add(new Quantity("dos@E" + k, false, "states per orbital per energy unit",
-          "KPM density of states at E_" + k + " (Jackson kernel), normalised to integral 1"));
+      q.add(
+          new Quantity(
+              "dos@E" + k,
+              false,
+              "states per orbital per energy unit",
+              "KPM density of states at E_" + k + " (Jackson kernel), normalised to integral 1"));
     }
     for (int k = 0; k < MAX_ENERGIES; k++) {
       q.add(new Quantity("dos@E" + k + ".energy", false, "energy", "the energy E_" + k));
@@ -81,12 +90,14 @@ final class KpmDosObservable implements KpmObservable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
     return Optional.empty();
   }
 
   @Override
-  public Optional<String> whyNotApplicableWith(hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
+  public Optional<String> whyNotApplicableWith(
+      hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
     return KpmSupport.whyNotWith(NAME, kind);
   }
 
@@ -95,7 +106,8 @@ final class KpmDosObservable implements KpmObservable {
     ParameterValues p = context.point().parameters();
     for (String name : List.of("dosEnergyMin", "dosEnergyMax")) {
       if (!p.has(name)) {
-        throw new InvalidInputException("parameters." + name, null, "the observable '" + NAME + "' needs it");
+        throw new InvalidInputException(
+            "parameters." + name, null, "the observable '" + NAME + "' needs it");
       }
     }
     int moments = KpmSupport.integer(p, KpmSupport.MOMENTS_PARAMETER, 2, KpmSupport.MAX_MOMENTS);
@@ -104,7 +116,8 @@ final class KpmDosObservable implements KpmObservable {
     double min = p.get("dosEnergyMin");
     double max = p.get("dosEnergyMax");
     if (!(max >= min) || !Double.isFinite(min) || !Double.isFinite(max)) {
-      throw new InvalidInputException("parameters.dosEnergyMax", max, "must be finite and >= dosEnergyMin (" + min + ")");
+      throw new InvalidInputException(
+          "parameters.dosEnergyMax", max, "must be finite and >= dosEnergyMin (" + min + ")");
     }
     CsrHermitianMatrix h = context.sparseHamiltonian();
     ChebyshevScale scale = KpmKernel.scale(h);

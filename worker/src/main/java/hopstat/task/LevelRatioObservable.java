@@ -18,11 +18,11 @@ import java.util.Optional;
  *
  * <p>Level selection, from the model's clean class: if it has particle–hole or chiral symmetry
  * (spectrum symmetric under E → −E) only E &gt; 0 is kept; if T² = −1 (Kramers degeneracy) one
- * level of each degenerate pair is kept (only if the pairs are found degenerate, so a disorder
- * that breaks T is handled). Quantities: {@code level-ratio} = mean over all ratios in
- * [windowMin, windowMax]; {@code level-ratio.w<k>} = mean in window k; {@code level-ratio.e<k>}
- * = centre of window k. Per-realisation means: the ensemble mean of window means weights
- * realisations equally, not ratios.
+ * level of each degenerate pair is kept (only if the pairs are found degenerate, so a disorder that
+ * breaks T is handled). Quantities: {@code level-ratio} = mean over all ratios in [windowMin,
+ * windowMax]; {@code level-ratio.w<k>} = mean in window k; {@code level-ratio.e<k>} = centre of
+ * window k. Per-realisation means: the ensemble mean of window means weights realisations equally,
+ * not ratios.
  */
 final class LevelRatioObservable implements Observable {
 
@@ -60,12 +60,14 @@ final class LevelRatioObservable implements Observable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
     return Optional.empty();
   }
 
   @Override
-  public Optional<String> whyNotApplicableWith(hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
+  public Optional<String> whyNotApplicableWith(
+      hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
     return WindowParameters.whyNotWith(NAME, kind, parameters);
   }
 
@@ -74,13 +76,23 @@ final class LevelRatioObservable implements Observable {
     double[] spectrum = context.spectrum();
     int n = context.dimension();
     SymmetryClass k = context.model().symmetryClass();
-    LevelScratch scratch = context.workspace().scratch(LevelScratch.class, linalg -> new LevelScratch());
+    LevelScratch scratch =
+        context.workspace().scratch(LevelScratch.class, linalg -> new LevelScratch());
     scratch.ensure(n);
-    int m = LevelRatioKernel.selectLevels(spectrum, n, k.hasParticleHole() || k.hasChiral(), k.timeReversalSquare() == -1, scratch.levels);
+    int m =
+        LevelRatioKernel.selectLevels(
+            spectrum,
+            n,
+            k.hasParticleHole() || k.hasChiral(),
+            k.timeReversalSquare() == -1,
+            scratch.levels);
     if (m < 3) {
-      throw new IllegalStateException("level-ratio needs at least 3 levels after symmetry reduction, got " + m);
+      throw new IllegalStateException(
+          "level-ratio needs at least 3 levels after symmetry reduction, got " + m);
     }
-    EnergyWindows windows = WindowParameters.resolve(context.point().parameters(), scratch.levels[0], scratch.levels[m - 1]);
+    EnergyWindows windows =
+        WindowParameters.resolve(
+            context.point().parameters(), scratch.levels[0], scratch.levels[m - 1]);
     LevelRatioKernel.accumulate(scratch.levels, m, windows, scratch.sums, scratch.counts);
     double total = 0;
     int count = 0;
@@ -89,7 +101,8 @@ final class LevelRatioObservable implements Observable {
       count += scratch.counts[w];
     }
     if (count == 0) {
-      throw new IllegalStateException("no level ratio in [" + windows.lower() + ", " + windows.upper() + "]");
+      throw new IllegalStateException(
+          "no level ratio in [" + windows.lower() + ", " + windows.upper() + "]");
     }
     out.put(NAME, total / count);
     for (int w = 0; w < windows.count(); w++) {

@@ -10,7 +10,10 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
-/** {@code chern-localizer}: the Chern number from the signature of the spectral localizer (no diagonalisation). */
+/**
+ * {@code chern-localizer}: the Chern number from the signature of the spectral localizer (no
+ * diagonalisation).
+ */
 final class LocalizerChernObservable implements Observable {
 
   static final String NAME = "chern-localizer";
@@ -32,8 +35,16 @@ final class LocalizerChernObservable implements Observable {
   @Override
   public List<Quantity> quantities() {
     return List.of(
-        new Quantity("chern-localizer", true, "1", "-sig(L_kappa)/2, the Chern number in the Bott-index sign convention"),
-        new Quantity("localizer-kappa", false, "energy per lattice unit", "kappa used for this realisation"));
+        new Quantity(
+            "chern-localizer",
+            true,
+            "1",
+            "-sig(L_kappa)/2, the Chern number in the Bott-index sign convention"),
+        new Quantity(
+            "localizer-kappa",
+            false,
+            "energy per lattice unit",
+            "kappa used for this realisation"));
   }
 
   @Override
@@ -52,22 +63,28 @@ final class LocalizerChernObservable implements Observable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
     return LocalizerSupport.whyNotApplicable(model, boundary);
   }
 
   @Override
-  public Optional<String> whyNotApplicableWith(hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
+  public Optional<String> whyNotApplicableWith(
+      hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
     return LocalizerSupport.whyNotWith(name(), kind, parameters);
   }
 
   @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
     double kappa = LocalizerSupport.kappa(context);
-    SliceInertiaWorkspace ws = context.workspace().scratch(SliceInertiaWorkspace.class, SliceInertiaWorkspace::new);
-    int c = SpectralLocalizerKernel.chern(context.terms(), context.lattice(), context.fermiEnergy(), kappa, ws);
+    SliceInertiaWorkspace ws =
+        context.workspace().scratch(SliceInertiaWorkspace.class, SliceInertiaWorkspace::new);
+    int c =
+        SpectralLocalizerKernel.chern(
+            context.terms(), context.lattice(), context.fermiEnergy(), kappa, ws);
     if (c == Integer.MIN_VALUE) {
-      throw new ConvergenceFailure("a Schur complement of the spectral localizer is exactly singular (index undefined)");
+      throw new ConvergenceFailure(
+          "a Schur complement of the spectral localizer is exactly singular (index undefined)");
     }
     out.put("chern-localizer", (double) c);
     out.put("localizer-kappa", kappa);

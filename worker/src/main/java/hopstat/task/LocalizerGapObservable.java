@@ -10,7 +10,10 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
-/** {@code localizer-gap}: a certified lower bound on the smallest |eigenvalue| of the spectral localizer. */
+/**
+ * {@code localizer-gap}: a certified lower bound on the smallest |eigenvalue| of the spectral
+ * localizer.
+ */
 final class LocalizerGapObservable implements Observable {
 
   static final String NAME = "localizer-gap";
@@ -38,7 +41,12 @@ final class LocalizerGapObservable implements Observable {
 
   @Override
   public List<Quantity> quantities() {
-    return List.of(new Quantity("localizer-gap", false, "energy", "lower bound on min |eig(L_kappa)|, within 5% of it"));
+    return List.of(
+        new Quantity(
+            "localizer-gap",
+            false,
+            "energy",
+            "lower bound on min |eig(L_kappa)|, within 5% of it"));
   }
 
   @Override
@@ -57,21 +65,32 @@ final class LocalizerGapObservable implements Observable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
     return LocalizerSupport.whyNotApplicable(model, boundary);
   }
 
   @Override
-  public Optional<String> whyNotApplicableWith(hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
+  public Optional<String> whyNotApplicableWith(
+      hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
     return LocalizerSupport.whyNotWith(name(), kind, parameters);
   }
 
   @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
     double kappa = LocalizerSupport.kappa(context);
-    SliceInertiaWorkspace ws = context.workspace().scratch(SliceInertiaWorkspace.class, SliceInertiaWorkspace::new);
+    SliceInertiaWorkspace ws =
+        context.workspace().scratch(SliceInertiaWorkspace.class, SliceInertiaWorkspace::new);
     double[] bracket = new double[2];
-    SpectralLocalizerKernel.localizerGap(context.terms(), context.lattice(), context.fermiEnergy(), kappa, FLOOR, RELATIVE_TOLERANCE, ws, bracket);
+    SpectralLocalizerKernel.localizerGap(
+        context.terms(),
+        context.lattice(),
+        context.fermiEnergy(),
+        kappa,
+        FLOOR,
+        RELATIVE_TOLERANCE,
+        ws,
+        bracket);
     out.put("localizer-gap", bracket[0]);
   }
 }

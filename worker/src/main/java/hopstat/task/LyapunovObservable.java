@@ -36,12 +36,12 @@ import org.ejml.data.ZMatrixRMaj;
  * models: real slices, invertible T = −t·1) run the real transfer-matrix QR iteration {@link
  * TransferMatrixKernel}, kept because it is tested against Kappus–Wegner and closed forms and costs
  * O(K²) per slice for their diagonal T. Every other model with d ≥ 1 runs {@link
- * GreenRecursionKernel} (a QR-stabilised solution-frame recursion that never inverts a coupling)
- * on slices cut from the model's own clean Hamiltonian by
- * {@link BarSliceOps} (complex slices, singular couplings allowed, e.g. BdG wires at Δ = t and the
- * QWZ hopping): qwz, haldane, flux-square, pip-square, bhz, pwave-wire, ising-chain, ssh and custom
- * models whose terms join neighbouring cells along their last direction only. Both engines agree
- * on the anderson models within their errors (tested). {@code majorana-cluster} (d = 0) has no bar.
+ * GreenRecursionKernel} (a QR-stabilised solution-frame recursion that never inverts a coupling) on
+ * slices cut from the model's own clean Hamiltonian by {@link BarSliceOps} (complex slices,
+ * singular couplings allowed, e.g. BdG wires at Δ = t and the QWZ hopping): qwz, haldane,
+ * flux-square, pip-square, bhz, pwave-wire, ising-chain, ssh and custom models whose terms join
+ * neighbouring cells along their last direction only. Both engines agree on the anderson models
+ * within their errors (tested). {@code majorana-cluster} (d = 0) has no bar.
  *
  * <p>The bar is not the L^d sample the runner built: it grows slice by slice along the last lattice
  * direction until the target error is reached; memory is independent of its length. Transverse
@@ -86,15 +86,26 @@ final class LyapunovObservable implements Observable {
   @Override
   public List<ParameterInfo> parameters() {
     return List.of(
-        new ParameterInfo("energy", null, "energy E at which the exponents are computed (model energy unit)"),
-        new ParameterInfo("lyapunovError", DEFAULT_ERROR, "target relative standard error of the smallest exponent"),
-        new ParameterInfo("lyapunovMaxLength", DEFAULT_MAX_LENGTH, "length guard in slices; longer runs fail as not converged"));
+        new ParameterInfo(
+            "energy", null, "energy E at which the exponents are computed (model energy unit)"),
+        new ParameterInfo(
+            "lyapunovError",
+            DEFAULT_ERROR,
+            "target relative standard error of the smallest exponent"),
+        new ParameterInfo(
+            "lyapunovMaxLength",
+            DEFAULT_MAX_LENGTH,
+            "length guard in slices; longer runs fail as not converged"));
   }
 
   @Override
   public List<Quantity> quantities() {
     return List.of(
-        new Quantity("lyapunov", false, "1/a", "smallest positive Lyapunov exponent gamma per lattice spacing a (amplitude)"),
+        new Quantity(
+            "lyapunov",
+            false,
+            "1/a",
+            "smallest positive Lyapunov exponent gamma per lattice spacing a (amplitude)"),
         new Quantity("lambda", false, "1", "normalised localisation length Lambda = 1/(gamma M)"),
         new Quantity("lyapunov-error", false, "1", "estimated relative standard error of gamma"));
   }
@@ -111,15 +122,19 @@ final class LyapunovObservable implements Observable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
     if (model instanceof SliceHamiltonian) {
       return Optional.empty();
     }
-    return BarSliceOps.whyNotSliceable(model).map(reason -> "the transfer-matrix observable 'lyapunov' needs a bar of slices: " + reason);
+    return BarSliceOps.whyNotSliceable(model)
+        .map(
+            reason -> "the transfer-matrix observable 'lyapunov' needs a bar of slices: " + reason);
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass, List<String> disorderTypes) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass, List<String> disorderTypes) {
     Optional<String> base = whyNotApplicable(model, boundary, effectiveClass);
     if (base.isPresent()) {
       return base;
@@ -139,10 +154,14 @@ final class LyapunovObservable implements Observable {
 
   private static Optional<String> whyNotSliceable(DisorderKind kind, Model model) {
     if (!(kind instanceof SliceDisorder slice)) {
-      return Optional.of("the observable 'lyapunov' draws disorder slice by slice, which disorder '" + kind.name()
-          + "' does not support (supported: onsite-box, onsite-gauss, field-box, coupling-box, pairing-box, bond-box)");
+      return Optional.of(
+          "the observable 'lyapunov' draws disorder slice by slice, which disorder '"
+              + kind.name()
+              + "' does not support (supported: onsite-box, onsite-gauss, field-box, coupling-box, pairing-box, bond-box)");
     }
-    return slice.whyNotSliceable(model).map(r -> "the observable 'lyapunov' cannot use disorder '" + kind.name() + "': " + r);
+    return slice
+        .whyNotSliceable(model)
+        .map(r -> "the observable 'lyapunov' cannot use disorder '" + kind.name() + "': " + r);
   }
 
   @Override
@@ -150,24 +169,40 @@ final class LyapunovObservable implements Observable {
     Model model = context.model();
     ParameterValues parameters = context.point().parameters();
     if (!parameters.has("energy")) {
-      throw new InvalidInputException("parameters.energy", null, "the observable 'lyapunov' needs the parameter 'energy'");
+      throw new InvalidInputException(
+          "parameters.energy", null, "the observable 'lyapunov' needs the parameter 'energy'");
     }
-    LyapunovSpec spec = new LyapunovSpec(
-        parameters.get("energy"),
-        parameters.has("lyapunovError") ? parameters.get("lyapunovError") : DEFAULT_ERROR,
-        (long) (parameters.has("lyapunovMaxLength") ? parameters.get("lyapunovMaxLength") : DEFAULT_MAX_LENGTH));
+    LyapunovSpec spec =
+        new LyapunovSpec(
+            parameters.get("energy"),
+            parameters.has("lyapunovError") ? parameters.get("lyapunovError") : DEFAULT_ERROR,
+            (long)
+                (parameters.has("lyapunovMaxLength")
+                    ? parameters.get("lyapunovMaxLength")
+                    : DEFAULT_MAX_LENGTH));
     int crossSection = context.point().linearSize();
     List<DisorderTerm> terms = context.point().disorder();
     List<DisorderKind> kinds = new ArrayList<>(terms.size());
     for (DisorderTerm term : terms) {
-      kinds.add(DisorderCatalog.find(term.type()).orElseThrow(() -> new IllegalStateException("unknown disorder " + term.type())));
+      kinds.add(
+          DisorderCatalog.find(term.type())
+              .orElseThrow(() -> new IllegalStateException("unknown disorder " + term.type())));
     }
-    LyapunovResult r = model instanceof SliceHamiltonian sliced
-        ? runTransferMatrix(context, sliced, parameters, crossSection, spec, terms, kinds)
-        : runGreenRecursion(context, parameters, crossSection, spec, terms, kinds);
+    LyapunovResult r =
+        model instanceof SliceHamiltonian sliced
+            ? runTransferMatrix(context, sliced, parameters, crossSection, spec, terms, kinds)
+            : runGreenRecursion(context, parameters, crossSection, spec, terms, kinds);
     if (!r.converged() || !(r.smallestPositive() > 0)) {
-      throw new ConvergenceFailure("transfer matrix: relative error " + r.relativeError() + " after " + r.slices()
-          + " slices (target " + spec.targetRelativeError() + ", gamma " + r.smallestPositive() + ")");
+      throw new ConvergenceFailure(
+          "transfer matrix: relative error "
+              + r.relativeError()
+              + " after "
+              + r.slices()
+              + " slices (target "
+              + spec.targetRelativeError()
+              + ", gamma "
+              + r.smallestPositive()
+              + ")");
     }
     int m = model.dimension() == 1 ? 1 : crossSection;
     out.put("lyapunov", r.smallestPositive());
@@ -176,33 +211,48 @@ final class LyapunovObservable implements Observable {
   }
 
   /** The anderson models' real transfer-matrix route (unchanged). */
-  private static LyapunovResult runTransferMatrix(RealisationContext context, SliceHamiltonian sliced, ParameterValues parameters, int crossSection,
-      LyapunovSpec spec, List<DisorderTerm> terms, List<DisorderKind> kinds) {
+  private static LyapunovResult runTransferMatrix(
+      RealisationContext context,
+      SliceHamiltonian sliced,
+      ParameterValues parameters,
+      int crossSection,
+      LyapunovSpec spec,
+      List<DisorderTerm> terms,
+      List<DisorderKind> kinds) {
     Model model = context.model();
     Lattice slice = sliced.sliceLattice(crossSection, context.point().boundary());
     int k = slice.orbitals();
     double[] hopping = new double[k * k];
     sliced.interSliceHopping(parameters, slice, hopping);
     RandomGenerator random = context.random();
-    TransferMatrixKernel.SliceSource source = h -> {
-      sliced.addCleanSlice(parameters, slice, h);
-      for (int i = 0; i < terms.size(); i++) {
-        kinds.get(i).apply(terms.get(i), model, parameters, slice, random, h);
-      }
-    };
-    TransferMatrixWorkspace workspace = context.workspace().scratch(TransferMatrixWorkspace.class, TransferMatrixWorkspace::new);
+    TransferMatrixKernel.SliceSource source =
+        h -> {
+          sliced.addCleanSlice(parameters, slice, h);
+          for (int i = 0; i < terms.size(); i++) {
+            kinds.get(i).apply(terms.get(i), model, parameters, slice, random, h);
+          }
+        };
+    TransferMatrixWorkspace workspace =
+        context.workspace().scratch(TransferMatrixWorkspace.class, TransferMatrixWorkspace::new);
     return TransferMatrixKernel.run(hopping, k, spec, source, workspace);
   }
 
   /** Every other model: slices cut from the clean Hamiltonian, {@link GreenRecursionKernel}. */
-  private static LyapunovResult runGreenRecursion(RealisationContext context, ParameterValues parameters, int crossSection,
-      LyapunovSpec spec, List<DisorderTerm> terms, List<DisorderKind> kinds) {
+  private static LyapunovResult runGreenRecursion(
+      RealisationContext context,
+      ParameterValues parameters,
+      int crossSection,
+      LyapunovSpec spec,
+      List<DisorderTerm> terms,
+      List<DisorderKind> kinds) {
     Model model = context.model();
     List<SliceDisorder> sliceKinds = new ArrayList<>(kinds.size());
     for (DisorderKind kind : kinds) {
-      whyNotSliceable(kind, model).ifPresent(reason -> {
-        throw new InvalidInputException("disorder", kind.name(), reason);
-      });
+      whyNotSliceable(kind, model)
+          .ifPresent(
+              reason -> {
+                throw new InvalidInputException("disorder", kind.name(), reason);
+              });
       sliceKinds.add((SliceDisorder) kind);
     }
     BarSlices bar;
@@ -216,19 +266,23 @@ final class LyapunovObservable implements Observable {
     Lattice window = bar.window();
     RandomGenerator random = context.random();
     HamiltonianBuilder drawn = new HamiltonianBuilder();
-    GreenRecursionKernel.SliceSource source = (h, t) -> {
-      bar.copyOnSlice(h);
-      bar.copyCoupling(t);
-      if (terms.isEmpty()) {
-        return;
-      }
-      drawn.reset(2 * k);
-      for (int i = 0; i < terms.size(); i++) {
-        sliceKinds.get(i).applyToSlice(terms.get(i), model, parameters, window, sliceSites, random, drawn);
-      }
-      addWindowTerms(drawn, k, h, t);
-    };
-    GreenRecursionWorkspace workspace = context.workspace().scratch(GreenRecursionWorkspace.class, GreenRecursionWorkspace::new);
+    GreenRecursionKernel.SliceSource source =
+        (h, t) -> {
+          bar.copyOnSlice(h);
+          bar.copyCoupling(t);
+          if (terms.isEmpty()) {
+            return;
+          }
+          drawn.reset(2 * k);
+          for (int i = 0; i < terms.size(); i++) {
+            sliceKinds
+                .get(i)
+                .applyToSlice(terms.get(i), model, parameters, window, sliceSites, random, drawn);
+          }
+          addWindowTerms(drawn, k, h, t);
+        };
+    GreenRecursionWorkspace workspace =
+        context.workspace().scratch(GreenRecursionWorkspace.class, GreenRecursionWorkspace::new);
     return GreenRecursionKernel.run(k, spec, source, workspace);
   }
 
@@ -252,7 +306,8 @@ final class LyapunovObservable implements Observable {
       } else if (i < k) {
         add(t, j - k, i, re, -im);
       } else {
-        throw new IllegalStateException("slice disorder added a term inside the next slice (" + i + ", " + j + ")");
+        throw new IllegalStateException(
+            "slice disorder added a term inside the next slice (" + i + ", " + j + ")");
       }
     }
   }

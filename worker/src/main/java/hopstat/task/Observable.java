@@ -8,9 +8,9 @@ import java.util.Map;
 import java.util.Optional;
 
 /**
- * A per-realisation measurement requested by name in the spec's {@code observables}. Implementations
- * are stateless adapters from a {@link RealisationContext} to kernels; scratch lives in the
- * context's workspace.
+ * A per-realisation measurement requested by name in the spec's {@code observables}.
+ * Implementations are stateless adapters from a {@link RealisationContext} to kernels; scratch
+ * lives in the context's workspace.
  */
 public interface Observable {
 
@@ -36,9 +36,9 @@ public interface Observable {
   boolean needsOccupiedStates();
 
   /**
-   * True if the observable uses the dense N × N Hamiltonian or its spectrum (the default). Observables
-   * that work on the sparse term list only return false, so that {@link RealisationCost} sizes their
-   * runs without an N² matrix.
+   * True if the observable uses the dense N × N Hamiltonian or its spectrum (the default).
+   * Observables that work on the sparse term list only return false, so that {@link
+   * RealisationCost} sizes their runs without an N² matrix.
    */
   default boolean needsDenseMatrix() {
     return true;
@@ -60,7 +60,8 @@ public interface Observable {
    * @param kind read
    * @param parameters read: every parameter of the spec (given or defaulted) with all its values
    */
-  default Optional<String> whyNotApplicableWith(hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
+  default Optional<String> whyNotApplicableWith(
+      hopstat.disorder.DisorderKind kind, Map<String, List<Double>> parameters) {
     return Optional.empty();
   }
 
@@ -71,7 +72,8 @@ public interface Observable {
    *
    * @param disorderTypes the {@code disorder[i].type} names; read
    */
-  default Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass, List<String> disorderTypes) {
+  default Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass, List<String> disorderTypes) {
     return whyNotApplicable(model, boundary, effectiveClass);
   }
 

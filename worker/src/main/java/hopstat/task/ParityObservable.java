@@ -34,7 +34,9 @@ final class ParityObservable implements Observable {
 
   @Override
   public List<Quantity> quantities() {
-    return List.of(new Quantity("parity", true, "1", "ground-state fermion parity: 0 even, 1 odd (sign Pf(A))"));
+    return List.of(
+        new Quantity(
+            "parity", true, "1", "ground-state fermion parity: 0 even, 1 odd (sign Pf(A))"));
   }
 
   @Override
@@ -43,21 +45,29 @@ final class ParityObservable implements Observable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
     if (!(model instanceof MajoranaForm) || model.dimension() != 0) {
-      return Optional.of("parity is defined for zero-dimensional BdG models in Majorana form (majorana-cluster); "
-          + model.name() + " is not one");
+      return Optional.of(
+          "parity is defined for zero-dimensional BdG models in Majorana form (majorana-cluster); "
+              + model.name()
+              + " is not one");
     }
     if (effectiveClass.particleHoleSquare() != 1) {
-      return Optional.of("the Pfaffian parity needs particle-hole symmetry with C^2 = +1; the disorder leaves class " + effectiveClass);
+      return Optional.of(
+          "the Pfaffian parity needs particle-hole symmetry with C^2 = +1; the disorder leaves class "
+              + effectiveClass);
     }
     return Optional.empty();
   }
 
   @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
-    MajoranaWorkspace ws = context.workspace().scratch(MajoranaWorkspace.class, linalg -> new MajoranaWorkspace());
-    PfaffianResult pf = MajoranaKernel.groundStateParity((MajoranaForm) context.model(), context.lattice(), context.terms(), ws);
+    MajoranaWorkspace ws =
+        context.workspace().scratch(MajoranaWorkspace.class, linalg -> new MajoranaWorkspace());
+    PfaffianResult pf =
+        MajoranaKernel.groundStateParity(
+            (MajoranaForm) context.model(), context.lattice(), context.terms(), ws);
     if (pf.sign() == 0) {
       throw new IllegalStateException("Pf(A) = 0: degenerate ground state, parity undefined");
     }

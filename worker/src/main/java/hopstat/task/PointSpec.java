@@ -33,8 +33,14 @@ public record PointSpec(
     CustomModelDefinition customModel) {
 
   /** A point of a built-in model. */
-  public PointSpec(String model, ParameterValues parameters, int linearSize, Boundary boundary, double fermiEnergy,
-      List<DisorderTerm> disorder, List<String> observables) {
+  public PointSpec(
+      String model,
+      ParameterValues parameters,
+      int linearSize,
+      Boundary boundary,
+      double fermiEnergy,
+      List<DisorderTerm> disorder,
+      List<String> observables) {
     this(model, parameters, linearSize, boundary, fermiEnergy, disorder, observables, null);
   }
 

@@ -28,11 +28,22 @@ public final class RealisationContext {
   private boolean occupiedDone;
   private int occupiedCount;
 
-  RealisationContext(RealisationWorkspace workspace, Model model, Lattice lattice, PointSpec point, boolean vectorsWanted) {
+  RealisationContext(
+      RealisationWorkspace workspace,
+      Model model,
+      Lattice lattice,
+      PointSpec point,
+      boolean vectorsWanted) {
     this(workspace, model, lattice, point, vectorsWanted, null);
   }
 
-  RealisationContext(RealisationWorkspace workspace, Model model, Lattice lattice, PointSpec point, boolean vectorsWanted, RandomGenerator random) {
+  RealisationContext(
+      RealisationWorkspace workspace,
+      Model model,
+      Lattice lattice,
+      PointSpec point,
+      boolean vectorsWanted,
+      RandomGenerator random) {
     this.random = random;
     this.workspace = workspace;
     this.model = model;
@@ -81,12 +92,13 @@ public final class RealisationContext {
   }
 
   /**
-   * The Hamiltonian in CSR storage (both triangles, duplicates summed; {@link
-   * CsrHermitianMatrix}), assembled from {@link #terms()} on first use and cached for the
-   * realisation; no dense matrix is built. Read, not modified, by callers.
+   * The Hamiltonian in CSR storage (both triangles, duplicates summed; {@link CsrHermitianMatrix}),
+   * assembled from {@link #terms()} on first use and cached for the realisation; no dense matrix is
+   * built. Read, not modified, by callers.
    */
   public CsrHermitianMatrix sparseHamiltonian() {
-    CsrHermitianMatrix m = workspace.scratch(CsrHermitianMatrix.class, linalg -> new CsrHermitianMatrix());
+    CsrHermitianMatrix m =
+        workspace.scratch(CsrHermitianMatrix.class, linalg -> new CsrHermitianMatrix());
     if (!sparseBuilt) {
       m.assemble(workspace.builder);
       sparseBuilt = true;
@@ -95,8 +107,8 @@ public final class RealisationContext {
   }
 
   /**
-   * All eigenvalues in ascending order; the array may be longer than {@link #dimension()}, only
-   * the first N entries are meaningful. Read, not modified, by callers.
+   * All eigenvalues in ascending order; the array may be longer than {@link #dimension()}, only the
+   * first N entries are meaningful. Read, not modified, by callers.
    *
    * @throws ConvergenceFailure if the eigensolver did not converge
    */
@@ -111,9 +123,11 @@ public final class RealisationContext {
   private void decompose(boolean withVectors) {
     int n = dimension();
     double[] values = workspace.spectrumOfLength(n);
-    boolean ok = withVectors
-        ? workspace.eigenSolver.eigenpairs(denseHamiltonian(), values, 0, n - 1, workspace.vectors)
-        : workspace.eigenSolver.eigenvalues(denseHamiltonian(), values);
+    boolean ok =
+        withVectors
+            ? workspace.eigenSolver.eigenpairs(
+                denseHamiltonian(), values, 0, n - 1, workspace.vectors)
+            : workspace.eigenSolver.eigenvalues(denseHamiltonian(), values);
     if (!ok) {
       throw new ConvergenceFailure("Hermitian eigensolver did not converge (N = " + n + ")");
     }
@@ -168,9 +182,9 @@ public final class RealisationContext {
   /**
    * The realisation's random generator, positioned after the draws of all disorder terms of the
    * sample (and of any earlier observable that drew). Observables that generate further random
-   * structure themselves (the transfer-matrix {@code lyapunov}, which draws each slice's
-   * disorder as it goes) continue from it, so the realisation stays a function of its seed and
-   * the spec's observable order.
+   * structure themselves (the transfer-matrix {@code lyapunov}, which draws each slice's disorder
+   * as it goes) continue from it, so the realisation stays a function of its seed and the spec's
+   * observable order.
    *
    * @throws IllegalStateException if the context was made without a generator
    */
@@ -181,9 +195,7 @@ public final class RealisationContext {
     return random;
   }
 
-  /**
-   * Index of the first eigenvalue ≥ {@code energy} in {@link #spectrum()} (N if none).
-   */
+  /** Index of the first eigenvalue ≥ {@code energy} in {@link #spectrum()} (N if none). */
   public int firstIndexAtOrAbove(double energy) {
     double[] e = spectrum();
     int lo = 0;
@@ -200,11 +212,11 @@ public final class RealisationContext {
   }
 
   /**
-   * The eigenvectors whose eigenvalues lie in [lower, upper), as the columns of an N × n_w
-   * matrix: column j belongs to {@code spectrum()[firstIndexAtOrAbove(lower) + j]}. Only these
-   * vectors are computed (one extra partial eigen-decomposition), unless all eigenvectors were
-   * computed anyway for an observable that declared {@link Observable#needsOccupiedStates()}.
-   * Not cached: each call recomputes. Read, not modified, by callers; overwritten by the next call.
+   * The eigenvectors whose eigenvalues lie in [lower, upper), as the columns of an N × n_w matrix:
+   * column j belongs to {@code spectrum()[firstIndexAtOrAbove(lower) + j]}. Only these vectors are
+   * computed (one extra partial eigen-decomposition), unless all eigenvectors were computed anyway
+   * for an observable that declared {@link Observable#needsOccupiedStates()}. Not cached: each call
+   * recomputes. Read, not modified, by callers; overwritten by the next call.
    *
    * @throws ConvergenceFailure if the eigensolver did not converge
    */
@@ -221,15 +233,22 @@ public final class RealisationContext {
     if (vectorsWanted) {
       ZMatrixRMaj all = workspace.vectors;
       for (int i = 0; i < n; i++) {
-        System.arraycopy(all.data, 2 * (i * n + first), window.vectors.data, 2 * i * count, 2 * count);
+        System.arraycopy(
+            all.data, 2 * (i * n + first), window.vectors.data, 2 * i * count, 2 * count);
       }
       return window.vectors;
     }
     if (window.values.length < n) {
       window.values = new double[n];
     }
-    if (!workspace.eigenSolver.eigenpairs(denseHamiltonian(), window.values, first, end - 1, window.vectors)) {
-      throw new ConvergenceFailure("Hermitian eigensolver did not converge for the eigenvectors in [" + lower + ", " + upper + ")");
+    if (!workspace.eigenSolver.eigenpairs(
+        denseHamiltonian(), window.values, first, end - 1, window.vectors)) {
+      throw new ConvergenceFailure(
+          "Hermitian eigensolver did not converge for the eigenvectors in ["
+              + lower
+              + ", "
+              + upper
+              + ")");
     }
     return window.vectors;
   }

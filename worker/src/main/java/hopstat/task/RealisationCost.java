@@ -10,12 +10,12 @@ import hopstat.model.Model;
  * and, with eigenvectors, the vector matrices. Sparse path (every observable dense-free, e.g.
  * {@code chern-localizer}, {@code gap-inertia}): the slice sweep's two dense blocks of the largest
  * slice, n_slice = 2·N/L_x for the doubled localizer (N/L_x orbitals per x-slice of a d-dimensional
- * sample, doubled again as a margin for merged slices), plus the term list; the dense N×N matrix
- * is still counted when the per-realisation symmetry check builds it (N ≤ {@link
+ * sample, doubled again as a margin for merged slices), plus the term list; the dense N×N matrix is
+ * still counted when the per-realisation symmetry check builds it (N ≤ {@link
  * RealisationRunner#MAX_SYMMETRY_CHECK_DIMENSION} and the model declares symmetry operators).
- * Kernel-polynomial observables ({@code dos}, {@code kpm-chern-marker}) add no slice blocks: the CSR
- * matrix (20 bytes per stored entry, two entries per term with the same term-count margin) and ten
- * complex vectors of length N; when they are the only observables no slice block is counted.
+ * Kernel-polynomial observables ({@code dos}, {@code kpm-chern-marker}) add no slice blocks: the
+ * CSR matrix (20 bytes per stored entry, two entries per term with the same term-count margin) and
+ * ten complex vectors of length N; when they are the only observables no slice block is counted.
  *
  * @param matrixDimension N, the Hamiltonian's dimension
  * @param heapBytes Java heap held by one worker's workspace
@@ -23,7 +23,10 @@ import hopstat.model.Model;
  */
 public record RealisationCost(long matrixDimension, long heapBytes, long nativeBytes) {
 
-  /** Bytes per term of the Hamiltonian builder (two ints, two doubles) times a term-count margin per orbital. */
+  /**
+   * Bytes per term of the Hamiltonian builder (two ints, two doubles) times a term-count margin per
+   * orbital.
+   */
   private static final long TERM_BYTES_PER_ORBITAL = 24L * 16;
 
   /** CSR bytes per orbital: 20 bytes per entry, both triangles of the same 16-term margin. */
@@ -61,7 +64,9 @@ public record RealisationCost(long matrixDimension, long heapBytes, long nativeB
     if (kpm) {
       heap += (CSR_BYTES_PER_ORBITAL + KPM_VECTOR_BYTES_PER_ORBITAL) * n;
     }
-    boolean symmetryCheck = n <= RealisationRunner.MAX_SYMMETRY_CHECK_DIMENSION && !model.symmetryOperators().on(lattice).isEmpty();
+    boolean symmetryCheck =
+        n <= RealisationRunner.MAX_SYMMETRY_CHECK_DIMENSION
+            && !model.symmetryOperators().on(lattice).isEmpty();
     if (symmetryCheck) {
       heap += matrix;
     }

@@ -13,9 +13,9 @@ import java.util.Objects;
  * @param realisationIndex 0-based realisation
  * @param seed the realisation's seed
  * @param outcome DONE or FAILED
- * @param values quantity name → value in the model's units (energies in units of the model's
- *     energy scale, invariants dimensionless and unrounded); empty when FAILED. Order is the
- *     observables' order.
+ * @param values quantity name → value in the model's units (energies in units of the model's energy
+ *     scale, invariants dimensionless and unrounded); empty when FAILED. Order is the observables'
+ *     order.
  * @param failure reason when FAILED (exception type and message), else {@code null}
  * @param wallSeconds wall-clock seconds spent on this realisation by the worker
  */

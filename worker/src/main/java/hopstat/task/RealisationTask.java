@@ -12,7 +12,8 @@ import java.util.Objects;
  * @param seed the realisation's seed, from {@link SeedOps#realisationSeed}
  * @param point the grid point's resolved specification
  */
-public record RealisationTask(String taskId, int pointIndex, int realisationIndex, long seed, PointSpec point) {
+public record RealisationTask(
+    String taskId, int pointIndex, int realisationIndex, long seed, PointSpec point) {
 
   public RealisationTask {
     Objects.requireNonNull(taskId, "taskId");

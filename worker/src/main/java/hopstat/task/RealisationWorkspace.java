@@ -36,8 +36,8 @@ public final class RealisationWorkspace {
 
   /**
    * The per-thread scratch object of the given type, created on first use with {@code factory}.
-   * Observables keep their kernel workspaces here, so adding an observable needs no change to
-   * this class.
+   * Observables keep their kernel workspaces here, so adding an observable needs no change to this
+   * class.
    */
   public <T> T scratch(Class<T> type, java.util.function.Function<Linalg, T> factory) {
     Object o = extra.get(type);

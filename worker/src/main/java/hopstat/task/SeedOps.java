@@ -14,10 +14,10 @@ import java.util.random.RandomGeneratorFactory;
  *   seed = mix64(s1 ^ mix64((realisationIndex + 1) * GOLDEN))
  * </pre>
  *
- * where {@code mix64} is the SplitMix64 finaliser (Steele, Lea, Flood, OOPSLA 2014) and
- * {@code GOLDEN = 0x9E3779B97F4A7C15}. The seed feeds a JDK {@code L64X128MixRandom}, whose output
- * for a given seed is fixed by its specification (JEP 356). The stream therefore depends only on
- * (spec seed, grid-point index, realisation index): never on thread, host, order or resume.
+ * where {@code mix64} is the SplitMix64 finaliser (Steele, Lea, Flood, OOPSLA 2014) and {@code
+ * GOLDEN = 0x9E3779B97F4A7C15}. The seed feeds a JDK {@code L64X128MixRandom}, whose output for a
+ * given seed is fixed by its specification (JEP 356). The stream therefore depends only on (spec
+ * seed, grid-point index, realisation index): never on thread, host, order or resume.
  */
 public final class SeedOps {
 
@@ -25,7 +25,8 @@ public final class SeedOps {
   public static final String ALGORITHM = "L64X128MixRandom";
 
   private static final long GOLDEN = 0x9E3779B97F4A7C15L;
-  private static final RandomGeneratorFactory<RandomGenerator> FACTORY = RandomGeneratorFactory.of(ALGORITHM);
+  private static final RandomGeneratorFactory<RandomGenerator> FACTORY =
+      RandomGeneratorFactory.of(ALGORITHM);
 
   private SeedOps() {}
 

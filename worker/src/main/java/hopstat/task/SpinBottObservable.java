@@ -32,8 +32,13 @@ final class SpinBottObservable implements Observable {
   @Override
   public List<Quantity> quantities() {
     return List.of(
-        new Quantity("spin-bott", true, "1", "spin Bott index (B+ - B-)/2, unrounded; class AII: z2 = spin-bott mod 2"),
-        new Quantity("spin-bott-gap", false, "1", "min |eigenvalue| of P S_z P in the occupied space"));
+        new Quantity(
+            "spin-bott",
+            true,
+            "1",
+            "spin Bott index (B+ - B-)/2, unrounded; class AII: z2 = spin-bott mod 2"),
+        new Quantity(
+            "spin-bott-gap", false, "1", "min |eigenvalue| of P S_z P in the occupied space"));
   }
 
   @Override
@@ -42,9 +47,14 @@ final class SpinBottObservable implements Observable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
     if (model.dimension() != 2) {
-      return Optional.of("the spin Bott index is defined for d = 2 models; " + model.name() + " has d = " + model.dimension());
+      return Optional.of(
+          "the spin Bott index is defined for d = 2 models; "
+              + model.name()
+              + " has d = "
+              + model.dimension());
     }
     if (model.spinZ().isEmpty()) {
       return Optional.of("model " + model.name() + " declares no S_z operator");

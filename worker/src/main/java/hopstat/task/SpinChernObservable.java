@@ -37,7 +37,8 @@ final class SpinChernObservable implements Observable {
   public List<Quantity> quantities() {
     return List.of(
         new Quantity("chern-up", true, "1", "Bott index of the occupied spin-up states, unrounded"),
-        new Quantity("chern-down", true, "1", "Bott index of the occupied spin-down states, unrounded"),
+        new Quantity(
+            "chern-down", true, "1", "Bott index of the occupied spin-down states, unrounded"),
         new Quantity("spin-chern", true, "1", "(chern-up - chern-down)/2, unrounded"));
   }
 
@@ -47,30 +48,41 @@ final class SpinChernObservable implements Observable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
     if (model.dimension() != 2) {
-      return Optional.of("the spin Chern number is defined here for d = 2 models; " + model.name() + " has d = " + model.dimension());
+      return Optional.of(
+          "the spin Chern number is defined here for d = 2 models; "
+              + model.name()
+              + " has d = "
+              + model.dimension());
     }
     if (model.spinZ().isEmpty()) {
       return Optional.of("model " + model.name() + " declares no S_z operator");
     }
     if (boundary != Boundary.PERIODIC) {
-      return Optional.of("the spin Chern number (via Bott indices) needs \"boundary\": \"periodic\"");
+      return Optional.of(
+          "the spin Chern number (via Bott indices) needs \"boundary\": \"periodic\"");
     }
     return Optional.empty();
   }
 
   @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
-    SpinZOperator spin = context.model().spinZ().orElseThrow(() -> new IllegalStateException("no S_z operator"));
+    SpinZOperator spin =
+        context.model().spinZ().orElseThrow(() -> new IllegalStateException("no S_z operator"));
     double mixing = SpinBottKernel.relativeSpinMixing(context.denseHamiltonian(), spin);
     if (mixing > SymmetryCheckKernel.TOLERANCE) {
-      throw new IllegalStateException("the Hamiltonian does not conserve S_z (relative spin mixing " + mixing + "); use z2");
+      throw new IllegalStateException(
+          "the Hamiltonian does not conserve S_z (relative spin mixing " + mixing + "); use z2");
     }
-    SpinBottWorkspace ws = context.workspace().scratch(SpinBottWorkspace.class, SpinBottWorkspace::new);
-    SpinBottResult r = SpinBottKernel.compute(context.lattice(), context.occupiedStates(), spin, ws);
+    SpinBottWorkspace ws =
+        context.workspace().scratch(SpinBottWorkspace.class, SpinBottWorkspace::new);
+    SpinBottResult r =
+        SpinBottKernel.compute(context.lattice(), context.occupiedStates(), spin, ws);
     if (!r.converged()) {
-      throw new ConvergenceFailure("an eigen-solver did not converge in the spin-resolved Bott index");
+      throw new ConvergenceFailure(
+          "an eigen-solver did not converge in the spin-resolved Bott index");
     }
     out.put("chern-up", r.bottUp());
     out.put("chern-down", r.bottDown());

@@ -43,7 +43,9 @@ public final class SymmetryCheckOps {
     boolean keepC = true;
     boolean keepS = true;
     for (DisorderTerm term : disorder) {
-      DisorderKind kind = DisorderCatalog.find(term.type()).orElseThrow(() -> new IllegalStateException("unknown disorder " + term.type()));
+      DisorderKind kind =
+          DisorderCatalog.find(term.type())
+              .orElseThrow(() -> new IllegalStateException("unknown disorder " + term.type()));
       Set<Symmetry> kept = kind.keptSymmetries(model);
       keepT &= kept.contains(Symmetry.TIME_REVERSAL);
       keepC &= kept.contains(Symmetry.PARTICLE_HOLE);
@@ -57,7 +59,8 @@ public final class SymmetryCheckOps {
    *
    * @param point read
    * @param seed the realisation seed (e.g. that of realisation 0)
-   * @param tolerance threshold on the relative violation, e.g. {@link SymmetryCheckKernel#TOLERANCE}
+   * @param tolerance threshold on the relative violation, e.g. {@link
+   *     SymmetryCheckKernel#TOLERANCE}
    */
   public static SymmetryCheckReport check(PointSpec point, long seed, double tolerance) {
     Model model = point.resolveModel();
@@ -67,14 +70,18 @@ public final class SymmetryCheckOps {
     model.addClean(point.parameters(), lattice, builder);
     RandomGenerator random = SeedOps.generator(seed);
     for (DisorderTerm term : point.disorder()) {
-      DisorderKind kind = DisorderCatalog.find(term.type()).orElseThrow(() -> new IllegalStateException("unknown disorder " + term.type()));
+      DisorderKind kind =
+          DisorderCatalog.find(term.type())
+              .orElseThrow(() -> new IllegalStateException("unknown disorder " + term.type()));
       kind.apply(term, model, point.parameters(), lattice, random, builder);
     }
     ZMatrixRMaj h = new ZMatrixRMaj(1, 1);
     SymmetryClass effective = effectiveClass(model, point.disorder());
     // No declared operator: nothing reads the matrix. Above the runner's dense limit the N x N
-    // matrix would not fit (e.g. N = 80 000 for dense-free localizer runs): not checked there either.
-    if (model.symmetryOperators().on(lattice).isEmpty() || lattice.orbitals() > RealisationRunner.MAX_SYMMETRY_CHECK_DIMENSION) {
+    // matrix would not fit (e.g. N = 80 000 for dense-free localizer runs): not checked there
+    // either.
+    if (model.symmetryOperators().on(lattice).isEmpty()
+        || lattice.orbitals() > RealisationRunner.MAX_SYMMETRY_CHECK_DIMENSION) {
       return checkClaimed(model, lattice, h, effective, tolerance, false);
     }
     builder.toDense(h);
@@ -86,17 +93,31 @@ public final class SymmetryCheckOps {
    *
    * @param hamiltonian read, not modified
    */
-  public static SymmetryCheckReport checkClaimed(Model model, Lattice lattice, ZMatrixRMaj hamiltonian, SymmetryClass claimed, double tolerance) {
+  public static SymmetryCheckReport checkClaimed(
+      Model model,
+      Lattice lattice,
+      ZMatrixRMaj hamiltonian,
+      SymmetryClass claimed,
+      double tolerance) {
     return checkClaimed(model, lattice, hamiltonian, claimed, tolerance, true);
   }
 
-  /** As above; with {@code withMatrix} false the declared operators are listed but not applied (no dense matrix). */
-  private static SymmetryCheckReport checkClaimed(Model model, Lattice lattice, ZMatrixRMaj hamiltonian, SymmetryClass claimed, double tolerance,
+  /**
+   * As above; with {@code withMatrix} false the declared operators are listed but not applied (no
+   * dense matrix).
+   */
+  private static SymmetryCheckReport checkClaimed(
+      Model model,
+      Lattice lattice,
+      ZMatrixRMaj hamiltonian,
+      SymmetryClass claimed,
+      double tolerance,
       boolean withMatrix) {
     Map<Symmetry, SymmetryOperator> declared = new EnumMap<>(Symmetry.class);
     for (SymmetryOperator op : model.symmetryOperators().on(lattice)) {
       if (declared.put(op.symmetry(), op) != null) {
-        throw new IllegalStateException(model.name() + " declares two operators for " + op.symmetry());
+        throw new IllegalStateException(
+            model.name() + " declares two operators for " + op.symmetry());
       }
     }
     List<SymmetryCheckResult> checks = new ArrayList<>();

@@ -14,7 +14,8 @@ import java.util.Objects;
  * @param checks one result per claimed symmetry whose operator the model declares
  * @param undeclared claimed symmetries for which the model declares no operator (not checked)
  */
-public record SymmetryCheckReport(SymmetryClass effectiveClass, List<SymmetryCheckResult> checks, List<Symmetry> undeclared) {
+public record SymmetryCheckReport(
+    SymmetryClass effectiveClass, List<SymmetryCheckResult> checks, List<Symmetry> undeclared) {
   public SymmetryCheckReport {
     Objects.requireNonNull(effectiveClass, "effectiveClass");
     checks = List.copyOf(checks);

@@ -17,7 +17,13 @@ final class TenfoldOps {
     if (group.equals("Z") || group.equals("2Z")) {
       return Optional.empty();
     }
-    return Optional.of(estimator + " measures a Chern number, but class " + effectiveClass + " in d = 2 has strong invariant group "
-        + group + " (periodic table: Chern numbers in classes A, D, C)" + (group.equals("Z2") ? "; use z2" : ""));
+    return Optional.of(
+        estimator
+            + " measures a Chern number, but class "
+            + effectiveClass
+            + " in d = 2 has strong invariant group "
+            + group
+            + " (periodic table: Chern numbers in classes A, D, C)"
+            + (group.equals("Z2") ? "; use z2" : ""));
   }
 }

@@ -33,7 +33,9 @@ final class ThreeRegionChernObservable implements Observable {
 
   @Override
   public List<Quantity> quantities() {
-    return List.of(new Quantity("chern-3region", true, "1", "minus Kitaev's three-region nu (= C), unrounded"));
+    return List.of(
+        new Quantity(
+            "chern-3region", true, "1", "minus Kitaev's three-region nu (= C), unrounded"));
   }
 
   @Override
@@ -42,11 +44,17 @@ final class ThreeRegionChernObservable implements Observable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
     if (model.dimension() != 2) {
-      return Optional.of("the three-region formula is defined for d = 2 models; " + model.name() + " has d = " + model.dimension());
+      return Optional.of(
+          "the three-region formula is defined for d = 2 models; "
+              + model.name()
+              + " has d = "
+              + model.dimension());
     }
-    Optional<String> noChern = TenfoldOps.whyNoChernNumber("the three-region formula", effectiveClass);
+    Optional<String> noChern =
+        TenfoldOps.whyNoChernNumber("the three-region formula", effectiveClass);
     if (noChern.isPresent()) {
       return noChern;
     }
@@ -55,12 +63,17 @@ final class ThreeRegionChernObservable implements Observable {
 
   @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
-    ThreeRegionChernWorkspace ws = context.workspace().scratch(ThreeRegionChernWorkspace.class, ThreeRegionChernWorkspace::new);
+    ThreeRegionChernWorkspace ws =
+        context
+            .workspace()
+            .scratch(ThreeRegionChernWorkspace.class, ThreeRegionChernWorkspace::new);
     double[] extent = context.lattice().extent();
     double radius = RADIUS_FRACTION * Math.min(extent[0], extent[1]);
-    ThreeRegionChernResult r = ThreeRegionChernKernel.compute(context.lattice(), context.occupiedStates(), radius, ws);
+    ThreeRegionChernResult r =
+        ThreeRegionChernKernel.compute(context.lattice(), context.occupiedStates(), radius, ws);
     if (r.sitesPerSector() == 0) {
-      throw new IllegalStateException("a sector of the three-region disc holds no site (L too small)");
+      throw new IllegalStateException(
+          "a sector of the three-region disc holds no site (L too small)");
     }
     out.put("chern-3region", r.chern());
   }

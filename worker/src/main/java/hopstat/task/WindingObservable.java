@@ -31,7 +31,12 @@ final class WindingObservable implements Observable {
 
   @Override
   public List<Quantity> quantities() {
-    return List.of(new Quantity("winding", true, "1", "real-space winding number, unrounded (ssh: 1 iff |v| < |w| clean)"));
+    return List.of(
+        new Quantity(
+            "winding",
+            true,
+            "1",
+            "real-space winding number, unrounded (ssh: 1 iff |v| < |w| clean)"));
   }
 
   @Override
@@ -40,16 +45,23 @@ final class WindingObservable implements Observable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
-    boolean sublatticeChain = model instanceof ChiralChain || (model instanceof CustomModel c && c.isSublatticeChain());
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
+    boolean sublatticeChain =
+        model instanceof ChiralChain || (model instanceof CustomModel c && c.isSublatticeChain());
     if (!sublatticeChain || model.dimension() != 1) {
-      return Optional.of("the winding is implemented for one-dimensional chiral chains (ssh, or a custom chain with two orbitals and S = diag(1, -1)); " + model.name() + " is not one");
+      return Optional.of(
+          "the winding is implemented for one-dimensional chiral chains (ssh, or a custom chain with two orbitals and S = diag(1, -1)); "
+              + model.name()
+              + " is not one");
     }
     if (!effectiveClass.hasChiral()) {
-      return Optional.of("the winding needs chiral symmetry; the disorder leaves class " + effectiveClass);
+      return Optional.of(
+          "the winding needs chiral symmetry; the disorder leaves class " + effectiveClass);
     }
     if (boundary != Boundary.OPEN) {
-      return Optional.of("the real-space winding uses the position operator of the open chain: needs \"boundary\": \"open\"");
+      return Optional.of(
+          "the real-space winding uses the position operator of the open chain: needs \"boundary\": \"open\"");
     }
     return Optional.empty();
   }
@@ -57,10 +69,14 @@ final class WindingObservable implements Observable {
   @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
     if (context.fermiEnergy() != 0.0) {
-      throw new IllegalStateException("the winding is defined at the chiral point: fermiEnergy must be 0, got " + context.fermiEnergy());
+      throw new IllegalStateException(
+          "the winding is defined at the chiral point: fermiEnergy must be 0, got "
+              + context.fermiEnergy());
     }
-    WindingWorkspace ws = context.workspace().scratch(WindingWorkspace.class, WindingWorkspace::new);
-    WindingResult r = RealSpaceWindingKernel.compute(context.lattice(), context.occupiedStates(), ws);
+    WindingWorkspace ws =
+        context.workspace().scratch(WindingWorkspace.class, WindingWorkspace::new);
+    WindingResult r =
+        RealSpaceWindingKernel.compute(context.lattice(), context.occupiedStates(), ws);
     out.put("winding", r.winding());
   }
 }

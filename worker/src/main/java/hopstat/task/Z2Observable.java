@@ -16,9 +16,9 @@ import java.util.Optional;
  * realisations is the fraction of non-trivial samples. Dispatches on dimension and effective class:
  * one-dimensional BdG chains with C² = +1 (classes D, BDI; {@link MajoranaForm} models): the
  * Majorana number (Kitaev, Phys.-Usp. 44, 131 (2001)); class DIII in d = 1: {@link Z2ClassDiii1d}
- * (checked before the Majorana number, which is always trivial with Kramers pairs); class AII in
- * d = 2: {@link Z2ClassAii2d}.
- * Eigenvectors are computed only on the AII path (the context computes them on demand).
+ * (checked before the Majorana number, which is always trivial with Kramers pairs); class AII in d
+ * = 2: {@link Z2ClassAii2d}. Eigenvectors are computed only on the AII path (the context computes
+ * them on demand).
  */
 final class Z2Observable implements Observable {
 
@@ -34,14 +34,21 @@ final class Z2Observable implements Observable {
     return "Z2 invariant, 0 trivial / 1 non-trivial (mean = fraction non-trivial). d = 1 BdG chains (classes D, BDI):"
         + " Majorana number Q = sign Pf(A_periodic) sign Pf(A_antiperiodic) of the closed ring (Kitaev, Phys.-Usp. 44, 131"
         + " (2001)), z2 = 1 iff Q = -1; needs boundary periodic and L >= 3. ising-chain: z2 = 1 is the ordered phase."
-        + " A zero Pfaffian (zero mode under one closure) fails the realisation. " + Z2ClassDiii1d.description() + " "
+        + " A zero Pfaffian (zero mode under one closure) fails the realisation. "
+        + Z2ClassDiii1d.description()
+        + " "
         + Z2ClassAii2d.description();
   }
 
   @Override
   public List<Quantity> quantities() {
-    return List.of(new Quantity("z2", true, "1", "Z2 invariant: 0 trivial, 1 non-trivial (d = 1 BdG chains: Majorana number Q = -1; class DIII d = 1: Kramers pairs of"
-        + " Majorana end modes; class AII d = 2: spin Chern number mod 2)"));
+    return List.of(
+        new Quantity(
+            "z2",
+            true,
+            "1",
+            "Z2 invariant: 0 trivial, 1 non-trivial (d = 1 BdG chains: Majorana number Q = -1; class DIII d = 1: Kramers pairs of"
+                + " Majorana end modes; class AII d = 2: spin Chern number mod 2)"));
   }
 
   @Override
@@ -50,7 +57,8 @@ final class Z2Observable implements Observable {
   }
 
   @Override
-  public Optional<String> whyNotApplicable(Model model, Boundary boundary, SymmetryClass effectiveClass) {
+  public Optional<String> whyNotApplicable(
+      Model model, Boundary boundary, SymmetryClass effectiveClass) {
     if (effectiveClass == SymmetryClass.AII && model.dimension() == 2) {
       return Z2ClassAii2d.whyNotApplicable(model, boundary);
     }
@@ -58,16 +66,20 @@ final class Z2Observable implements Observable {
       return Z2ClassDiii1d.whyNotApplicable(model, boundary);
     }
     if (!(model instanceof MajoranaForm) || model.dimension() != 1) {
-      return Optional.of("z2 is implemented for one-dimensional BdG chains in Majorana form (pwave-wire, ising-chain, diii-wire), class DIII"
-          + " chains and class AII in d = 2; "
-          + model.name() + " is not one");
+      return Optional.of(
+          "z2 is implemented for one-dimensional BdG chains in Majorana form (pwave-wire, ising-chain, diii-wire), class DIII"
+              + " chains and class AII in d = 2; "
+              + model.name()
+              + " is not one");
     }
     if (effectiveClass.particleHoleSquare() != 1) {
-      return Optional.of("the Majorana number needs particle-hole symmetry with C^2 = +1 (class D or BDI); the disorder leaves class "
-          + effectiveClass);
+      return Optional.of(
+          "the Majorana number needs particle-hole symmetry with C^2 = +1 (class D or BDI); the disorder leaves class "
+              + effectiveClass);
     }
     if (boundary != Boundary.PERIODIC) {
-      return Optional.of("the Majorana number compares periodic and antiperiodic closures: z2 needs \"boundary\": \"periodic\"");
+      return Optional.of(
+          "the Majorana number compares periodic and antiperiodic closures: z2 needs \"boundary\": \"periodic\"");
     }
     return Optional.empty();
   }
@@ -75,21 +87,29 @@ final class Z2Observable implements Observable {
   @Override
   public void compute(RealisationContext context, Map<String, Double> out) {
     Model model = context.model();
-    if (model.dimension() == 2 && SymmetryCheckOps.effectiveClass(model, context.point().disorder()) == SymmetryClass.AII) {
+    if (model.dimension() == 2
+        && SymmetryCheckOps.effectiveClass(model, context.point().disorder())
+            == SymmetryClass.AII) {
       Z2ClassAii2d.compute(context, out);
       return;
     }
-    if (model.dimension() == 1 && SymmetryCheckOps.effectiveClass(model, context.point().disorder()) == SymmetryClass.DIII) {
+    if (model.dimension() == 1
+        && SymmetryCheckOps.effectiveClass(model, context.point().disorder())
+            == SymmetryClass.DIII) {
       Z2ClassDiii1d.compute(context, out);
       return;
     }
     if (context.lattice().linearSize() < 3) {
       throw new IllegalStateException("z2 needs L >= 3 to tell the closing bond apart");
     }
-    MajoranaWorkspace ws = context.workspace().scratch(MajoranaWorkspace.class, linalg -> new MajoranaWorkspace());
-    MajoranaNumberResult r = MajoranaKernel.majoranaNumber((MajoranaForm) context.model(), context.lattice(), context.terms(), ws);
+    MajoranaWorkspace ws =
+        context.workspace().scratch(MajoranaWorkspace.class, linalg -> new MajoranaWorkspace());
+    MajoranaNumberResult r =
+        MajoranaKernel.majoranaNumber(
+            (MajoranaForm) context.model(), context.lattice(), context.terms(), ws);
     if (r.q() == 0) {
-      throw new IllegalStateException("a Pfaffian vanishes (zero mode under periodic or antiperiodic closure): Majorana number undefined");
+      throw new IllegalStateException(
+          "a Pfaffian vanishes (zero mode under periodic or antiperiodic closure): Majorana number undefined");
     }
     out.put("z2", r.q() == -1 ? 1.0 : 0.0);
   }

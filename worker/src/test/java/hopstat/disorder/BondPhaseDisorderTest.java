@@ -48,15 +48,21 @@ class BondPhaseDisorderTest {
 
   /**
    * Documented convention (direct check): replaying the generator, H[A_j][B_j] = v e^{iθ_j} and
-   * H[A_{j+1}][B_j] = w e^{iθ'_j}, θ = W(u − 1/2), drawn cell by cell, intracell first; the
-   * open chain has L − 1 intercell bonds, so 2L − 1 draws.
+   * H[A_{j+1}][B_j] = w e^{iθ'_j}, θ = W(u − 1/2), drawn cell by cell, intracell first; the open
+   * chain has L − 1 intercell bonds, so 2L − 1 draws.
    */
   @Test
   void phasesFollowTheDocumentedConventionAndDrawOrder() {
     double width = 2.5;
     int size = 7;
-    TestRealisation realisation = aRealisation("ssh").with("v", 0.6).with("w", -1.1).size(size).boundary(Boundary.OPEN).seed(11)
-        .disorder("bond-phase", width);
+    TestRealisation realisation =
+        aRealisation("ssh")
+            .with("v", 0.6)
+            .with("w", -1.1)
+            .size(size)
+            .boundary(Boundary.OPEN)
+            .seed(11)
+            .disorder("bond-phase", width);
     ZMatrixRMaj h = dense(realisation.build());
     RandomGenerator replay = SeedOps.generator(11);
     for (int j = 0; j < size; j++) {
@@ -80,16 +86,30 @@ class BondPhaseDisorderTest {
   @Test
   void phaseAfterBondBoxKeepsTheModulusOfEveryHopping() {
     Map<String, String> inter = Map.of("bonds", "intercell");
-    HamiltonianBuilder real = aRealisation("ssh").with("v", 0.8).size(9).boundary(Boundary.OPEN).seed(5)
-        .disorder("bond-box", 1.3).build();
-    HamiltonianBuilder complex = aRealisation("ssh").with("v", 0.8).size(9).boundary(Boundary.OPEN).seed(5)
-        .disorder("bond-box", 1.3).disorder("bond-phase", TWO_PI, inter).build();
+    HamiltonianBuilder real =
+        aRealisation("ssh")
+            .with("v", 0.8)
+            .size(9)
+            .boundary(Boundary.OPEN)
+            .seed(5)
+            .disorder("bond-box", 1.3)
+            .build();
+    HamiltonianBuilder complex =
+        aRealisation("ssh")
+            .with("v", 0.8)
+            .size(9)
+            .boundary(Boundary.OPEN)
+            .seed(5)
+            .disorder("bond-box", 1.3)
+            .disorder("bond-phase", TWO_PI, inter)
+            .build();
     ZMatrixRMaj a = dense(real);
     ZMatrixRMaj b = dense(complex);
     double largestIm = 0;
     for (int i = 0; i < 18; i++) {
       for (int j = 0; j < 18; j++) {
-        assertThat(Math.hypot(re(b, i, j), im(b, i, j))).isCloseTo(Math.hypot(re(a, i, j), im(a, i, j)), within(1e-14));
+        assertThat(Math.hypot(re(b, i, j), im(b, i, j)))
+            .isCloseTo(Math.hypot(re(a, i, j), im(a, i, j)), within(1e-14));
         largestIm = Math.max(largestIm, Math.abs(im(b, i, j)));
       }
       if (i % 2 == 0) {
@@ -100,8 +120,8 @@ class BondPhaseDisorderTest {
   }
 
   /**
-   * Periodic ring (derived): every set of bond phases is gauge-equivalent to a uniform flux Φ =
-   * Σ_j (θ'_j − θ_j) through the ring, so the spectrum is ±|v + w e^{i(2πm + Φ)/L}|, m = 0..L−1
+   * Periodic ring (derived): every set of bond phases is gauge-equivalent to a uniform flux Φ = Σ_j
+   * (θ'_j − θ_j) through the ring, so the spectrum is ±|v + w e^{i(2πm + Φ)/L}|, m = 0..L−1
    * (Bloch's theorem with a twisted boundary condition). A dropped imaginary part or a missed wrap
    * bond would change it; the zero-flux spectrum is checked to differ, so the test can fail.
    */
@@ -111,8 +131,16 @@ class BondPhaseDisorderTest {
     double v = 0.7;
     double w = 1.2;
     long seed = 23;
-    ZMatrixRMaj h = dense(aRealisation("ssh").with("v", v).with("w", w).size(size).boundary(Boundary.PERIODIC).seed(seed)
-        .disorder("bond-phase", TWO_PI).build());
+    ZMatrixRMaj h =
+        dense(
+            aRealisation("ssh")
+                .with("v", v)
+                .with("w", w)
+                .size(size)
+                .boundary(Boundary.PERIODIC)
+                .seed(seed)
+                .disorder("bond-phase", TWO_PI)
+                .build());
     RandomGenerator replay = SeedOps.generator(seed);
     double flux = 0;
     for (int j = 0; j < size; j++) {
@@ -155,26 +183,52 @@ class BondPhaseDisorderTest {
   @Test
   void keepsOnlyTheChiralSymmetryAndTheCheckCatchesAClaimedTimeReversal() {
     Model ssh = ModelCatalog.find("ssh").orElseThrow();
-    List<DisorderTerm> disorder = List.of(new DisorderTerm("bond-box", 0.5, Map.of()), new DisorderTerm("bond-phase", TWO_PI, Map.of()));
+    List<DisorderTerm> disorder =
+        List.of(
+            new DisorderTerm("bond-box", 0.5, Map.of()),
+            new DisorderTerm("bond-phase", TWO_PI, Map.of()));
     assertThat(SymmetryCheckOps.effectiveClass(ssh, disorder)).isEqualTo(SymmetryClass.AIII);
     assertThat(SymmetryClass.BDI.restrictTo(false, false, true)).isEqualTo(SymmetryClass.AIII);
 
-    TestRealisation realisation = aRealisation("ssh").with("v", 0.5).size(10).boundary(Boundary.OPEN).seed(3)
-        .disorder("bond-box", 0.5).disorder("bond-phase", TWO_PI);
+    TestRealisation realisation =
+        aRealisation("ssh")
+            .with("v", 0.5)
+            .size(10)
+            .boundary(Boundary.OPEN)
+            .seed(3)
+            .disorder("bond-box", 0.5)
+            .disorder("bond-phase", TWO_PI);
     Lattice lattice = realisation.lattice();
     ZMatrixRMaj h = dense(realisation.build());
-    SymmetryCheckReport asAiii = SymmetryCheckOps.checkClaimed(ssh, lattice, h, SymmetryClass.AIII, SymmetryCheckKernel.TOLERANCE);
-    assertThat(asAiii.checks()).extracting(SymmetryCheckResult::symmetry).containsExactly(Symmetry.CHIRAL);
+    SymmetryCheckReport asAiii =
+        SymmetryCheckOps.checkClaimed(
+            ssh, lattice, h, SymmetryClass.AIII, SymmetryCheckKernel.TOLERANCE);
+    assertThat(asAiii.checks())
+        .extracting(SymmetryCheckResult::symmetry)
+        .containsExactly(Symmetry.CHIRAL);
     assertThat(asAiii.violations()).isEmpty();
 
-    SymmetryCheckReport asBdi = SymmetryCheckOps.checkClaimed(ssh, lattice, h, SymmetryClass.BDI, SymmetryCheckKernel.TOLERANCE);
-    assertThat(asBdi.violations()).extracting(SymmetryCheckResult::symmetry)
+    SymmetryCheckReport asBdi =
+        SymmetryCheckOps.checkClaimed(
+            ssh, lattice, h, SymmetryClass.BDI, SymmetryCheckKernel.TOLERANCE);
+    assertThat(asBdi.violations())
+        .extracting(SymmetryCheckResult::symmetry)
         .containsExactlyInAnyOrder(Symmetry.TIME_REVERSAL, Symmetry.PARTICLE_HOLE);
     assertThat(asBdi.violations().get(0).relativeViolation()).isGreaterThan(0.1);
 
     // The real chain (W = 0 phases) passes all three declared BDI operators.
-    ZMatrixRMaj real = dense(aRealisation("ssh").with("v", 0.5).size(10).boundary(Boundary.OPEN).seed(3).disorder("bond-box", 0.5).build());
-    SymmetryCheckReport realBdi = SymmetryCheckOps.checkClaimed(ssh, lattice, real, SymmetryClass.BDI, SymmetryCheckKernel.TOLERANCE);
+    ZMatrixRMaj real =
+        dense(
+            aRealisation("ssh")
+                .with("v", 0.5)
+                .size(10)
+                .boundary(Boundary.OPEN)
+                .seed(3)
+                .disorder("bond-box", 0.5)
+                .build());
+    SymmetryCheckReport realBdi =
+        SymmetryCheckOps.checkClaimed(
+            ssh, lattice, real, SymmetryClass.BDI, SymmetryCheckKernel.TOLERANCE);
     assertThat(realBdi.checks()).hasSize(3);
     assertThat(realBdi.violations()).isEmpty();
   }
@@ -183,7 +237,8 @@ class BondPhaseDisorderTest {
   void applicableToChiralChainsOnly() {
     DisorderKind kind = DisorderCatalog.find("bond-phase").orElseThrow();
     assertThat(kind.whyNotApplicable(ModelCatalog.find("ssh").orElseThrow())).isEmpty();
-    assertThat(kind.whyNotApplicable(ModelCatalog.find("qwz").orElseThrow())).hasValueSatisfying(r -> assertThat(r).contains("chiral chain"));
+    assertThat(kind.whyNotApplicable(ModelCatalog.find("qwz").orElseThrow()))
+        .hasValueSatisfying(r -> assertThat(r).contains("chiral chain"));
     assertThat(kind.options()).containsOnlyKeys("bonds");
   }
 }

@@ -17,13 +17,18 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
-/** {@link ChiralLocalizerKernel}: closed forms (derived) and the dense signature of the same matrix. */
+/**
+ * {@link ChiralLocalizerKernel}: closed forms (derived) and the dense signature of the same matrix.
+ */
 class ChiralLocalizerKernelTest {
 
   private static final Linalg LINALG = LinalgFactory.create(LinalgKind.JAVA);
 
-  /** Chain of L cells, intracell hopping v_j (complex allowed), intercell w_j; orbital 0 = A, 1 = B. */
-  private static HamiltonianBuilder chain(Lattice lattice, double[] vRe, double[] vIm, double[] wRe, double[] wIm) {
+  /**
+   * Chain of L cells, intracell hopping v_j (complex allowed), intercell w_j; orbital 0 = A, 1 = B.
+   */
+  private static HamiltonianBuilder chain(
+      Lattice lattice, double[] vRe, double[] vIm, double[] wRe, double[] wIm) {
     HamiltonianBuilder h = new HamiltonianBuilder();
     int cells = lattice.sites();
     h.reset(2 * cells);
@@ -44,9 +49,9 @@ class ChiralLocalizerKernelTest {
 
   /**
    * Derived (class Javadoc): v = 0 leaves intercell dimers (signature 0 each while κ &lt; 2|w| for
-   * even L) and the ends A_0 (κ(x_0 − x0) &lt; 0) and B_{L−1} (−κ(x_{L−1} − x0) &lt; 0), so −½ sig = 1;
-   * w = 0 leaves only intracell dimers, index 0. Here |w| = |−1.3 + 0.4i| ≈ 1.36, 2|w| ≈ 2.72: at
-   * κ = 3 the dimer straddling the centre turns positive definite and the index drops to 0.
+   * even L) and the ends A_0 (κ(x_0 − x0) &lt; 0) and B_{L−1} (−κ(x_{L−1} − x0) &lt; 0), so −½ sig
+   * = 1; w = 0 leaves only intracell dimers, index 0. Here |w| = |−1.3 + 0.4i| ≈ 1.36, 2|w| ≈ 2.72:
+   * at κ = 3 the dimer straddling the centre turns positive definite and the index drops to 0.
    */
   @ParameterizedTest(name = "L={0} kappa={1}")
   @CsvSource({"4, 0.01, 1", "10, 0.3, 1", "16, 2.5, 1", "16, 3.0, 0"})
@@ -54,19 +59,38 @@ class ChiralLocalizerKernelTest {
     Lattice lattice = ChainLattices.chain(cells, 2, Boundary.OPEN);
     ChiralLocalizerWorkspace ws = new ChiralLocalizerWorkspace(LINALG);
     double x0 = SpectralLocalizerKernel.centre(lattice, 0);
-    HamiltonianBuilder topological = chain(lattice, constant(cells, 0), constant(cells, 0), constant(cells, -1.3), constant(cells, 0.4));
-    HamiltonianBuilder trivial = chain(lattice, constant(cells, 0.8), constant(cells, -0.2), constant(cells, 0), constant(cells, 0));
+    HamiltonianBuilder topological =
+        chain(
+            lattice,
+            constant(cells, 0),
+            constant(cells, 0),
+            constant(cells, -1.3),
+            constant(cells, 0.4));
+    HamiltonianBuilder trivial =
+        chain(
+            lattice,
+            constant(cells, 0.8),
+            constant(cells, -0.2),
+            constant(cells, 0),
+            constant(cells, 0));
     assertThat(ChiralLocalizerKernel.index(topological, lattice, kappa, x0, ws)).isEqualTo(index);
     assertThat(ChiralLocalizerKernel.index(trivial, lattice, kappa, x0, ws)).isEqualTo(0);
   }
 
-  /** Odd L, v = 0 exactly: a site sits at x0 and the cell sweep meets a zero pivot (documented limitation). */
+  /**
+   * Odd L, v = 0 exactly: a site sits at x0 and the cell sweep meets a zero pivot (documented
+   * limitation).
+   */
   @Test
   void exactZeroPivotIsReportedAsUndefined() {
     Lattice lattice = ChainLattices.chain(9, 2, Boundary.OPEN);
-    HamiltonianBuilder h = chain(lattice, constant(9, 0), constant(9, 0), constant(9, 1), constant(9, 0));
+    HamiltonianBuilder h =
+        chain(lattice, constant(9, 0), constant(9, 0), constant(9, 1), constant(9, 0));
     ChiralLocalizerWorkspace ws = new ChiralLocalizerWorkspace(LINALG);
-    assertThat(ChiralLocalizerKernel.index(h, lattice, 0.3, SpectralLocalizerKernel.centre(lattice, 0), ws)).isEqualTo(Integer.MIN_VALUE);
+    assertThat(
+            ChiralLocalizerKernel.index(
+                h, lattice, 0.3, SpectralLocalizerKernel.centre(lattice, 0), ws))
+        .isEqualTo(Integer.MIN_VALUE);
   }
 
   /**
@@ -110,7 +134,9 @@ class ChiralLocalizerKernelTest {
         sig += e > 0 ? 1 : -1;
       }
       int expected = -sig / 2;
-      assertThat(ChiralLocalizerKernel.index(h, lattice, kappa, x0, ws)).as("trial %d", trial).isEqualTo(expected);
+      assertThat(ChiralLocalizerKernel.index(h, lattice, kappa, x0, ws))
+          .as("trial %d", trial)
+          .isEqualTo(expected);
       nonzero += expected != 0 ? 1 : 0;
     }
     // the draw must exercise nonzero indices too (w-dominated chains occur with scale < 1)
@@ -120,9 +146,11 @@ class ChiralLocalizerKernelTest {
   @Test
   void rejectsTermsInsideOneSublattice() {
     Lattice lattice = ChainLattices.chain(4, 2, Boundary.OPEN);
-    HamiltonianBuilder h = chain(lattice, constant(4, 0.5), constant(4, 0), constant(4, 1), constant(4, 0));
+    HamiltonianBuilder h =
+        chain(lattice, constant(4, 0.5), constant(4, 0), constant(4, 1), constant(4, 0));
     h.addOnsite(2, 0.1);
     ChiralLocalizerWorkspace ws = new ChiralLocalizerWorkspace(LINALG);
-    assertThatThrownBy(() -> ChiralLocalizerKernel.index(h, lattice, 0.1, 1.5, ws)).isInstanceOf(IllegalArgumentException.class);
+    assertThatThrownBy(() -> ChiralLocalizerKernel.index(h, lattice, 0.1, 1.5, ws))
+        .isInstanceOf(IllegalArgumentException.class);
   }
 }

@@ -8,8 +8,8 @@ import hopstat.lattice.HamiltonianBuilder;
 import hopstat.lattice.Lattice;
 import hopstat.model.DiiiWireModel;
 import hopstat.model.MajoranaForm;
-import hopstat.model.ParameterValues;
 import hopstat.model.PWaveWireModel;
+import hopstat.model.ParameterValues;
 import hopstat.model.Symmetry;
 import hopstat.model.SymmetryOperator;
 import hopstat.task.SeedOps;
@@ -26,8 +26,10 @@ class DiiiZ2KernelTest {
   private DiiiZ2Result z2(TestRealisation r) {
     Lattice lattice = r.lattice();
     List<SymmetryOperator> ops = r.model().symmetryOperators().on(lattice);
-    SymmetryOperator t = ops.stream().filter(o -> o.symmetry() == Symmetry.TIME_REVERSAL).findFirst().orElseThrow();
-    SymmetryOperator s = ops.stream().filter(o -> o.symmetry() == Symmetry.CHIRAL).findFirst().orElseThrow();
+    SymmetryOperator t =
+        ops.stream().filter(o -> o.symmetry() == Symmetry.TIME_REVERSAL).findFirst().orElseThrow();
+    SymmetryOperator s =
+        ops.stream().filter(o -> o.symmetry() == Symmetry.CHIRAL).findFirst().orElseThrow();
     return DiiiZ2Kernel.compute(lattice, r.build(), t, s, workspace);
   }
 
@@ -43,10 +45,23 @@ class DiiiZ2KernelTest {
     // a Kramers pair of non-trivial chains has DIII Z2 = 1 (Qi, Hughes, Zhang, PRB 81, 134508
     // (2010)). Δ ≠ t and negative t included; L = 24 ≫ the localisation length at these points.
     double[][] points = { // t, delta, mu
-        {1.0, 1.0, 0.0}, {1.0, 0.4, 1.5}, {1.0, 2.5, -1.2}, {-0.8, 0.6, 1.0}, {1.0, 0.4, 2.6}, {1.0, 2.5, -3.0}, {-0.8, 0.6, 2.0}};
+      {1.0, 1.0, 0.0},
+      {1.0, 0.4, 1.5},
+      {1.0, 2.5, -1.2},
+      {-0.8, 0.6, 1.0},
+      {1.0, 0.4, 2.6},
+      {1.0, 2.5, -3.0},
+      {-0.8, 0.6, 2.0}
+    };
     for (double[] p : points) {
       int expected = Math.abs(p[2]) < 2 * Math.abs(p[0]) ? 1 : 0;
-      int nu = converged(aRealisation(DiiiWireModel.NAME).with("t", p[0]).with("delta", p[1]).with("mu", p[2]).size(24));
+      int nu =
+          converged(
+              aRealisation(DiiiWireModel.NAME)
+                  .with("t", p[0])
+                  .with("delta", p[1])
+                  .with("mu", p[2])
+                  .size(24));
       assertThat(nu).as("t=%s delta=%s mu=%s", p[0], p[1], p[2]).isEqualTo(expected);
     }
   }
@@ -54,7 +69,14 @@ class DiiiZ2KernelTest {
   @Test
   void atomicLimitIsTrivialAndSmallRingsWork() {
     // Derived: with t = Δ = 0 the block q does not depend on the twist, so (−1)^ν = 1.
-    assertThat(converged(aRealisation(DiiiWireModel.NAME).with("t", 0.0).with("delta", 0.0).with("mu", 1.0).size(3))).isZero();
+    assertThat(
+            converged(
+                aRealisation(DiiiWireModel.NAME)
+                    .with("t", 0.0)
+                    .with("delta", 0.0)
+                    .with("mu", 1.0)
+                    .size(3)))
+        .isZero();
     // L = 3 is the smallest ring with a distinct closing bond; μ = 0 sits deep in the phase.
     assertThat(converged(aRealisation(DiiiWireModel.NAME).with("mu", 0.0).size(3))).isEqualTo(1);
   }
@@ -63,7 +85,8 @@ class DiiiZ2KernelTest {
    * Majorana number of the spin-up block: a pwave-wire ring with the same μ_j (the diii-wire's
    * spin-up block is that wire, entries as in PWaveWireModel).
    */
-  private int spinUpMajoranaZ2(double mu, double t, double delta, double w, long seed, int size, boolean gauss) {
+  private int spinUpMajoranaZ2(
+      double mu, double t, double delta, double w, long seed, int size, boolean gauss) {
     PWaveWireModel wire = new PWaveWireModel();
     Lattice lattice = wire.lattice(size, Boundary.PERIODIC);
     HamiltonianBuilder b = new HamiltonianBuilder();
@@ -71,9 +94,11 @@ class DiiiZ2KernelTest {
     wire.addClean(new ParameterValues(Map.of("mu", mu, "t", t, "delta", delta)), lattice, b);
     RandomGenerator random = SeedOps.generator(seed);
     for (int s = 0; s < size; s++) {
-      wire.addOnsitePotential(lattice, s, gauss ? w * random.nextGaussian() : w * (random.nextDouble() - 0.5), b);
+      wire.addOnsitePotential(
+          lattice, s, gauss ? w * random.nextGaussian() : w * (random.nextDouble() - 0.5), b);
     }
-    MajoranaNumberResult q = MajoranaKernel.majoranaNumber((MajoranaForm) wire, lattice, b, majorana);
+    MajoranaNumberResult q =
+        MajoranaKernel.majoranaNumber((MajoranaForm) wire, lattice, b, majorana);
     assertThat(q.q()).isNotZero();
     return q.q() == -1 ? 1 : 0;
   }
@@ -89,11 +114,18 @@ class DiiiZ2KernelTest {
       for (long seed = 1; seed <= 5; seed++) {
         for (boolean gauss : new boolean[] {false, true}) {
           double w = 3.0;
-          TestRealisation r = aRealisation(DiiiWireModel.NAME).with("mu", mu).with("t", 1.0).with("delta", 0.7).size(20).seed(seed)
-              .disorder(gauss ? "onsite-gauss" : "onsite-box", w);
+          TestRealisation r =
+              aRealisation(DiiiWireModel.NAME)
+                  .with("mu", mu)
+                  .with("t", 1.0)
+                  .with("delta", 0.7)
+                  .size(20)
+                  .seed(seed)
+                  .disorder(gauss ? "onsite-gauss" : "onsite-box", w);
           DiiiZ2Result result = z2(r);
           if (result.status() != DiiiZ2Result.Status.CONVERGED) {
-            continue; // a realisation with a zero mode under one closure: the Majorana number fails too
+            continue; // a realisation with a zero mode under one closure: the Majorana number fails
+            // too
           }
           int expected = spinUpMajoranaZ2(mu, 1.0, 0.7, w, seed, 20, gauss);
           assertThat(result.z2()).as("mu=%s seed=%d gauss=%s", mu, seed, gauss).isEqualTo(expected);
@@ -128,9 +160,18 @@ class DiiiZ2KernelTest {
         if (Math.abs(margin) < 1e-3) {
           continue;
         }
-        int nu = converged(aRealisation(DiiiWireModel.NAME).with("mu", mu).with("t", 1.0).with("delta", 1.0).size(size).seed(seed)
-            .disorder("onsite-box", 2.0));
-        assertThat(nu).as("mu=%s seed=%d margin=%s", mu, seed, margin).isEqualTo(margin < 0 ? 1 : 0);
+        int nu =
+            converged(
+                aRealisation(DiiiWireModel.NAME)
+                    .with("mu", mu)
+                    .with("t", 1.0)
+                    .with("delta", 1.0)
+                    .size(size)
+                    .seed(seed)
+                    .disorder("onsite-box", 2.0));
+        assertThat(nu)
+            .as("mu=%s seed=%d margin=%s", mu, seed, margin)
+            .isEqualTo(margin < 0 ? 1 : 0);
         seen += nu;
       }
     }
@@ -143,11 +184,20 @@ class DiiiZ2KernelTest {
     // so λ = 0 and λ ≠ 0 agree; S_z is broken, so this is not the spin-up block's number.
     for (double mu : new double[] {0.3, -1.0, 2.8}) {
       for (long seed = 1; seed <= 3; seed++) {
-        TestRealisation base = aRealisation(DiiiWireModel.NAME).with("mu", mu).with("t", 1.0).with("delta", 1.2).size(20).seed(seed)
-            .disorder("onsite-box", 0.5);
+        TestRealisation base =
+            aRealisation(DiiiWireModel.NAME)
+                .with("mu", mu)
+                .with("t", 1.0)
+                .with("delta", 1.2)
+                .size(20)
+                .seed(seed)
+                .disorder("onsite-box", 0.5);
         int nu0 = converged(base);
         int nu = converged(base.with("lambda", 0.8));
-        assertThat(nu).as("mu=%s seed=%d", mu, seed).isEqualTo(nu0).isEqualTo(Math.abs(mu) < 2 ? 1 : 0);
+        assertThat(nu)
+            .as("mu=%s seed=%d", mu, seed)
+            .isEqualTo(nu0)
+            .isEqualTo(Math.abs(mu) < 2 ? 1 : 0);
       }
     }
   }
@@ -157,7 +207,8 @@ class DiiiZ2KernelTest {
     // Derived: the 4 × 4 Bloch Hamiltonian H(k) = ξ_k τ_z ⊗ 1 + 2λ sin k 1 ⊗ s_x + pairing (see
     // hopstat.model.DiiiWireBloch, built independently of the model) has E = 0 gap minimum
     // min_k |2|λ sin k| − √(ξ_k² + 4Δ² sin²k)|; at t = 0.8, Δ = 1.3, λ = 0.6 it vanishes on the μ
-    // axis only at μ_c = 2t = 1.6 (located here by the closed form on a fine grid). Sample points on
+    // axis only at μ_c = 2t = 1.6 (located here by the closed form on a fine grid). Sample points
+    // on
     // each side at clean L = 40 (decay length of the end modes < 5 sites there).
     double t = 0.8;
     double delta = 1.3;
@@ -174,8 +225,14 @@ class DiiiZ2KernelTest {
     assertThat(smallest).isLessThan(1e-9);
     assertThat(muC).isBetween(1.59, 1.61);
     for (double offset : new double[] {-0.3, -0.1, 0.1, 0.3}) {
-      int nu = converged(aRealisation(DiiiWireModel.NAME).with("t", t).with("delta", delta).with("lambda", lambda)
-          .with("mu", muC + offset).size(40));
+      int nu =
+          converged(
+              aRealisation(DiiiWireModel.NAME)
+                  .with("t", t)
+                  .with("delta", delta)
+                  .with("lambda", lambda)
+                  .with("mu", muC + offset)
+                  .size(40));
       assertThat(nu).as("mu=%s", muC + offset).isEqualTo(offset < 0 ? 1 : 0);
     }
   }
@@ -183,10 +240,17 @@ class DiiiZ2KernelTest {
   @Test
   void aClosedGapIsAnOutcomeNotAnException() {
     // Derived: at μ = 2t the clean ring has E = 0 at k = 0, i.e. under the periodic closure.
-    assertThat(z2(aRealisation(DiiiWireModel.NAME).with("mu", 2.0).size(10)).status()).isEqualTo(DiiiZ2Result.Status.GAP_CLOSED);
+    assertThat(z2(aRealisation(DiiiWireModel.NAME).with("mu", 2.0).size(10)).status())
+        .isEqualTo(DiiiZ2Result.Status.GAP_CLOSED);
     // Derived: for |λ| > |Δ| and |μ| < 2|t| bands cross E = 0 at some k ≠ 0, π (gapless wire);
     // the continuation meets a zero of det q (or steps below the minimum) on the way.
-    DiiiZ2Result r = z2(aRealisation(DiiiWireModel.NAME).with("mu", 0.5).with("delta", 0.3).with("lambda", 1.0).size(30));
+    DiiiZ2Result r =
+        z2(
+            aRealisation(DiiiWireModel.NAME)
+                .with("mu", 0.5)
+                .with("delta", 0.3)
+                .with("lambda", 1.0)
+                .size(30));
     assertThat(r.status()).isEqualTo(DiiiZ2Result.Status.GAP_CLOSED);
   }
 }

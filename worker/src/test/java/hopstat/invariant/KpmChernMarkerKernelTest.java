@@ -21,16 +21,23 @@ import org.junit.jupiter.api.Test;
 class KpmChernMarkerKernelTest {
 
   /**
-   * With the bulk trace taken exactly (unit vectors), only the truncation of the Chebyshev projector
-   * remains (Weiße et al., RMP 78, 275 (2006)). Measured on this realisation (qwz m = 1, W = 1,
-   * L = 16, a = 5.5): |kpm − dense| = 1.1e−3, 1.1e−4, 8e−6 at M = 128, 256, 512, so at M = 256 the
-   * tolerance 1e−3 leaves a factor 9. The two estimators must use the same bulk region (same site
-   * count), and the marker has the sign of C: −1 for 0 &lt; m &lt; 2 (Qi, Wu, Zhang, PRB 74, 085308
-   * (2006)).
+   * With the bulk trace taken exactly (unit vectors), only the truncation of the Chebyshev
+   * projector remains (Weiße et al., RMP 78, 275 (2006)). Measured on this realisation (qwz m = 1,
+   * W = 1, L = 16, a = 5.5): |kpm − dense| = 1.1e−3, 1.1e−4, 8e−6 at M = 128, 256, 512, so at M =
+   * 256 the tolerance 1e−3 leaves a factor 9. The two estimators must use the same bulk region
+   * (same site count), and the marker has the sign of C: −1 for 0 &lt; m &lt; 2 (Qi, Wu, Zhang, PRB
+   * 74, 085308 (2006)).
    */
   @Test
   void exactBulkTraceMatchesTheDenseMarkerUpToTruncation() {
-    TestRealisation t = aRealisation("qwz").with("m", 1.0).with("t", 1.0).size(16).boundary(Boundary.OPEN).disorder("onsite-box", 1.0).seed(7);
+    TestRealisation t =
+        aRealisation("qwz")
+            .with("m", 1.0)
+            .with("t", 1.0)
+            .size(16)
+            .boundary(Boundary.OPEN)
+            .disorder("onsite-box", 1.0)
+            .seed(7);
     HamiltonianBuilder b = t.build();
     Lattice lattice = t.lattice();
     ChernMarkerResult dense = denseMarker(b, lattice, 0.0);
@@ -42,7 +49,8 @@ class KpmChernMarkerKernelTest {
     assertThat(exact).isCloseTo(dense.bulkAverage(), within(1e-3));
     assertThat(dense.bulkAverage()).isCloseTo(-1.0, within(0.01));
     int[] bulk = new int[lattice.orbitals()];
-    assertThat(KpmChernMarkerKernel.bulkOrbitals(lattice, bulk) / lattice.orbitalsPerSite()).isEqualTo(dense.bulkSites());
+    assertThat(KpmChernMarkerKernel.bulkOrbitals(lattice, bulk) / lattice.orbitalsPerSite())
+        .isEqualTo(dense.bulkSites());
   }
 
   /**
@@ -53,7 +61,14 @@ class KpmChernMarkerKernelTest {
    */
   @Test
   void stochasticEstimateAgreesWithinItsStandardError() {
-    TestRealisation t = aRealisation("qwz").with("m", -1.0).with("t", 1.0).size(16).boundary(Boundary.OPEN).disorder("onsite-box", 1.0).seed(8);
+    TestRealisation t =
+        aRealisation("qwz")
+            .with("m", -1.0)
+            .with("t", 1.0)
+            .size(16)
+            .boundary(Boundary.OPEN)
+            .disorder("onsite-box", 1.0)
+            .seed(8);
     HamiltonianBuilder b = t.build();
     Lattice lattice = t.lattice();
     double dense = denseMarker(b, lattice, 0.0).bulkAverage();
@@ -61,7 +76,9 @@ class KpmChernMarkerKernelTest {
     h.assemble(b);
     KpmChernMarkerWorkspace ws = new KpmChernMarkerWorkspace();
     for (long seed = 1; seed <= 3; seed++) {
-      KpmChernMarkerResult r = KpmChernMarkerKernel.compute(h, lattice, KpmKernel.scale(h), 0.0, 256, 8, new SplittableRandom(seed), ws);
+      KpmChernMarkerResult r =
+          KpmChernMarkerKernel.compute(
+              h, lattice, KpmKernel.scale(h), 0.0, 256, 8, new SplittableRandom(seed), ws);
       assertThat(r.standardError()).isBetween(1e-3, 0.2);
       assertThat(r.bulkAverage()).isCloseTo(dense, within(4 * r.standardError() + 1e-3));
       assertThat(r.vectors()).isEqualTo(8);
@@ -74,7 +91,11 @@ class KpmChernMarkerKernelTest {
     int n = b.dimension();
     double[] ev = new double[n];
     ZMatrixRMaj vectors = new ZMatrixRMaj(1, 1);
-    assertThat(OccupiedStates.LINALG.newHermitianEigenSolver().eigenpairs(dense, ev, 0, n - 1, vectors)).isTrue();
+    assertThat(
+            OccupiedStates.LINALG
+                .newHermitianEigenSolver()
+                .eigenpairs(dense, ev, 0, n - 1, vectors))
+        .isTrue();
     int occ = 0;
     while (occ < n && ev[occ] < fermi) {
       occ++;

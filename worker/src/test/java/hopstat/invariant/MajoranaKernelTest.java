@@ -20,14 +20,16 @@ class MajoranaKernelTest {
   private final MajoranaWorkspace workspace = new MajoranaWorkspace();
 
   private int z2(TestRealisation r) {
-    MajoranaNumberResult q = MajoranaKernel.majoranaNumber((MajoranaForm) r.model(), r.lattice(), r.build(), workspace);
+    MajoranaNumberResult q =
+        MajoranaKernel.majoranaNumber((MajoranaForm) r.model(), r.lattice(), r.build(), workspace);
     assertThat(q.q()).as("Majorana number defined").isNotZero();
     return q.q() == -1 ? 1 : 0;
   }
 
   @Test
   void cleanPwaveWireIsTopologicalIffMuBelowTwoT() {
-    // Kitaev, Phys.-Usp. 44, 131 (2001): topological iff |μ| < 2|t| (Δ ≠ 0). Δ ≠ t included, since a
+    // Kitaev, Phys.-Usp. 44, 131 (2001): topological iff |μ| < 2|t| (Δ ≠ 0). Δ ≠ t included, since
+    // a
     // slipped Pfaffian index still passes Δ = t (REFERENCE pitfall). L even: the periodic Pfaffian
     // changes sign exactly at |μ| = 2|t| (k = 0, π), the antiperiodic one never.
     double[][] tDelta = {{1, 1}, {1, 0.3}, {1, 2.5}, {-0.7, 0.4}, {1, -0.5}, {1.3, -2.0}};
@@ -36,7 +38,12 @@ class MajoranaKernelTest {
       for (double m : muOverT) {
         double mu = m * Math.abs(td[0]);
         int expected = Math.abs(mu) < 2 * Math.abs(td[0]) ? 1 : 0;
-        TestRealisation r = aRealisation("pwave-wire").with("mu", mu).with("t", td[0]).with("delta", td[1]).size(40);
+        TestRealisation r =
+            aRealisation("pwave-wire")
+                .with("mu", mu)
+                .with("t", td[0])
+                .with("delta", td[1])
+                .size(40);
         assertThat(z2(r)).as("t=%s delta=%s mu=%s", td[0], td[1], mu).isEqualTo(expected);
       }
     }
@@ -44,8 +51,10 @@ class MajoranaKernelTest {
 
   @Test
   void pwaveWireAtDeltaEqualsTFollowsTheProductCriterion() {
-    // Derived (REFERENCE; consistent with Motrunich, Damle, Huse, PRB 63, 224204 (2001)): at Δ = t the
-    // Majorana ring has Pf(A_±) = Π(−μ_j) ∓ Π(2t), so per realisation z2 = 1 ⇔ Σ ln|μ_j| < L ln|2t|.
+    // Derived (REFERENCE; consistent with Motrunich, Damle, Huse, PRB 63, 224204 (2001)): at Δ = t
+    // the
+    // Majorana ring has Pf(A_±) = Π(−μ_j) ∓ Π(2t), so per realisation z2 = 1 ⇔ Σ ln|μ_j| < L
+    // ln|2t|.
     // μ_j = mu + W u_j is regenerated from the seed exactly as onsite-box draws it (site order).
     // Parameters near ⟨ln|μ|⟩ = ln|2t| so that both outcomes occur.
     double[][] cases = {{1.0, 0.5, 10.0}, {-1.5, 0.0, 16.0}};
@@ -55,8 +64,14 @@ class MajoranaKernelTest {
       int nonTrivial = 0;
       int trivial = 0;
       for (long seed = 1; seed <= 150; seed++) {
-        TestRealisation r = aRealisation("pwave-wire").with("mu", c[1]).with("t", t).with("delta", t).size(size)
-            .disorder("onsite-box", c[2]).seed(seed);
+        TestRealisation r =
+            aRealisation("pwave-wire")
+                .with("mu", c[1])
+                .with("t", t)
+                .with("delta", t)
+                .size(size)
+                .disorder("onsite-box", c[2])
+                .seed(seed);
         RandomGenerator random = SeedOps.generator(seed);
         double sumLog = 0;
         for (int j = 0; j < size; j++) {
@@ -77,8 +92,8 @@ class MajoranaKernelTest {
   }
 
   /**
-   * Lyapunov exponent at E = 0 of the normal chain t'(ψ_{j+1} + ψ_{j−1}) + μ_j ψ_j = 0 with μ_j =
-   * W u_j, by the renormalised transfer-matrix product over {@code steps} sites (common practice).
+   * Lyapunov exponent at E = 0 of the normal chain t'(ψ_{j+1} + ψ_{j−1}) + μ_j ψ_j = 0 with μ_j = W
+   * u_j, by the renormalised transfer-matrix product over {@code steps} sites (common practice).
    */
   static double normalChainLyapunov(double w, double hopping, int steps) {
     java.util.SplittableRandom random = new java.util.SplittableRandom(99);
@@ -110,7 +125,9 @@ class MajoranaKernelTest {
     // Check of the Lyapunov helper: band-centre anomaly γ(0) = (W/t')²/105.045 (Kappus & Wegner,
     // Z. Phys. B 45, 15 (1981), constant from memory, REFERENCE). At W = 1 the weak-disorder
     // formula holds to O(W⁴); 3% covers that and the statistical error of 2e5 steps.
-    assertThat(normalChainLyapunov(1.0, hopping, steps)).isCloseTo(1.0 / (hopping * hopping * 105.045), within(0.03 / (hopping * hopping * 105.045)));
+    assertThat(normalChainLyapunov(1.0, hopping, steps))
+        .isCloseTo(
+            1.0 / (hopping * hopping * 105.045), within(0.03 / (hopping * hopping * 105.045)));
     double target = 0.5 * Math.log((t + delta) / (t - delta)); // artanh(Δ/t)
     double lo = 0.5;
     double hi = 20;
@@ -129,10 +146,24 @@ class MajoranaKernelTest {
     int inside = 0;
     int outside = 0;
     for (long seed = 1; seed <= n; seed++) {
-      inside += z2(aRealisation("pwave-wire").with("mu", 0.0).with("t", t).with("delta", delta).size(150)
-          .disorder("onsite-box", 0.7 * critical).seed(seed));
-      outside += z2(aRealisation("pwave-wire").with("mu", 0.0).with("t", t).with("delta", delta).size(150)
-          .disorder("onsite-box", 1.4 * critical).seed(seed));
+      inside +=
+          z2(
+              aRealisation("pwave-wire")
+                  .with("mu", 0.0)
+                  .with("t", t)
+                  .with("delta", delta)
+                  .size(150)
+                  .disorder("onsite-box", 0.7 * critical)
+                  .seed(seed));
+      outside +=
+          z2(
+              aRealisation("pwave-wire")
+                  .with("mu", 0.0)
+                  .with("t", t)
+                  .with("delta", delta)
+                  .size(150)
+                  .disorder("onsite-box", 1.4 * critical)
+                  .seed(seed));
     }
     assertThat(inside).isGreaterThanOrEqualTo(n - 1);
     assertThat(outside).isLessThanOrEqualTo(1);
@@ -144,8 +175,11 @@ class MajoranaKernelTest {
     for (double coupling : new double[] {1.0, -0.8}) {
       for (double ratio : new double[] {0, 0.5, 0.95, -0.95, 1.05, -1.05, 2}) {
         double field = ratio * Math.abs(coupling);
-        TestRealisation r = aRealisation("ising-chain").with("J", coupling).with("h", field).size(30);
-        assertThat(z2(r)).as("J=%s h=%s", coupling, field).isEqualTo(Math.abs(field) < Math.abs(coupling) ? 1 : 0);
+        TestRealisation r =
+            aRealisation("ising-chain").with("J", coupling).with("h", field).size(30);
+        assertThat(z2(r))
+            .as("J=%s h=%s", coupling, field)
+            .isEqualTo(Math.abs(field) < Math.abs(coupling) ? 1 : 0);
       }
     }
   }
@@ -154,14 +188,21 @@ class MajoranaKernelTest {
   void randomIsingChainIsOrderedIffSumLogFieldBelowSumLogCoupling() {
     // Derived (same ring argument as Δ = t): Pf(A_±) = Π(−2h_j) ∓ Π(−2J_j) over all L sites and the
     // L bonds of the ring, so z2 = 1 ⇔ Σ ln|h_j| < Σ ln|J_j| per realisation, exactly; this is the
-    // finite-ring form of Fisher's criterion (PRB 51, 6411 (1995)). Draws: field-box (L, site order)
+    // finite-ring form of Fisher's criterion (PRB 51, 6411 (1995)). Draws: field-box (L, site
+    // order)
     // then coupling-box (L bonds, closing bond last).
     int size = 20;
     int ordered = 0;
     int disordered = 0;
     for (long seed = 1; seed <= 150; seed++) {
-      TestRealisation r = aRealisation("ising-chain").with("J", 1.0).with("h", 1.0).size(size)
-          .disorder("field-box", 1.4).disorder("coupling-box", 1.0).seed(seed);
+      TestRealisation r =
+          aRealisation("ising-chain")
+              .with("J", 1.0)
+              .with("h", 1.0)
+              .size(size)
+              .disorder("field-box", 1.4)
+              .disorder("coupling-box", 1.0)
+              .seed(seed);
       RandomGenerator random = SeedOps.generator(seed);
       double sumLogH = 0;
       for (int j = 0; j < size; j++) {
@@ -197,9 +238,11 @@ class MajoranaKernelTest {
 
   @Test
   void randomIsingEnsembleTransitionAtEqualMeanLogs() {
-    // Fisher, PRB 51, 6411 (1995): the random transverse-field Ising chain orders iff [ln h] < [ln J].
+    // Fisher, PRB 51, 6411 (1995): the random transverse-field Ising chain orders iff [ln h] < [ln
+    // J].
     // J = 1 clean, h_j = h + 2u_j: the critical h solves ⟨ln|h + 2u|⟩ = 0 (closed form above,
-    // bisection). Well inside each phase (h_c ∓ 0.4) at L = 120 the ordered fraction must be ~1 / ~0:
+    // bisection). Well inside each phase (h_c ∓ 0.4) at L = 120 the ordered fraction must be ~1 /
+    // ~0:
     // Σ(ln h − ln J) has mean ∓0.3·L ≈ ∓36 against a spread ≈ √L·0.6 ≈ 7.
     double lo = 1.0;
     double hi = 2.0;
@@ -218,11 +261,19 @@ class MajoranaKernelTest {
       int ordered = 0;
       int n = 30;
       for (long seed = 1; seed <= n; seed++) {
-        ordered += z2(aRealisation("ising-chain").with("J", 1.0).with("h", critical + shift).size(120)
-            .disorder("field-box", 2.0).seed(seed));
+        ordered +=
+            z2(
+                aRealisation("ising-chain")
+                    .with("J", 1.0)
+                    .with("h", critical + shift)
+                    .size(120)
+                    .disorder("field-box", 2.0)
+                    .seed(seed));
       }
       if (shift < 0) {
-        assertThat(ordered).as("ordered side, h = %s", critical + shift).isGreaterThanOrEqualTo(n - 1);
+        assertThat(ordered)
+            .as("ordered side, h = %s", critical + shift)
+            .isGreaterThanOrEqualTo(n - 1);
       } else {
         assertThat(ordered).as("disordered side, h = %s", critical + shift).isLessThanOrEqualTo(1);
       }
@@ -236,10 +287,16 @@ class MajoranaKernelTest {
     int size = 4;
     int odd = 0;
     for (long seed = 1; seed <= 16; seed++) {
-      TestRealisation r = aRealisation("majorana-cluster").with("mu", 0.3).size(size).boundary(Boundary.OPEN)
-          .disorder("majorana-gauss", 1.0).seed(seed);
+      TestRealisation r =
+          aRealisation("majorana-cluster")
+              .with("mu", 0.3)
+              .size(size)
+              .boundary(Boundary.OPEN)
+              .disorder("majorana-gauss", 1.0)
+              .seed(seed);
       var terms = r.build();
-      PfaffianResult pf = MajoranaKernel.groundStateParity((MajoranaForm) r.model(), r.lattice(), terms, workspace);
+      PfaffianResult pf =
+          MajoranaKernel.groundStateParity((MajoranaForm) r.model(), r.lattice(), terms, workspace);
       ZMatrixRMaj h = new ZMatrixRMaj(1, 1);
       terms.toDense(h);
       double even = groundEnergy(h, size, 0);
@@ -256,9 +313,16 @@ class MajoranaKernelTest {
   void clusterWithLargeChemicalPotentialIsFilled() {
     // Derived: for μ ≫ W every mode is occupied, parity = L mod 2.
     for (int size : new int[] {4, 5}) {
-      TestRealisation r = aRealisation("majorana-cluster").with("mu", 3.0).size(size).boundary(Boundary.OPEN)
-          .disorder("majorana-gauss", 0.05).seed(3);
-      PfaffianResult pf = MajoranaKernel.groundStateParity((MajoranaForm) r.model(), r.lattice(), r.build(), workspace);
+      TestRealisation r =
+          aRealisation("majorana-cluster")
+              .with("mu", 3.0)
+              .size(size)
+              .boundary(Boundary.OPEN)
+              .disorder("majorana-gauss", 0.05)
+              .seed(3);
+      PfaffianResult pf =
+          MajoranaKernel.groundStateParity(
+              (MajoranaForm) r.model(), r.lattice(), r.build(), workspace);
       assertThat(pf.sign()).isEqualTo(size % 2 == 0 ? 1 : -1);
     }
   }
@@ -353,5 +417,4 @@ class MajoranaKernelTest {
     }
     return c;
   }
-
 }

@@ -12,7 +12,10 @@ import hopstat.model.SymmetryClass;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
-/** Orbital offsets of {@link Lattice}: defaults, copies, validation, Nambu layout of custom models (direct checks). */
+/**
+ * Orbital offsets of {@link Lattice}: defaults, copies, validation, Nambu layout of custom models
+ * (direct checks).
+ */
 class LatticeOrbitalOffsetTest {
 
   @Test
@@ -42,17 +45,29 @@ class LatticeOrbitalOffsetTest {
     assertThat(moved.withOrbitalOffsets(new double[2][2])).isEqualTo(square);
     moved.orbitalOffsets()[0][1] = 7.0;
     assertThat(moved.orbitalOffset(0, 1)).isEqualTo(0.25);
-    assertThatThrownBy(() -> square.withOrbitalOffsets(new double[2][3])).isInstanceOf(IllegalArgumentException.class);
-    assertThatThrownBy(() -> square.withOrbitalOffsets(new double[][] {{0, Double.NaN}, {0, 0}})).isInstanceOf(IllegalArgumentException.class);
+    assertThatThrownBy(() -> square.withOrbitalOffsets(new double[2][3]))
+        .isInstanceOf(IllegalArgumentException.class);
+    assertThatThrownBy(() -> square.withOrbitalOffsets(new double[][] {{0, Double.NaN}, {0, 0}}))
+        .isInstanceOf(IllegalArgumentException.class);
   }
 
-  /** Nambu form (CustomModel): orbitals 0..n−1 particles, n..2n−1 holes; a hole sits at its particle's position. */
+  /**
+   * Nambu form (CustomModel): orbitals 0..n−1 particles, n..2n−1 holes; a hole sits at its
+   * particle's position.
+   */
   @Test
   void customNambuHolesSitAtTheirParticlePositions() {
-    CustomModel model = new CustomModel(new CustomModelDefinition(2, List.of(List.of(1.0, 0.0), List.of(0.0, 1.0)),
-        List.of(new Orbital("a", List.of(0.1, 0.2)), new Orbital("b", List.of(0.5, 0.0))), List.of(),
-        List.of(new Term(List.of(0, 0), 0, 1, Amplitude.of(1.0, 0.0))),
-        List.of(new Term(List.of(1, 0), 0, 0, Amplitude.of(0.3, 0.0))), SymmetryClass.D, List.of()));
+    CustomModel model =
+        new CustomModel(
+            new CustomModelDefinition(
+                2,
+                List.of(List.of(1.0, 0.0), List.of(0.0, 1.0)),
+                List.of(new Orbital("a", List.of(0.1, 0.2)), new Orbital("b", List.of(0.5, 0.0))),
+                List.of(),
+                List.of(new Term(List.of(0, 0), 0, 1, Amplitude.of(1.0, 0.0))),
+                List.of(new Term(List.of(1, 0), 0, 0, Amplitude.of(0.3, 0.0))),
+                SymmetryClass.D,
+                List.of()));
     Lattice lattice = model.lattice(3, Boundary.OPEN);
     assertThat(lattice.orbitalsPerSite()).isEqualTo(4);
     double[][] expected = {{0.1, 0.5, 0.1, 0.5}, {0.2, 0.0, 0.2, 0.0}};

@@ -48,7 +48,8 @@ class ComplexDeterminantKernelTest {
     ComplexLogResult db = ComplexDeterminantKernel.compute(b, workspace);
     ComplexLogResult dab = ComplexDeterminantKernel.compute(ab, workspace);
     assertThat(dab.logAbs()).isCloseTo(da.logAbs() + db.logAbs(), within(1e-11));
-    assertThat(ComplexLogResult.wrap(dab.phase() - da.phase() - db.phase())).isCloseTo(0.0, within(1e-11));
+    assertThat(ComplexLogResult.wrap(dab.phase() - da.phase() - db.phase()))
+        .isCloseTo(0.0, within(1e-11));
     ZMatrixRMaj swapped = a.copy();
     for (int j = 0; j < 8; j++) {
       swapped.set(0, j, a.getReal(3, j), a.getImag(3, j));
@@ -56,7 +57,8 @@ class ComplexDeterminantKernelTest {
     }
     ComplexLogResult ds = ComplexDeterminantKernel.compute(swapped, workspace);
     assertThat(ds.logAbs()).isCloseTo(da.logAbs(), within(1e-12));
-    assertThat(Math.abs(ComplexLogResult.wrap(ds.phase() - da.phase()))).isCloseTo(Math.PI, within(1e-11));
+    assertThat(Math.abs(ComplexLogResult.wrap(ds.phase() - da.phase())))
+        .isCloseTo(Math.PI, within(1e-11));
   }
 
   @Test

@@ -8,7 +8,10 @@ import org.ejml.dense.row.CommonOps_ZDRM;
 import org.ejml.dense.row.NormOps_ZDRM;
 import org.junit.jupiter.api.Test;
 
-/** Source-free checks of the Householder QR: reconstruction residual, orthonormality, complement (Golub &amp; Van Loan §5.2). */
+/**
+ * Source-free checks of the Householder QR: reconstruction residual, orthonormality, complement
+ * (Golub &amp; Van Loan §5.2).
+ */
 class ComplexHouseholderOpsTest {
 
   private static ZMatrixRMaj random(int m, int n, long seed) {
@@ -20,7 +23,10 @@ class ComplexHouseholderOpsTest {
     return a;
   }
 
-  /** A = Q_thin R, Q†Q = 1 for the full Q, and the last m − n columns annihilate A (Q_⊥† A = 0), to rounding. */
+  /**
+   * A = Q_thin R, Q†Q = 1 for the full Q, and the last m − n columns annihilate A (Q_⊥† A = 0), to
+   * rounding.
+   */
   @Test
   void factorsReconstructAndTheComplementIsOrthogonal() {
     for (int[] shape : new int[][] {{8, 4}, {6, 3}, {2, 1}, {5, 5}}) {

@@ -71,8 +71,12 @@ class ComplexPfaffianKernelTest {
         assertThat(pf.isZero()).isTrue();
         continue;
       }
-      assertThat(2 * pf.logAbs()).as("n=%d", n).isCloseTo(det.logAbs(), within(1e-10 * (1 + Math.abs(det.logAbs()))));
-      assertThat(ComplexLogResult.wrap(2 * pf.phase() - det.phase())).as("n=%d", n).isCloseTo(0.0, within(1e-9));
+      assertThat(2 * pf.logAbs())
+          .as("n=%d", n)
+          .isCloseTo(det.logAbs(), within(1e-10 * (1 + Math.abs(det.logAbs()))));
+      assertThat(ComplexLogResult.wrap(2 * pf.phase() - det.phase()))
+          .as("n=%d", n)
+          .isCloseTo(0.0, within(1e-9));
     }
   }
 
@@ -113,7 +117,8 @@ class ComplexPfaffianKernelTest {
   @Test
   void handCaseFourByFour() {
     // Derived (definition): Pf of a 4 × 4 antisymmetric matrix = a01 a23 − a02 a13 + a03 a12.
-    // With a01 = i, a23 = 2, a02 = 1 + i, a13 = 3, a03 = −1, a12 = i: Pf = 2i − (3 + 3i) − i = −3 − 2i.
+    // With a01 = i, a23 = 2, a02 = 1 + i, a13 = 3, a03 = −1, a12 = i: Pf = 2i − (3 + 3i) − i = −3 −
+    // 2i.
     ZMatrixRMaj a = new ZMatrixRMaj(4, 4);
     set(a, 0, 1, 0, 1);
     set(a, 2, 3, 2, 0);
@@ -148,8 +153,10 @@ class ComplexPfaffianKernelTest {
     assertThat(ComplexPfaffianKernel.compute(zero, pfWorkspace).isZero()).isTrue();
     ZMatrixRMaj notAnti = randomAntisymmetric(4, 3);
     notAnti.set(0, 1, 5.0, 0.0);
-    assertThatThrownBy(() -> ComplexPfaffianKernel.compute(notAnti, pfWorkspace)).isInstanceOf(IllegalArgumentException.class);
-    assertThatThrownBy(() -> ComplexPfaffianKernel.compute(new ZMatrixRMaj(2, 3), pfWorkspace)).isInstanceOf(IllegalArgumentException.class);
+    assertThatThrownBy(() -> ComplexPfaffianKernel.compute(notAnti, pfWorkspace))
+        .isInstanceOf(IllegalArgumentException.class);
+    assertThatThrownBy(() -> ComplexPfaffianKernel.compute(new ZMatrixRMaj(2, 3), pfWorkspace))
+        .isInstanceOf(IllegalArgumentException.class);
   }
 
   private static void set(ZMatrixRMaj a, int i, int j, double re, double im) {

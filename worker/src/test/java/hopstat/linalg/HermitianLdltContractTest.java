@@ -15,8 +15,8 @@ import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 
 /**
- * Contract of every {@link HermitianLdltSolver}: the inertia equals the eigenvalue sign counts of
- * a reference eigen-decomposition (Sylvester's law of inertia), and solves have small residuals.
+ * Contract of every {@link HermitianLdltSolver}: the inertia equals the eigenvalue sign counts of a
+ * reference eigen-decomposition (Sylvester's law of inertia), and solves have small residuals.
  *
  * <p>Tolerances (common practice): Bunch–Kaufman is normwise backward stable with a modest growth
  * factor (Higham, Accuracy and Stability of Numerical Algorithms, 2nd ed. 2002, §11.1), so for the
@@ -36,8 +36,13 @@ abstract class HermitianLdltContractTest {
         Arguments.of("random n=60", randomHermitian(60, 24)),
         // Zero diagonal forces 2×2 pivots throughout.
         Arguments.of("zero diagonal n=30", zeroDiagonal(30, 25)),
-        Arguments.of("prescribed n=12", hermitianWithSpectrum(new double[] {-3, -2, -2, -1, -0.5, 0.25, 0.5, 1, 1, 1, 2, 4}, 26)),
-        Arguments.of("negative definite n=8", hermitianWithSpectrum(new double[] {-8, -7, -6, -5, -4, -3, -2, -1}, 27)));
+        Arguments.of(
+            "prescribed n=12",
+            hermitianWithSpectrum(
+                new double[] {-3, -2, -2, -1, -0.5, 0.25, 0.5, 1, 1, 1, 2, 4}, 26)),
+        Arguments.of(
+            "negative definite n=8",
+            hermitianWithSpectrum(new double[] {-8, -7, -6, -5, -4, -3, -2, -1}, 27)));
   }
 
   @ParameterizedTest(name = "{0}")
@@ -45,7 +50,11 @@ abstract class HermitianLdltContractTest {
   void inertiaMatchesEigenvalueSigns(String name, ZMatrixRMaj a) {
     int n = a.numRows;
     double[] values = new double[n];
-    assertThat(LinalgFactory.create(LinalgKind.NATIVE).newHermitianEigenSolver().eigenvalues(a, values)).isTrue();
+    assertThat(
+            LinalgFactory.create(LinalgKind.NATIVE)
+                .newHermitianEigenSolver()
+                .eigenvalues(a, values))
+        .isTrue();
     int pos = 0;
     int neg = 0;
     for (int i = 0; i < n; i++) {
@@ -114,10 +123,14 @@ abstract class HermitianLdltContractTest {
     assertThat(solver.factor(a)).isFalse();
     assertThat(solver.zeroCount()).isEqualTo(1);
     assertThat(solver.positiveCount() + solver.negativeCount()).isEqualTo(9);
-    assertThatThrownBy(() -> solver.solve(new ZMatrixRMaj(10, 1))).isInstanceOf(IllegalStateException.class);
+    assertThatThrownBy(() -> solver.solve(new ZMatrixRMaj(10, 1)))
+        .isInstanceOf(IllegalStateException.class);
   }
 
-  /** Workspace reuse: a large then a small then a large matrix give the same answers as fresh solvers. */
+  /**
+   * Workspace reuse: a large then a small then a large matrix give the same answers as fresh
+   * solvers.
+   */
   @Test
   void reuseAcrossSizes() {
     HermitianLdltSolver reused = HermitianLdltFactory.create(kind());

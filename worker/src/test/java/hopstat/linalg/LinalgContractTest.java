@@ -25,9 +25,9 @@ import org.junit.jupiter.params.provider.ValueSource;
  * Contract every {@link Linalg} implementation must meet; one small subclass per backend.
  *
  * <p>Tolerances (common practice): backward-stable dense eigensolvers and products have errors of
- * order n·ε·‖A‖ (Golub &amp; Van Loan, Matrix Computations, 4th ed. 2013, §7.5 and §8.3). For
- * n ≤ 40 that is below 1e-14·‖A‖; the checks allow {@link #TOL} = 1e-11 relative, a margin of
- * about 1000 that still catches any wrong sign, conjugation or index.
+ * order n·ε·‖A‖ (Golub &amp; Van Loan, Matrix Computations, 4th ed. 2013, §7.5 and §8.3). For n ≤
+ * 40 that is below 1e-14·‖A‖; the checks allow {@link #TOL} = 1e-11 relative, a margin of about
+ * 1000 that still catches any wrong sign, conjugation or index.
  */
 abstract class LinalgContractTest {
 
@@ -45,8 +45,8 @@ abstract class LinalgContractTest {
         Arguments.of("random n=40", randomHermitian(40, 14)),
         // Degenerate spectra: multiplicities 3 and 2 at n = 7, and a 40×40 with a ten-fold and a
         // five-fold eigenvalue plus a pair at zero.
-        Arguments.of("degenerate n=7",
-            hermitianWithSpectrum(new double[] {-1, -1, -1, 0.5, 2, 2, 3}, 15)),
+        Arguments.of(
+            "degenerate n=7", hermitianWithSpectrum(new double[] {-1, -1, -1, 0.5, 2, 2, 3}, 15)),
         Arguments.of("degenerate n=40", hermitianWithSpectrum(degenerateSpectrum40(), 16)),
         Arguments.of("identity n=7", hermitianWithSpectrum(filled(7, 1.0), 17)));
   }
@@ -254,8 +254,7 @@ abstract class LinalgContractTest {
     double detAbs = Math.hypot(det.real, det.imaginary);
     double prodRe = Math.exp(logAbs) * Math.cos(arg);
     double prodIm = Math.exp(logAbs) * Math.sin(arg);
-    assertThat(Math.hypot(prodRe - det.real, prodIm - det.imaginary) / detAbs)
-        .isLessThan(1e-9);
+    assertThat(Math.hypot(prodRe - det.real, prodIm - det.imaginary) / detAbs).isLessThan(1e-9);
   }
 
   @ParameterizedTest

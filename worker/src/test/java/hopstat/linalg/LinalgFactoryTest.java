@@ -18,8 +18,7 @@ class LinalgFactoryTest {
   @Test
   void nativeRunsOneBlasThread() {
     LinalgFactory.create(LinalgKind.NATIVE);
-    assertThat(org.bytedeco.openblas.presets.openblas_nolapack.blas_get_num_threads())
-        .isEqualTo(1);
+    assertThat(org.bytedeco.openblas.presets.openblas_nolapack.blas_get_num_threads()).isEqualTo(1);
   }
 
   @Test

@@ -52,7 +52,8 @@ final class LinalgTestMatrices {
           for (int i = 0; i < n; i++) {
             double kr = u.getReal(i, k);
             double ki = u.getImag(i, k);
-            u.set(i, j, u.getReal(i, j) - (kr * re - ki * im), u.getImag(i, j) - (kr * im + ki * re));
+            u.set(
+                i, j, u.getReal(i, j) - (kr * re - ki * im), u.getImag(i, j) - (kr * im + ki * re));
           }
         }
         double norm = 0;
@@ -126,8 +127,10 @@ final class LinalgTestMatrices {
     double max = 0;
     for (int i = 0; i < a.numRows; i++) {
       for (int j = 0; j < a.numCols; j++) {
-        max = Math.max(max, Math.hypot(a.getReal(i, j) - b.getReal(i, j),
-            a.getImag(i, j) - b.getImag(i, j)));
+        max =
+            Math.max(
+                max,
+                Math.hypot(a.getReal(i, j) - b.getReal(i, j), a.getImag(i, j) - b.getImag(i, j)));
       }
     }
     return max;

@@ -13,8 +13,8 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Separate solvers on separate threads share the one native library. With one BLAS thread the
- * results must be bitwise identical to a sequential run (common practice: single-threaded
- * OpenBLAS is deterministic for fixed inputs and code path).
+ * results must be bitwise identical to a sequential run (common practice: single-threaded OpenBLAS
+ * is deterministic for fixed inputs and code path).
  */
 class NativeConcurrencyTest {
 

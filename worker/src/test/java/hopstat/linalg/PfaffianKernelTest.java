@@ -28,7 +28,10 @@ class PfaffianKernelTest {
     return a;
   }
 
-  /** Pfaffian by expansion along the first row: Pf(A) = Σ_j (−1)^{j+1} a_{0j} Pf(A without 0, j). Derived, O(n!!). */
+  /**
+   * Pfaffian by expansion along the first row: Pf(A) = Σ_j (−1)^{j+1} a_{0j} Pf(A without 0, j).
+   * Derived, O(n!!).
+   */
   static double bruteForce(DMatrixRMaj a) {
     int n = a.numRows;
     if (n == 0) {
@@ -80,7 +83,8 @@ class PfaffianKernelTest {
     // Closed form (definition): Pf = a01 a23 − a02 a13 + a03 a12.
     for (long seed = 1; seed <= 20; seed++) {
       DMatrixRMaj a = randomAntisymmetric(4, seed);
-      double expected = a.get(0, 1) * a.get(2, 3) - a.get(0, 2) * a.get(1, 3) + a.get(0, 3) * a.get(1, 2);
+      double expected =
+          a.get(0, 1) * a.get(2, 3) - a.get(0, 2) * a.get(1, 3) + a.get(0, 3) * a.get(1, 2);
       assertThat(PfaffianKernel.compute(a, workspace).value()).isCloseTo(expected, within(1e-14));
     }
   }
@@ -93,7 +97,8 @@ class PfaffianKernelTest {
       for (long seed = 1; seed <= 5; seed++) {
         DMatrixRMaj a = randomAntisymmetric(n, 100 * n + seed);
         double expected = bruteForce(a);
-        assertThat(PfaffianKernel.compute(a, workspace).value()).isCloseTo(expected, within(1e-12 * Math.max(1, Math.abs(expected))));
+        assertThat(PfaffianKernel.compute(a, workspace).value())
+            .isCloseTo(expected, within(1e-12 * Math.max(1, Math.abs(expected))));
       }
     }
   }
@@ -106,7 +111,8 @@ class PfaffianKernelTest {
       PfaffianResult r = PfaffianKernel.compute(a, workspace);
       double det = det(a);
       assertThat(det).isPositive();
-      assertThat(2 * r.logAbs()).isCloseTo(Math.log(det), within(1e-9 * Math.max(1, Math.abs(Math.log(det)))));
+      assertThat(2 * r.logAbs())
+          .isCloseTo(Math.log(det), within(1e-9 * Math.max(1, Math.abs(Math.log(det)))));
     }
   }
 
@@ -133,7 +139,8 @@ class PfaffianKernelTest {
         }
       }
       double expected = det(b) * PfaffianKernel.compute(a, workspace).value();
-      assertThat(PfaffianKernel.compute(bab, workspace).value()).isCloseTo(expected, within(1e-9 * Math.abs(expected)));
+      assertThat(PfaffianKernel.compute(bab, workspace).value())
+          .isCloseTo(expected, within(1e-9 * Math.abs(expected)));
     }
   }
 
@@ -145,8 +152,10 @@ class PfaffianKernelTest {
     DMatrixRMaj sum = new DMatrixRMaj(10, 10);
     CommonOps_DDRM.insert(a, sum, 0, 0);
     CommonOps_DDRM.insert(b, sum, 6, 6);
-    double expected = PfaffianKernel.compute(a, workspace).value() * PfaffianKernel.compute(b, workspace).value();
-    assertThat(PfaffianKernel.compute(sum, workspace).value()).isCloseTo(expected, within(1e-13 * Math.abs(expected)));
+    double expected =
+        PfaffianKernel.compute(a, workspace).value() * PfaffianKernel.compute(b, workspace).value();
+    assertThat(PfaffianKernel.compute(sum, workspace).value())
+        .isCloseTo(expected, within(1e-13 * Math.abs(expected)));
   }
 
   @Test
@@ -158,7 +167,8 @@ class PfaffianKernelTest {
     CommonOps_DDRM.scale(1e10, scaled);
     PfaffianResult big = PfaffianKernel.compute(scaled, workspace);
     assertThat(big.sign()).isEqualTo(base.sign());
-    assertThat(big.logAbs()).isCloseTo(base.logAbs() + 100 * Math.log(1e10), within(1e-8 * big.logAbs()));
+    assertThat(big.logAbs())
+        .isCloseTo(base.logAbs() + 100 * Math.log(1e10), within(1e-8 * big.logAbs()));
   }
 
   @Test
@@ -174,8 +184,10 @@ class PfaffianKernelTest {
 
   @Test
   void pivotRatioFlagsSingularityUpToRounding() {
-    // Source-free: a congruence B A Bᵀ with a rank-deficient B (two equal rows) is singular in exact
-    // arithmetic; in floating point some pivot is at rounding level while a generic matrix has none.
+    // Source-free: a congruence B A Bᵀ with a rank-deficient B (two equal rows) is singular in
+    // exact
+    // arithmetic; in floating point some pivot is at rounding level while a generic matrix has
+    // none.
     int n = 8;
     DMatrixRMaj a = randomAntisymmetric(n, 21);
     assertThat(PfaffianKernel.compute(a, workspace).smallestPivotRatio()).isGreaterThan(1e-6);
@@ -206,6 +218,7 @@ class PfaffianKernelTest {
   void rejectsNonAntisymmetricInput() {
     DMatrixRMaj a = randomAntisymmetric(4, 1);
     a.set(0, 1, a.get(0, 1) + 0.1);
-    assertThatThrownBy(() -> PfaffianKernel.compute(a, workspace)).isInstanceOf(IllegalArgumentException.class);
+    assertThatThrownBy(() -> PfaffianKernel.compute(a, workspace))
+        .isInstanceOf(IllegalArgumentException.class);
   }
 }

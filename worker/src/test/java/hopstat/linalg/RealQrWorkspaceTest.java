@@ -5,7 +5,9 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 
-/** Source-free checks of the real Householder QR: orthonormality, reconstruction, inverse residual. */
+/**
+ * Source-free checks of the real Householder QR: orthonormality, reconstruction, inverse residual.
+ */
 class RealQrWorkspaceTest {
 
   private final RealQrWorkspace qr = new RealQrWorkspace();

@@ -36,8 +36,8 @@ class BarSliceOpsTest {
 
   /**
    * Every built-in model of d ≥ 1 is cut into nearest-neighbour slices, open and periodic (M = 3),
-   * with K = M^{d−1} × (sites per cell) × (orbitals per site), a Hermitian H and a non-zero T;
-   * the zero-dimensional cluster is refused.
+   * with K = M^{d−1} × (sites per cell) × (orbitals per site), a Hermitian H and a non-zero T; the
+   * zero-dimensional cluster is refused.
    */
   @Test
   void everyBuiltInModelOfPositiveDimensionIsSliceable() {
@@ -56,7 +56,9 @@ class BarSliceOpsTest {
         ZMatrixRMaj hc = new ZMatrixRMaj(h.numCols, h.numRows);
         org.ejml.dense.row.CommonOps_ZDRM.transposeConjugate(h, hc);
         assertThat(org.ejml.dense.row.MatrixFeatures_ZDRM.isIdentical(h, hc, 1e-14)).isTrue();
-        assertThat(org.ejml.dense.row.NormOps_ZDRM.normF(bar.coupling())).as(model.name()).isGreaterThan(0.0);
+        assertThat(org.ejml.dense.row.NormOps_ZDRM.normF(bar.coupling()))
+            .as(model.name())
+            .isGreaterThan(0.0);
       }
     }
   }
@@ -80,7 +82,9 @@ class BarSliceOpsTest {
           model.addCleanSlice(p, slice, hb);
           ZMatrixRMaj h = new ZMatrixRMaj(1, 1);
           hb.toDense(h);
-          assertThat(org.ejml.dense.row.MatrixFeatures_ZDRM.isIdentical(bar.onSlice(), h, 1e-14)).as("d %d %s M %d", d, b, m).isTrue();
+          assertThat(org.ejml.dense.row.MatrixFeatures_ZDRM.isIdentical(bar.onSlice(), h, 1e-14))
+              .as("d %d %s M %d", d, b, m)
+              .isTrue();
           double[] t = new double[slice.orbitals() * slice.orbitals()];
           model.interSliceHopping(p, slice, t);
           ZMatrixRMaj tz = bar.coupling();
@@ -96,9 +100,9 @@ class BarSliceOpsTest {
   }
 
   /**
-   * Flux-square: the Landau gauge depends on x only, so slices along y are translation invariant;
-   * T carries the Peierls phases e^{2πi p x/q} on its diagonal (derived from the model's hopping).
-   * A periodic cross-section that is not a multiple of q cannot be folded.
+   * Flux-square: the Landau gauge depends on x only, so slices along y are translation invariant; T
+   * carries the Peierls phases e^{2πi p x/q} on its diagonal (derived from the model's hopping). A
+   * periodic cross-section that is not a multiple of q cannot be folded.
    */
   @Test
   void fluxSquareSlicesCarryThePeierlsPhases() {
@@ -107,10 +111,13 @@ class BarSliceOpsTest {
     BarSlices bar = BarSliceOps.extract(model, p, 6, Boundary.PERIODIC);
     ZMatrixRMaj t = bar.coupling();
     for (int x = 0; x < 6; x++) {
-      assertThat(t.getReal(x, x)).isCloseTo(-Math.cos(2 * Math.PI * x / 3), org.assertj.core.data.Offset.offset(1e-14));
-      assertThat(t.getImag(x, x)).isCloseTo(-Math.sin(2 * Math.PI * x / 3), org.assertj.core.data.Offset.offset(1e-14));
+      assertThat(t.getReal(x, x))
+          .isCloseTo(-Math.cos(2 * Math.PI * x / 3), org.assertj.core.data.Offset.offset(1e-14));
+      assertThat(t.getImag(x, x))
+          .isCloseTo(-Math.sin(2 * Math.PI * x / 3), org.assertj.core.data.Offset.offset(1e-14));
     }
-    assertThatThrownBy(() -> BarSliceOps.extract(model, p, 4, Boundary.PERIODIC)).isInstanceOf(IllegalArgumentException.class)
+    assertThatThrownBy(() -> BarSliceOps.extract(model, p, 4, Boundary.PERIODIC))
+        .isInstanceOf(IllegalArgumentException.class)
         .hasMessageContaining("not periodic");
     // open strips need no commensurability
     assertThat(BarSliceOps.extract(model, p, 4, Boundary.OPEN).orbitals()).isEqualTo(4);

@@ -6,9 +6,9 @@ import java.util.function.BiConsumer;
  * Test helper, independent of the kernels: the clean decay rates of a block-tridiagonal chain at
  * energy E from its Bloch problem (derived). With ψ_n = z^n φ a solution needs det h(z) = 0, where
  * h(z) is the Bloch matrix continued to complex z = e^{ik}; z^K det h(z) is a polynomial of degree
- * ≤ 2K. Its coefficients are read off by a discrete Fourier transform of samples on the unit circle,
- * its roots found by the Durand–Kerner (Weierstrass) iteration, and every root with |z| ≠ 1 decays
- * or grows at |ln|z|| per cell. The smallest such rate is the slowest evanescent channel.
+ * ≤ 2K. Its coefficients are read off by a discrete Fourier transform of samples on the unit
+ * circle, its roots found by the Durand–Kerner (Weierstrass) iteration, and every root with |z| ≠ 1
+ * decays or grows at |ln|z|| per cell. The smallest such rate is the slowest evanescent channel.
  */
 public final class EvanescentRoots {
 
@@ -126,14 +126,18 @@ public final class EvanescentRoots {
     return z;
   }
 
-  /** det of a K × K complex matrix by Gaussian elimination with partial pivoting (inputs overwritten). */
+  /**
+   * det of a K × K complex matrix by Gaussian elimination with partial pivoting (inputs
+   * overwritten).
+   */
   static double[] determinant(int k, double[] re, double[] im) {
     double dr = 1;
     double di = 0;
     for (int col = 0; col < k; col++) {
       int piv = col;
       for (int r = col + 1; r < k; r++) {
-        if (Math.hypot(re[r * k + col], im[r * k + col]) > Math.hypot(re[piv * k + col], im[piv * k + col])) {
+        if (Math.hypot(re[r * k + col], im[r * k + col])
+            > Math.hypot(re[piv * k + col], im[piv * k + col])) {
           piv = r;
         }
       }

@@ -23,9 +23,9 @@ class IprKernelTest {
   }
 
   /**
-   * Random real unit vectors (Porter–Thomas): ⟨P⟩ = 3/(N+2) (common practice; derived from
-   * ⟨x⁴⟩ = 3⟨x²⟩² for Gaussian components on the sphere). Tolerance 4 standard errors of the
-   * sample mean, measured from the same sample.
+   * Random real unit vectors (Porter–Thomas): ⟨P⟩ = 3/(N+2) (common practice; derived from ⟨x⁴⟩ =
+   * 3⟨x²⟩² for Gaussian components on the sphere). Tolerance 4 standard errors of the sample mean,
+   * measured from the same sample.
    */
   @Test
   void randomRealVectorsFollowPorterThomas() {

@@ -35,8 +35,8 @@ class LevelRatioKernelTest {
   /**
    * Gaussian orthogonal ensemble: ⟨r⟩ = 0.5307(1) (Atas, Bogomolny, Giraud, Roux, PRL 110, 084101
    * (2013) — value from memory, REFERENCE.md). 30 matrices of N = 300, ratios in the central half
-   * of the semicircle (≈ 5000 ratios, σ(r) ≈ 0.25, so σ ≈ 0.004); tolerance 0.015 ≈ 3.5σ, far
-   * below the GOE–GUE distance 0.07.
+   * of the semicircle (≈ 5000 ratios, σ(r) ≈ 0.25, so σ ≈ 0.004); tolerance 0.015 ≈ 3.5σ, far below
+   * the GOE–GUE distance 0.07.
    */
   @Test
   void goeMatricesGiveTheGoeMean() {
@@ -54,7 +54,8 @@ class LevelRatioKernelTest {
     double[] levels = {0.0, 1.0, 3.0, 4.0, 4.5, 10.0};
     double[] sums = new double[2];
     int[] counts = new int[2];
-    LevelRatioKernel.accumulate(levels, levels.length, new EnergyWindows(2, 0.0, 8.0), sums, counts);
+    LevelRatioKernel.accumulate(
+        levels, levels.length, new EnergyWindows(2, 0.0, 8.0), sums, counts);
     // middle levels 1 (w0), 3 (w0), 4 (w1), 4.5 (w1): ratios 1/2, 1/2, 0.5/1, 0.5/5.5
     assertThat(counts).containsExactly(2, 2);
     assertThat(sums[0]).isCloseTo(1.0, offset(1e-15));
@@ -66,7 +67,8 @@ class LevelRatioKernelTest {
     double[] bdg = {-3, -2, -2, -1, 1, 2, 2, 3};
     double[] out = new double[8];
     int m = LevelRatioKernel.selectLevels(bdg, 8, true, true, out);
-    assertThat(Arrays.copyOf(out, m)).containsExactly(1, 2, 2, 3); // pairs (1,2) and (2,3) not degenerate: all kept
+    assertThat(Arrays.copyOf(out, m))
+        .containsExactly(1, 2, 2, 3); // pairs (1,2) and (2,3) not degenerate: all kept
     double[] kramers = {-1, -1, 0.5, 0.5, 2, 2};
     m = LevelRatioKernel.selectLevels(kramers, 6, false, true, out);
     assertThat(Arrays.copyOf(out, m)).containsExactly(-1, 0.5, 2);
@@ -96,7 +98,8 @@ class LevelRatioKernelTest {
       double radius = complex ? 2 * Math.sqrt(n) : Math.sqrt(2.0 * n);
       double[] sums = new double[1];
       int[] counts = new int[1];
-      LevelRatioKernel.accumulate(e, n, new EnergyWindows(1, -radius / 2, radius / 2), sums, counts);
+      LevelRatioKernel.accumulate(
+          e, n, new EnergyWindows(1, -radius / 2, radius / 2), sums, counts);
       sum += sums[0];
       count += counts[0];
     }

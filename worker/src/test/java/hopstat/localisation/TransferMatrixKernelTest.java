@@ -24,8 +24,10 @@ class TransferMatrixKernelTest {
     return h -> h.addOnsite(0, w * (rng.nextDouble() - 0.5));
   }
 
-  private static LyapunovResult runChain(double energy, double w, double target, long maxSlices, TransferMatrixWorkspace ws) {
-    return TransferMatrixKernel.run(new double[] {-1.0}, 1, new LyapunovSpec(energy, target, maxSlices), chain(w, 17), ws);
+  private static LyapunovResult runChain(
+      double energy, double w, double target, long maxSlices, TransferMatrixWorkspace ws) {
+    return TransferMatrixKernel.run(
+        new double[] {-1.0}, 1, new LyapunovSpec(energy, target, maxSlices), chain(w, 17), ws);
   }
 
   /**
@@ -52,15 +54,19 @@ class TransferMatrixKernelTest {
 
   /**
    * Clean periodic strip of width M: transverse modes ε_q = −2t cos(2πq/M) decouple, each a chain
-   * at energy E − ε_q, so the K = M exponents are arccosh(|E − ε_q|/2t) for evanescent modes and
-   * 0 for propagating ones (derived). M = 4, E = 5: |E − ε_q|/2 = 3.5, 2.5, 2.5, 1.5.
+   * at energy E − ε_q, so the K = M exponents are arccosh(|E − ε_q|/2t) for evanescent modes and 0
+   * for propagating ones (derived). M = 4, E = 5: |E − ε_q|/2 = 3.5, 2.5, 2.5, 1.5.
    */
   @Test
   void cleanStripExponentsAreThoseOfItsTransverseModes() {
     int m = 4;
     double[] t = identityTimes(m, -1.0);
-    TransferMatrixKernel.SliceSource clean = h -> CubicLattices.forEachBond(1, m, Boundary.PERIODIC, (a, b, d) -> h.addHopping(a, b, -1.0, 0.0));
-    LyapunovResult r = TransferMatrixKernel.run(t, m, new LyapunovSpec(5.0, 1e-6, 100_000), clean, workspace);
+    TransferMatrixKernel.SliceSource clean =
+        h ->
+            CubicLattices.forEachBond(
+                1, m, Boundary.PERIODIC, (a, b, d) -> h.addHopping(a, b, -1.0, 0.0));
+    LyapunovResult r =
+        TransferMatrixKernel.run(t, m, new LyapunovSpec(5.0, 1e-6, 100_000), clean, workspace);
     double[] expected = {arccosh(3.5), arccosh(2.5), arccosh(2.5), arccosh(1.5)};
     double[] got = r.exponents();
     assertThat(r.converged()).isTrue();
@@ -71,9 +77,9 @@ class TransferMatrixKernelTest {
   }
 
   /**
-   * The exponents do not depend on the basis inside a slice: with an orthogonal O, H_n → OᵀH_nO
-   * and T → OᵀTO (a non-diagonal T, the general path) give the same product of transfer matrices up
-   * to the similarity diag(O, O), hence the same exponents (derived). Same disorder draws in both
+   * The exponents do not depend on the basis inside a slice: with an orthogonal O, H_n → OᵀH_nO and
+   * T → OᵀTO (a non-diagonal T, the general path) give the same product of transfer matrices up to
+   * the similarity diag(O, O), hence the same exponents (derived). Same disorder draws in both
    * runs. The start frames [1; 0] and [Oᵀ; 0] span the same subspace, so the volume growth, i.e.
    * the sum of the exponents, agrees to rounding; single exponents differ by a start-frame
    * transient that decays like 1/length (1e-4 at 4000 slices is generous).
@@ -87,8 +93,11 @@ class TransferMatrixKernelTest {
     double[] tRotated = conjugate(o, t, m);
     LyapunovSpec spec = new LyapunovSpec(0.3, 0.0, 4_000);
 
-    LyapunovResult plain = TransferMatrixKernel.run(t, m, spec, disorderedStrip(m, w, 5, null), workspace);
-    LyapunovResult rotated = TransferMatrixKernel.run(tRotated, m, spec, disorderedStrip(m, w, 5, o), new TransferMatrixWorkspace());
+    LyapunovResult plain =
+        TransferMatrixKernel.run(t, m, spec, disorderedStrip(m, w, 5, null), workspace);
+    LyapunovResult rotated =
+        TransferMatrixKernel.run(
+            tRotated, m, spec, disorderedStrip(m, w, 5, o), new TransferMatrixWorkspace());
     double sumPlain = 0;
     double sumRotated = 0;
     for (int j = 0; j < m; j++) {
@@ -103,9 +112,9 @@ class TransferMatrixKernelTest {
   /**
    * Weak box disorder, 1D, away from band centre and edges: γ = W²/(96 t² (1 − E²/4t²)) (Thouless
    * 1979; Derrida &amp; Gardner, J. Physique 45, 1283 (1984) — formula from memory, REFERENCE.md).
-   * W = 1, E = 0.5: γ = 0.0111111. Tolerance: 3 × the run's own 1 % error estimate plus 2 % for
-   * the O(W⁴) corrections (REFERENCE.md reports agreement within ~1 % at W = 0.5–1; a 0.3 % run
-   * here gave 1.008 × the formula).
+   * W = 1, E = 0.5: γ = 0.0111111. Tolerance: 3 × the run's own 1 % error estimate plus 2 % for the
+   * O(W⁴) corrections (REFERENCE.md reports agreement within ~1 % at W = 0.5–1; a 0.3 % run here
+   * gave 1.008 × the formula).
    */
   @Test
   void weakDisorderChainFollowsThePerturbativeFormula() {
@@ -115,7 +124,8 @@ class TransferMatrixKernelTest {
     double expected = w * w / (96 * (1 - e * e / 4));
     assertThat(r.converged()).isTrue();
     assertThat(r.relativeError()).isLessThanOrEqualTo(0.01);
-    assertThat(r.smallestPositive()).isCloseTo(expected, offset(expected * (3 * r.relativeError() + 0.02)));
+    assertThat(r.smallestPositive())
+        .isCloseTo(expected, offset(expected * (3 * r.relativeError() + 0.02)));
   }
 
   /**
@@ -143,7 +153,8 @@ class TransferMatrixKernelTest {
     assertThat(b.slices()).isEqualTo(a.slices());
   }
 
-  private static TransferMatrixKernel.SliceSource disorderedStrip(int m, double w, long seed, double[] rotation) {
+  private static TransferMatrixKernel.SliceSource disorderedStrip(
+      int m, double w, long seed, double[] rotation) {
     SplittableRandom rng = new SplittableRandom(seed);
     double[] h = new double[m * m];
     return out -> {
@@ -151,10 +162,14 @@ class TransferMatrixKernelTest {
       for (int i = 0; i < m; i++) {
         h[i * m + i] = w * (rng.nextDouble() - 0.5);
       }
-      CubicLattices.forEachBond(1, m, Boundary.OPEN, (a, b, d) -> {
-        h[a * m + b] = -1.0;
-        h[b * m + a] = -1.0;
-      });
+      CubicLattices.forEachBond(
+          1,
+          m,
+          Boundary.OPEN,
+          (a, b, d) -> {
+            h[a * m + b] = -1.0;
+            h[b * m + a] = -1.0;
+          });
       double[] hh = rotation == null ? h : conjugate(rotation, h, m);
       addDense(out, hh, m);
     };

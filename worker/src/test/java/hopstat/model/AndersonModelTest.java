@@ -40,7 +40,12 @@ class AndersonModelTest {
     for (int x = 0; x < l; x++) {
       for (int y = 0; y < l; y++) {
         for (int z = 0; z < l; z++) {
-          expected[i++] = -2 * 0.8 * (Math.cos(2 * Math.PI * x / l) + Math.cos(2 * Math.PI * y / l) + Math.cos(2 * Math.PI * z / l));
+          expected[i++] =
+              -2
+                  * 0.8
+                  * (Math.cos(2 * Math.PI * x / l)
+                      + Math.cos(2 * Math.PI * y / l)
+                      + Math.cos(2 * Math.PI * z / l));
         }
       }
     }
@@ -61,7 +66,10 @@ class AndersonModelTest {
     }
   }
 
-  /** L = 2 periodic: the wrap bond would duplicate the only bond, so the spectrum is ±t (convention). */
+  /**
+   * L = 2 periodic: the wrap bond would duplicate the only bond, so the spectrum is ±t
+   * (convention).
+   */
   @Test
   void twoSitePeriodicChainHasNoDoubledBond() {
     double[] got = spectrum(new AndersonModel(1), 2, Boundary.PERIODIC);

@@ -20,20 +20,29 @@ import org.junit.jupiter.api.Test;
 
 class CustomModelTest {
 
-  /** Kitaev chain H = Σ_j [−μ c†c − t(c†_{j+1} c_j + h.c.) + Δ(c†_{j+1} c†_j + h.c.)] in Nambu form, class D. */
+  /**
+   * Kitaev chain H = Σ_j [−μ c†c − t(c†_{j+1} c_j + h.c.) + Δ(c†_{j+1} c†_j + h.c.)] in Nambu form,
+   * class D.
+   */
   private static CustomModel kitaev() {
     Amplitude mu = new Amplitude("mu", -1.0, 0.0);
-    return new CustomModel(new CustomModelDefinition(1, List.of(List.of(1.0)), List.of(new Orbital("c", List.of(0.0))),
-        List.of(new Onsite(0, mu)),
-        List.of(new Term(List.of(1), 0, 0, new Amplitude("t", -1.0, 0.0))),
-        List.of(new Term(List.of(1), 0, 0, new Amplitude("delta", 1.0, 0.0))),
-        SymmetryClass.D, List.of()));
+    return new CustomModel(
+        new CustomModelDefinition(
+            1,
+            List.of(List.of(1.0)),
+            List.of(new Orbital("c", List.of(0.0))),
+            List.of(new Onsite(0, mu)),
+            List.of(new Term(List.of(1), 0, 0, new Amplitude("t", -1.0, 0.0))),
+            List.of(new Term(List.of(1), 0, 0, new Amplitude("delta", 1.0, 0.0))),
+            SymmetryClass.D,
+            List.of()));
   }
 
   /**
    * Clean periodic Kitaev chain: E(k) = ±sqrt((2t cos k + μ)² + 4Δ² sin² k), k = 2πn/L (Kitaev,
-   * Phys.-Usp. 44, 131 (2001); formula from memory, re-derived for this convention: ξ_k = −μ − 2t cos k,
-   * D_k = −2iΔ sin k). Tolerance 1e-12: dense eigenvalues of a 16 × 16 matrix of O(1) entries.
+   * Phys.-Usp. 44, 131 (2001); formula from memory, re-derived for this convention: ξ_k = −μ − 2t
+   * cos k, D_k = −2iΔ sin k). Tolerance 1e-12: dense eigenvalues of a 16 × 16 matrix of O(1)
+   * entries.
    */
   @Test
   void nambuChainHasTheKitaevSpectrum() {
@@ -49,11 +58,16 @@ class CustomModelTest {
     ZMatrixRMaj h = new ZMatrixRMaj(lattice.orbitals(), lattice.orbitals());
     b.toDense(h);
     double[] values = new double[lattice.orbitals()];
-    assertThat(LinalgFactory.create(LinalgKind.JAVA).newHermitianEigenSolver().eigenvalues(h, values)).isTrue();
+    assertThat(
+            LinalgFactory.create(LinalgKind.JAVA).newHermitianEigenSolver().eigenvalues(h, values))
+        .isTrue();
     double[] expected = new double[2 * size];
     for (int n = 0; n < size; n++) {
       double k = 2 * Math.PI * n / size;
-      double e = Math.sqrt(Math.pow(2 * t * Math.cos(k) + mu, 2) + 4 * delta * delta * Math.sin(k) * Math.sin(k));
+      double e =
+          Math.sqrt(
+              Math.pow(2 * t * Math.cos(k) + mu, 2)
+                  + 4 * delta * delta * Math.sin(k) * Math.sin(k));
       expected[2 * n] = e;
       expected[2 * n + 1] = -e;
     }
@@ -64,11 +78,16 @@ class CustomModelTest {
     // Source-free: the supplied C = tau_x K holds on the built matrix (U H* U^dagger = -H).
     List<SymmetryOperator> ops = model.symmetryOperators().on(lattice);
     assertThat(ops).hasSize(1);
-    SymmetryCheckResult c = SymmetryCheckKernel.check(h, lattice, ops.get(0), SymmetryCheckKernel.TOLERANCE, new SymmetryCheckWorkspace());
+    SymmetryCheckResult c =
+        SymmetryCheckKernel.check(
+            h, lattice, ops.get(0), SymmetryCheckKernel.TOLERANCE, new SymmetryCheckWorkspace());
     assertThat(c.isSatisfied()).isTrue();
   }
 
-  /** Derived: an onsite potential in Nambu form is +V on the particle and −V on the hole, so C survives. */
+  /**
+   * Derived: an onsite potential in Nambu form is +V on the particle and −V on the hole, so C
+   * survives.
+   */
   @Test
   void onsitePotentialEntersAsAChemicalPotentialShift() {
     CustomModel model = kitaev();
@@ -85,9 +104,20 @@ class CustomModelTest {
 
   @Test
   void definitionRejectsAnOperatorOfTheWrongSize() {
-    SymmetryOperator s = SymmetryOperator.local(Symmetry.CHIRAL, new double[][] {{1}}, new double[][] {{0}});
-    org.assertj.core.api.Assertions.assertThatThrownBy(() -> new CustomModelDefinition(1, List.of(List.of(1.0)),
-            List.of(new Orbital("a", List.of(0.0)), new Orbital("b", List.of(0.5))), List.of(), List.of(), List.of(), SymmetryClass.AIII, List.of(s)))
-        .isInstanceOf(IllegalArgumentException.class).hasMessageContaining("2 orbitals per cell");
+    SymmetryOperator s =
+        SymmetryOperator.local(Symmetry.CHIRAL, new double[][] {{1}}, new double[][] {{0}});
+    org.assertj.core.api.Assertions.assertThatThrownBy(
+            () ->
+                new CustomModelDefinition(
+                    1,
+                    List.of(List.of(1.0)),
+                    List.of(new Orbital("a", List.of(0.0)), new Orbital("b", List.of(0.5))),
+                    List.of(),
+                    List.of(),
+                    List.of(),
+                    SymmetryClass.AIII,
+                    List.of(s)))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessageContaining("2 orbitals per cell");
   }
 }

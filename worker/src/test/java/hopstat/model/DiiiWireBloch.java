@@ -6,7 +6,8 @@ import org.ejml.data.ZMatrixRMaj;
  * The diii-wire's 4 × 4 Bloch Hamiltonian written down from its physics form, independently of the
  * model's real-space entries (derived):
  *
- * <pre>  H(k) = ξ_k (1 ⊗ τ_z) + 2Δ sin k (1 ⊗ τ_y) + 2λ sin k (s_x ⊗ 1),  ξ_k = −2t cos k − μ,</pre>
+ * <pre>  H(k) = ξ_k (1 ⊗ τ_z) + 2Δ sin k (1 ⊗ τ_y) + 2λ sin k (s_x ⊗ 1),  ξ_k = −2t cos k − μ,
+ * </pre>
  *
  * orbital order (↑p, ↑h, ↓p, ↓h), Bloch convention c_j = Σ_k e^{ikj} c_k. Eigenvalues (derived, s_x
  * commutes with the τ terms): ±2λ sin k ± √(ξ_k² + 4Δ² sin²k).
@@ -16,7 +17,8 @@ public final class DiiiWireBloch {
   private DiiiWireBloch() {}
 
   /** H(k) as above. */
-  public static ZMatrixRMaj hamiltonian(double k, double mu, double t, double delta, double lambda) {
+  public static ZMatrixRMaj hamiltonian(
+      double k, double mu, double t, double delta, double lambda) {
     double xi = -2 * t * Math.cos(k) - mu;
     double s = Math.sin(k);
     ZMatrixRMaj h = new ZMatrixRMaj(4, 4);
@@ -36,7 +38,8 @@ public final class DiiiWireBloch {
   }
 
   /** The closed-form eigenvalues at k, unsorted. */
-  public static double[] closedFormEnergies(double k, double mu, double t, double delta, double lambda) {
+  public static double[] closedFormEnergies(
+      double k, double mu, double t, double delta, double lambda) {
     double xi = -2 * t * Math.cos(k) - mu;
     double s = Math.sin(k);
     double root = Math.sqrt(xi * xi + 4 * delta * delta * s * s);
@@ -57,12 +60,14 @@ public final class DiiiWireBloch {
 
   /**
    * {@link #hamiltonian} continued to complex z = e^{ik}: cos k = (z + 1/z)/2, sin k = (z − 1/z)/2i
-   * (entries analytic in z, not Hermitian off the unit circle), for the evanescent roots of det H(z).
+   * (entries analytic in z, not Hermitian off the unit circle), for the evanescent roots of det
+   * H(z).
    *
    * @param z (re, im)
    * @param h overwritten: {re[16], im[16]} row-major
    */
-  public static void continued(double[] z, double mu, double t, double delta, double lambda, double[][] h) {
+  public static void continued(
+      double[] z, double mu, double t, double delta, double lambda, double[][] h) {
     double n2 = z[0] * z[0] + z[1] * z[1];
     double ir = z[0] / n2;
     double ii = -z[1] / n2;

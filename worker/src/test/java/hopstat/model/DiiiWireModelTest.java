@@ -26,7 +26,8 @@ import org.junit.jupiter.api.Test;
 
 class DiiiWireModelTest {
 
-  private final HermitianEigenSolver eig = LinalgFactory.create(LinalgKind.JAVA).newHermitianEigenSolver();
+  private final HermitianEigenSolver eig =
+      LinalgFactory.create(LinalgKind.JAVA).newHermitianEigenSolver();
   private final SymmetryCheckWorkspace symmetryWorkspace = new SymmetryCheckWorkspace();
 
   private double[] spectrum(HamiltonianBuilder b) {
@@ -49,7 +50,8 @@ class DiiiWireModelTest {
     for (int n = 0; n < size; n++) {
       double k = 2 * Math.PI * n / size;
       double[] bloch = new double[4];
-      assertThat(eig.eigenvalues(DiiiWireBloch.hamiltonian(k, mu, t, delta, lambda), bloch)).isTrue();
+      assertThat(eig.eigenvalues(DiiiWireBloch.hamiltonian(k, mu, t, delta, lambda), bloch))
+          .isTrue();
       double[] closed = DiiiWireBloch.closedFormEnergies(k, mu, t, delta, lambda);
       Arrays.sort(closed);
       for (int i = 0; i < 4; i++) {
@@ -58,8 +60,15 @@ class DiiiWireModelTest {
       }
     }
     Arrays.sort(expected);
-    double[] ring = spectrum(aRealisation(DiiiWireModel.NAME).with("mu", mu).with("t", t).with("delta", delta).with("lambda", lambda)
-        .size(size).build());
+    double[] ring =
+        spectrum(
+            aRealisation(DiiiWireModel.NAME)
+                .with("mu", mu)
+                .with("t", t)
+                .with("delta", delta)
+                .with("lambda", lambda)
+                .size(size)
+                .build());
     for (int i = 0; i < expected.length; i++) {
       assertThat(ring[i]).as("level %d", i).isCloseTo(expected[i], within(1e-12));
     }
@@ -71,11 +80,26 @@ class DiiiWireModelTest {
     // pairing shifts keep all three, so the class stays DIII.
     Model model = ModelCatalog.find(DiiiWireModel.NAME).orElseThrow();
     for (String kind : List.of("onsite-box", "onsite-gauss", "pairing-box")) {
-      assertThat(SymmetryCheckOps.effectiveClass(model, List.of(new hopstat.disorder.DisorderTerm(kind, 1.0, Map.of()))))
-          .as(kind).isEqualTo(SymmetryClass.DIII);
-      TestRealisation r = aRealisation(DiiiWireModel.NAME).with("mu", 0.4).with("lambda", 0.7).size(7).seed(5).disorder(kind, 1.5);
+      assertThat(
+              SymmetryCheckOps.effectiveClass(
+                  model, List.of(new hopstat.disorder.DisorderTerm(kind, 1.0, Map.of()))))
+          .as(kind)
+          .isEqualTo(SymmetryClass.DIII);
+      TestRealisation r =
+          aRealisation(DiiiWireModel.NAME)
+              .with("mu", 0.4)
+              .with("lambda", 0.7)
+              .size(7)
+              .seed(5)
+              .disorder(kind, 1.5);
       for (SymmetryOperator op : model.symmetryOperators().on(r.lattice())) {
-        SymmetryCheckResult check = SymmetryCheckKernel.check(dense(r.build()), r.lattice(), op, SymmetryCheckKernel.TOLERANCE, symmetryWorkspace);
+        SymmetryCheckResult check =
+            SymmetryCheckKernel.check(
+                dense(r.build()),
+                r.lattice(),
+                op,
+                SymmetryCheckKernel.TOLERANCE,
+                symmetryWorkspace);
         assertThat(check.isSatisfied()).as("%s under %s", op.symmetry(), kind).isTrue();
       }
     }
@@ -86,14 +110,30 @@ class DiiiWireModelTest {
   void zeemanDisorderBreaksTimeReversalOnlyAndLeavesClassD() {
     // Derived: h s_z is odd under T = i s_y K and even under C in BdG form.
     Model model = ModelCatalog.find(DiiiWireModel.NAME).orElseThrow();
-    assertThat(SymmetryCheckOps.effectiveClass(model, List.of(new hopstat.disorder.DisorderTerm("zeeman-box", 1.0, Map.of()))))
+    assertThat(
+            SymmetryCheckOps.effectiveClass(
+                model, List.of(new hopstat.disorder.DisorderTerm("zeeman-box", 1.0, Map.of()))))
         .isEqualTo(SymmetryClass.D);
-    TestRealisation r = aRealisation(DiiiWireModel.NAME).with("mu", 0.4).with("lambda", 0.7).size(7).seed(5).disorder("zeeman-box", 1.0);
+    TestRealisation r =
+        aRealisation(DiiiWireModel.NAME)
+            .with("mu", 0.4)
+            .with("lambda", 0.7)
+            .size(7)
+            .seed(5)
+            .disorder("zeeman-box", 1.0);
     for (SymmetryOperator op : model.symmetryOperators().on(r.lattice())) {
-      SymmetryCheckResult check = SymmetryCheckKernel.check(dense(r.build()), r.lattice(), op, SymmetryCheckKernel.TOLERANCE, symmetryWorkspace);
-      assertThat(check.isSatisfied()).as("%s", op.symmetry()).isEqualTo(op.symmetry() == Symmetry.PARTICLE_HOLE);
+      SymmetryCheckResult check =
+          SymmetryCheckKernel.check(
+              dense(r.build()), r.lattice(), op, SymmetryCheckKernel.TOLERANCE, symmetryWorkspace);
+      assertThat(check.isSatisfied())
+          .as("%s", op.symmetry())
+          .isEqualTo(op.symmetry() == Symmetry.PARTICLE_HOLE);
     }
-    assertThat(DisorderCatalog.find("zeeman-box").orElseThrow().whyNotApplicable(ModelCatalog.find("pwave-wire").orElseThrow())).isPresent();
+    assertThat(
+            DisorderCatalog.find("zeeman-box")
+                .orElseThrow()
+                .whyNotApplicable(ModelCatalog.find("pwave-wire").orElseThrow()))
+        .isPresent();
     assertThat(DisorderCatalog.find("zeeman-box").orElseThrow().whyNotApplicable(model)).isEmpty();
   }
 
@@ -112,14 +152,30 @@ class DiiiWireModelTest {
 
   @Test
   void openNonTrivialChainHasAKramersPairOfMajoranasAtEachEnd() {
-    // Kitaev (2001) per spin block, Kramers partners by T (Qi, Hughes, Zhang 2010; common practice):
-    // four BdG levels (two Kramers doublets, ±E each) vanish exponentially in L; with S_z broken and
+    // Kitaev (2001) per spin block, Kramers partners by T (Qi, Hughes, Zhang 2010; common
+    // practice):
+    // four BdG levels (two Kramers doublets, ±E each) vanish exponentially in L; with S_z broken
+    // and
     // disorder too. The rest of the spectrum is Kramers-degenerate (T² = −1, derived) and gapped.
     for (long seed = 1; seed <= 2; seed++) {
-      TestRealisation shortChain = aRealisation(DiiiWireModel.NAME).with("mu", 0.5).with("delta", 0.8).with("lambda", 0.4)
-          .boundary(Boundary.OPEN).size(12).seed(seed).disorder("onsite-box", 1.0);
-      TestRealisation longChain = aRealisation(DiiiWireModel.NAME).with("mu", 0.5).with("delta", 0.8).with("lambda", 0.4)
-          .boundary(Boundary.OPEN).size(36).seed(seed).disorder("onsite-box", 1.0);
+      TestRealisation shortChain =
+          aRealisation(DiiiWireModel.NAME)
+              .with("mu", 0.5)
+              .with("delta", 0.8)
+              .with("lambda", 0.4)
+              .boundary(Boundary.OPEN)
+              .size(12)
+              .seed(seed)
+              .disorder("onsite-box", 1.0);
+      TestRealisation longChain =
+          aRealisation(DiiiWireModel.NAME)
+              .with("mu", 0.5)
+              .with("delta", 0.8)
+              .with("lambda", 0.4)
+              .boundary(Boundary.OPEN)
+              .size(36)
+              .seed(seed)
+              .disorder("onsite-box", 1.0);
       double[] s = smallest(shortChain);
       double[] l = smallest(longChain);
       assertThat(l[3]).as("seed %d", seed).isLessThan(1e-8);
@@ -131,8 +187,14 @@ class DiiiWireModelTest {
       }
     }
     // Trivial side: no level near zero.
-    double[] trivial = smallest(aRealisation(DiiiWireModel.NAME).with("mu", 3.0).with("delta", 0.8).with("lambda", 0.4)
-        .boundary(Boundary.OPEN).size(36));
+    double[] trivial =
+        smallest(
+            aRealisation(DiiiWireModel.NAME)
+                .with("mu", 3.0)
+                .with("delta", 0.8)
+                .with("lambda", 0.4)
+                .boundary(Boundary.OPEN)
+                .size(36));
     assertThat(trivial[0]).isGreaterThan(0.5);
   }
 
@@ -147,8 +209,15 @@ class DiiiWireModelTest {
     for (long seed = 1; seed <= 8; seed++) {
       double mu = 1.4;
       double w = 3.0;
-      TestRealisation r = aRealisation(DiiiWireModel.NAME).with("mu", mu).with("delta", 0.6).size(size).seed(seed).disorder("zeeman-box", w);
-      MajoranaNumberResult q = MajoranaKernel.majoranaNumber((MajoranaForm) r.model(), r.lattice(), r.build(), ws);
+      TestRealisation r =
+          aRealisation(DiiiWireModel.NAME)
+              .with("mu", mu)
+              .with("delta", 0.6)
+              .size(size)
+              .seed(seed)
+              .disorder("zeeman-box", w);
+      MajoranaNumberResult q =
+          MajoranaKernel.majoranaNumber((MajoranaForm) r.model(), r.lattice(), r.build(), ws);
       RandomGenerator random = SeedOps.generator(seed);
       double[] h = new double[size];
       for (int s = 0; s < size; s++) {

@@ -24,14 +24,22 @@ class MajoranaOpsTest {
 
   @Test
   void pwaveWireMajoranaMatrixMatchesTheMajoranaHamiltonian() {
-    // REFERENCE (derived): H = (i/2) Σ_j [−μ_j a_j b_j + (Δ − t) a_j b_{j+1} + (Δ + t) b_j a_{j+1}],
-    // so A[a_j][b_j] = −μ_j, A[a_j][b_{j+1}] = Δ − t, A[b_j][a_{j+1}] = Δ + t (closing bond × phase).
+    // REFERENCE (derived): H = (i/2) Σ_j [−μ_j a_j b_j + (Δ − t) a_j b_{j+1} + (Δ + t) b_j
+    // a_{j+1}],
+    // so A[a_j][b_j] = −μ_j, A[a_j][b_{j+1}] = Δ − t, A[b_j][a_{j+1}] = Δ + t (closing bond ×
+    // phase).
     // Δ ≠ t so that the a_j b_{j+1} entries are non-zero (a swapped index would show).
     int size = 7;
     double t = 0.8;
     double delta = 0.3;
-    TestRealisation r = aRealisation("pwave-wire").with("mu", 0.4).with("t", t).with("delta", delta).size(size)
-        .disorder("onsite-box", 2.0).seed(5);
+    TestRealisation r =
+        aRealisation("pwave-wire")
+            .with("mu", 0.4)
+            .with("t", t)
+            .with("delta", delta)
+            .size(size)
+            .disorder("onsite-box", 2.0)
+            .seed(5);
     HamiltonianBuilder terms = r.build();
     double[] mu = new double[size];
     var random = hopstat.task.SeedOps.generator(5);
@@ -50,7 +58,9 @@ class MajoranaOpsTest {
         put(expected, MajoranaOps.b(j), MajoranaOps.a(k), s * (delta + t));
       }
       for (int i = 0; i < expected.data.length; i++) {
-        assertThat(a.data[i]).as("entry %d, phase %d", i, phase).isCloseTo(expected.data[i], within(TOL));
+        assertThat(a.data[i])
+            .as("entry %d, phase %d", i, phase)
+            .isCloseTo(expected.data[i], within(TOL));
       }
     }
   }
@@ -95,7 +105,10 @@ class MajoranaOpsTest {
     HamiltonianBuilder terms = new HamiltonianBuilder();
     terms.reset(8);
     terms.addHopping(0, 2, 1.0, 0.0); // particle hopping without the hole partner
-    assertThatThrownBy(() -> MajoranaOps.toMajoranaMatrix(chain, terms, 1, new DMatrixRMaj(1, 1), new DMatrixRMaj(1, 1)))
+    assertThatThrownBy(
+            () ->
+                MajoranaOps.toMajoranaMatrix(
+                    chain, terms, 1, new DMatrixRMaj(1, 1), new DMatrixRMaj(1, 1)))
         .isInstanceOf(IllegalStateException.class);
   }
 
@@ -107,11 +120,19 @@ class MajoranaOpsTest {
     double mu = 0.7;
     double t = 1.1;
     double delta = 0.4;
-    HamiltonianBuilder terms = aRealisation("pwave-wire").with("mu", mu).with("t", t).with("delta", delta).size(size).build();
+    HamiltonianBuilder terms =
+        aRealisation("pwave-wire")
+            .with("mu", mu)
+            .with("t", t)
+            .with("delta", delta)
+            .size(size)
+            .build();
     double[] expected = new double[2 * size];
     for (int n = 0; n < size; n++) {
       double k = 2 * Math.PI * n / size;
-      double e = Math.sqrt(Math.pow(2 * t * Math.cos(k) + mu, 2) + 4 * delta * delta * Math.pow(Math.sin(k), 2));
+      double e =
+          Math.sqrt(
+              Math.pow(2 * t * Math.cos(k) + mu, 2) + 4 * delta * delta * Math.pow(Math.sin(k), 2));
       expected[2 * n] = e;
       expected[2 * n + 1] = -e;
     }
@@ -125,11 +146,13 @@ class MajoranaOpsTest {
     int size = 7;
     double coupling = 0.9;
     double field = 0.35;
-    HamiltonianBuilder terms = aRealisation("ising-chain").with("J", coupling).with("h", field).size(size).build();
+    HamiltonianBuilder terms =
+        aRealisation("ising-chain").with("J", coupling).with("h", field).size(size).build();
     double[] expected = new double[2 * size];
     for (int n = 0; n < size; n++) {
       double k = 2 * Math.PI * n / size;
-      double e = 2 * Math.sqrt(coupling * coupling + field * field - 2 * coupling * field * Math.cos(k));
+      double e =
+          2 * Math.sqrt(coupling * coupling + field * field - 2 * coupling * field * Math.cos(k));
       expected[2 * n] = e;
       expected[2 * n + 1] = -e;
     }

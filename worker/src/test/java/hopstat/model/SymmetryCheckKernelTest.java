@@ -21,16 +21,20 @@ class SymmetryCheckKernelTest {
     return h;
   }
 
-  /** Derived: the bhz Bloch form with the Rashba-like term satisfies i s_y H*(−k) (−i s_y) = H(k). */
+  /**
+   * Derived: the bhz Bloch form with the Rashba-like term satisfies i s_y H*(−k) (−i s_y) = H(k).
+   */
   @Test
   void bhzWithRashbaHasTimeReversal() {
     BhzModel model = new BhzModel();
     Lattice lattice = model.lattice(5, Boundary.PERIODIC);
     HamiltonianBuilder b = new HamiltonianBuilder();
     b.reset(lattice.orbitals());
-    model.addClean(new ParameterValues(Map.of("A", 1.0, "B", 1.0, "M", 2.0, "rashba", 0.4)), lattice, b);
+    model.addClean(
+        new ParameterValues(Map.of("A", 1.0, "B", 1.0, "M", 2.0, "rashba", 0.4)), lattice, b);
     SymmetryOperator t = model.symmetryOperators().on(lattice).get(0);
-    SymmetryCheckResult r = SymmetryCheckKernel.check(dense(b), lattice, t, SymmetryCheckKernel.TOLERANCE, workspace);
+    SymmetryCheckResult r =
+        SymmetryCheckKernel.check(dense(b), lattice, t, SymmetryCheckKernel.TOLERANCE, workspace);
     assertThat(r.symmetry()).isEqualTo(Symmetry.TIME_REVERSAL);
     assertThat(r.relativeViolation()).isLessThan(1e-14);
     assertThat(r.isSatisfied()).isTrue();
@@ -46,7 +50,8 @@ class SymmetryCheckKernelTest {
     Lattice lattice = model.lattice(4, Boundary.PERIODIC);
     HamiltonianBuilder b = new HamiltonianBuilder();
     b.reset(lattice.orbitals());
-    model.addClean(new ParameterValues(Map.of("A", 1.0, "B", 1.0, "M", 2.0, "rashba", 0.0)), lattice, b);
+    model.addClean(
+        new ParameterValues(Map.of("A", 1.0, "B", 1.0, "M", 2.0, "rashba", 0.0)), lattice, b);
     double h = 0.05;
     for (int s = 0; s < lattice.sites(); s++) {
       for (int o = 0; o < 4; o++) {
@@ -59,7 +64,13 @@ class SymmetryCheckKernelTest {
       norm += x * x;
     }
     double expected = 2.0 * h * Math.sqrt(lattice.orbitals()) / Math.sqrt(norm);
-    SymmetryCheckResult r = SymmetryCheckKernel.check(hPrime, lattice, model.symmetryOperators().on(lattice).get(0), SymmetryCheckKernel.TOLERANCE, workspace);
+    SymmetryCheckResult r =
+        SymmetryCheckKernel.check(
+            hPrime,
+            lattice,
+            model.symmetryOperators().on(lattice).get(0),
+            SymmetryCheckKernel.TOLERANCE,
+            workspace);
     assertThat(r.relativeViolation()).isCloseTo(expected, within(1e-12));
     assertThat(r.isSatisfied()).isFalse();
   }
@@ -83,18 +94,34 @@ class SymmetryCheckKernelTest {
         b.addHopping(x + size * ((y + 1) % size), s, -1.0, 0.0);
       }
     }
-    SymmetryOperator chiral = new SymmetryOperator(Symmetry.CHIRAL, 1, new double[] {1}, new double[] {0}, signs);
+    SymmetryOperator chiral =
+        new SymmetryOperator(Symmetry.CHIRAL, 1, new double[] {1}, new double[] {0}, signs);
     assertThat(chiral.isAntiunitary()).isFalse();
-    assertThat(SymmetryCheckKernel.check(dense(b), lattice, chiral, SymmetryCheckKernel.TOLERANCE, workspace).relativeViolation()).isEqualTo(0.0);
+    assertThat(
+            SymmetryCheckKernel.check(
+                    dense(b), lattice, chiral, SymmetryCheckKernel.TOLERANCE, workspace)
+                .relativeViolation())
+        .isEqualTo(0.0);
     b.addOnsite(3, 0.5);
-    assertThat(SymmetryCheckKernel.check(dense(b), lattice, chiral, SymmetryCheckKernel.TOLERANCE, workspace).isSatisfied()).isFalse();
+    assertThat(
+            SymmetryCheckKernel.check(
+                    dense(b), lattice, chiral, SymmetryCheckKernel.TOLERANCE, workspace)
+                .isSatisfied())
+        .isFalse();
   }
 
   @Test
   void operatorsMustBeUnitaryAndSignsPlusMinusOne() {
-    assertThatThrownBy(() -> SymmetryOperator.local(Symmetry.TIME_REVERSAL, new double[][] {{1, 1}, {0, 1}}, new double[2][2]))
-        .isInstanceOf(IllegalArgumentException.class).hasMessageContaining("not unitary");
-    assertThatThrownBy(() -> new SymmetryOperator(Symmetry.CHIRAL, 1, new double[] {1}, new double[] {0}, new double[] {0.5}))
+    assertThatThrownBy(
+            () ->
+                SymmetryOperator.local(
+                    Symmetry.TIME_REVERSAL, new double[][] {{1, 1}, {0, 1}}, new double[2][2]))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessageContaining("not unitary");
+    assertThatThrownBy(
+            () ->
+                new SymmetryOperator(
+                    Symmetry.CHIRAL, 1, new double[] {1}, new double[] {0}, new double[] {0.5}))
         .isInstanceOf(IllegalArgumentException.class);
   }
 }

@@ -17,8 +17,15 @@ class CsrHermitianMatrixTest {
 
   /** A disordered open qwz sample plus deliberately repeated terms (duplicates must be summed). */
   private static HamiltonianBuilder terms() {
-    HamiltonianBuilder b = aRealisation("qwz").with("m", 1.0).with("t", 1.0).size(5).boundary(Boundary.OPEN)
-        .disorder("onsite-box", 2.0).seed(11).build();
+    HamiltonianBuilder b =
+        aRealisation("qwz")
+            .with("m", 1.0)
+            .with("t", 1.0)
+            .size(5)
+            .boundary(Boundary.OPEN)
+            .disorder("onsite-box", 2.0)
+            .seed(11)
+            .build();
     b.addHopping(0, 3, 0.25, -0.5);
     b.addHopping(3, 0, 0.125, 0.75);
     b.addHopping(7, 8, 0.3, 0.1);
@@ -27,7 +34,9 @@ class CsrHermitianMatrixTest {
     return b;
   }
 
-  /** Derived: H_ij = conj(H_ji) for every stored entry; the columns of each row increase strictly. */
+  /**
+   * Derived: H_ij = conj(H_ji) for every stored entry; the columns of each row increase strictly.
+   */
   @Test
   void storedMatrixIsHermitianWithSortedUniqueColumns() {
     CsrHermitianMatrix h = new CsrHermitianMatrix();
@@ -47,14 +56,23 @@ class CsrHermitianMatrixTest {
     }
   }
 
-  /** Derived: the CSR entries equal HamiltonianBuilder.toDense (duplicates summed), and so does the product with a vector. */
+  /**
+   * Derived: the CSR entries equal HamiltonianBuilder.toDense (duplicates summed), and so does the
+   * product with a vector.
+   */
   @Test
   void matchesTheDenseMatrixAndItsProduct() {
     HamiltonianBuilder b = terms();
     ZMatrixRMaj dense = new ZMatrixRMaj(1, 1);
     b.toDense(dense);
     CsrHermitianMatrix h = new CsrHermitianMatrix();
-    h.assemble(aRealisation("qwz").with("m", -1.0).with("t", 1.0).size(8).disorder("onsite-box", 1.0).build()); // a different, larger matrix first: reuse must not leak entries
+    h.assemble(
+        aRealisation("qwz")
+            .with("m", -1.0)
+            .with("t", 1.0)
+            .size(8)
+            .disorder("onsite-box", 1.0)
+            .build()); // a different, larger matrix first: reuse must not leak entries
     h.assemble(b);
     int n = b.dimension();
     ZMatrixRMaj fromCsr = new ZMatrixRMaj(n, n);
@@ -85,7 +103,10 @@ class CsrHermitianMatrixTest {
     }
   }
 
-  /** Gershgorin circle theorem: every dense eigenvalue lies within the bounds; the bounds are not absurdly loose. */
+  /**
+   * Gershgorin circle theorem: every dense eigenvalue lies within the bounds; the bounds are not
+   * absurdly loose.
+   */
   @Test
   void gershgorinBoundsContainTheSpectrum() {
     HamiltonianBuilder b = terms();
@@ -93,7 +114,11 @@ class CsrHermitianMatrixTest {
     b.toDense(dense);
     int n = b.dimension();
     double[] ev = new double[n];
-    assertThat(LinalgFactory.create(LinalgKind.NATIVE).newHermitianEigenSolver().eigenvalues(dense, ev)).isTrue();
+    assertThat(
+            LinalgFactory.create(LinalgKind.NATIVE)
+                .newHermitianEigenSolver()
+                .eigenvalues(dense, ev))
+        .isTrue();
     CsrHermitianMatrix h = new CsrHermitianMatrix();
     h.assemble(b);
     double[] bounds = new double[2];

@@ -25,16 +25,30 @@ class KpmKernelTest {
 
   /** A small disordered open qwz sample (N = 50). */
   private static HamiltonianBuilder smallSample() {
-    return aRealisation("qwz").with("m", 1.0).with("t", 1.0).size(5).boundary(Boundary.OPEN).disorder("onsite-box", 2.0).seed(3).build();
+    return aRealisation("qwz")
+        .with("m", 1.0)
+        .with("t", 1.0)
+        .size(5)
+        .boundary(Boundary.OPEN)
+        .disorder("onsite-box", 2.0)
+        .seed(3)
+        .build();
   }
 
-  /** Exact μ_n = (1/N) Σ_k T_n(x_k) = (1/N) Σ_k cos(n arccos x_k) (Weiße et al. 2006, eq. 27) from dense eigenvalues. */
+  /**
+   * Exact μ_n = (1/N) Σ_k T_n(x_k) = (1/N) Σ_k cos(n arccos x_k) (Weiße et al. 2006, eq. 27) from
+   * dense eigenvalues.
+   */
   private static double[] exactMoments(HamiltonianBuilder b, ChebyshevScale scale, int moments) {
     ZMatrixRMaj dense = new ZMatrixRMaj(1, 1);
     b.toDense(dense);
     int n = b.dimension();
     double[] ev = new double[n];
-    assertThat(LinalgFactory.create(LinalgKind.NATIVE).newHermitianEigenSolver().eigenvalues(dense, ev)).isTrue();
+    assertThat(
+            LinalgFactory.create(LinalgKind.NATIVE)
+                .newHermitianEigenSolver()
+                .eigenvalues(dense, ev))
+        .isTrue();
     double[] mu = new double[moments];
     for (double e : ev) {
       double theta = Math.acos(scale.rescaled(e));
@@ -73,8 +87,8 @@ class KpmKernelTest {
 
   /**
    * Stochastic trace (Weiße et al. 2006, Sec. II.D): with random-phase vectors the variance of
-   * ⟨r|T_n|r⟩ is Σ_{i≠j}|T_n,ij|² ≤ N (derived, ‖T_n(H̃)‖ ≤ 1), so each μ_n is within 1/√(NR)
-   * per standard deviation; checked at 5 standard deviations. μ_0 = 1 exactly (|r_i| = 1).
+   * ⟨r|T_n|r⟩ is Σ_{i≠j}|T_n,ij|² ≤ N (derived, ‖T_n(H̃)‖ ≤ 1), so each μ_n is within 1/√(NR) per
+   * standard deviation; checked at 5 standard deviations. μ_0 = 1 exactly (|r_i| = 1).
    */
   @Test
   void stochasticMomentsAgreeWithinTheirVarianceBound() {
@@ -85,7 +99,8 @@ class KpmKernelTest {
     double[] exact = exactMoments(b, scale, MOMENTS);
     int vectors = 64;
     double[] mu = new double[MOMENTS];
-    KpmKernel.stochasticMoments(h, scale, MOMENTS, vectors, new SplittableRandom(17), new KpmWorkspace(), mu);
+    KpmKernel.stochasticMoments(
+        h, scale, MOMENTS, vectors, new SplittableRandom(17), new KpmWorkspace(), mu);
     assertThat(mu[0]).isCloseTo(1.0, within(1e-12));
     double sigma = 1.0 / Math.sqrt((double) h.dimension() * vectors);
     double worst = 0;
@@ -98,9 +113,9 @@ class KpmKernelTest {
   }
 
   /**
-   * Normalisation ∫ρ dE = g_0 μ_0 = 1 (derived: ∫T_n(x)/(π√(1 − x²)) dx = δ_{n0}). With E = b + a cos θ
-   * the integrand ρ·a sin θ is a trigonometric polynomial of degree &lt; M in θ, so the midpoint rule
-   * with 4M nodes is exact up to round-off (1e−12).
+   * Normalisation ∫ρ dE = g_0 μ_0 = 1 (derived: ∫T_n(x)/(π√(1 − x²)) dx = δ_{n0}). With E = b + a
+   * cos θ the integrand ρ·a sin θ is a trigonometric polynomial of degree &lt; M in θ, so the
+   * midpoint rule with 4M nodes is exact up to round-off (1e−12).
    */
   @Test
   void densityIsNormalised() {
@@ -108,7 +123,8 @@ class KpmKernelTest {
     h.assemble(smallSample());
     ChebyshevScale scale = KpmKernel.scale(h);
     double[] mu = new double[MOMENTS];
-    KpmKernel.stochasticMoments(h, scale, MOMENTS, 4, new SplittableRandom(2), new KpmWorkspace(), mu);
+    KpmKernel.stochasticMoments(
+        h, scale, MOMENTS, 4, new SplittableRandom(2), new KpmWorkspace(), mu);
     double[] g = new double[MOMENTS];
     KpmKernel.jacksonKernel(MOMENTS, g);
     int nodes = 4 * MOMENTS;
@@ -116,7 +132,12 @@ class KpmKernelTest {
     for (int j = 0; j < nodes; j++) {
       double theta = Math.PI * (j + 0.5) / nodes;
       double e = scale.energy(Math.cos(theta));
-      integral += KpmKernel.density(mu, g, MOMENTS, scale, e) * scale.halfWidth() * Math.sin(theta) * Math.PI / nodes;
+      integral +=
+          KpmKernel.density(mu, g, MOMENTS, scale, e)
+              * scale.halfWidth()
+              * Math.sin(theta)
+              * Math.PI
+              / nodes;
     }
     assertThat(integral).isCloseTo(1.0, within(1e-12));
     // outside the rescaled interval the density is zero by definition
@@ -128,13 +149,13 @@ class KpmKernelTest {
    * (derived, van Hove). KPM bias from the Jackson broadening σ ≈ πa/M = 0.05 (Weiße et al. 2006,
    * eq. 72; a = 2.02, M = 128 here) is ≈ σ²ρ''/2 &lt; 1e−3 for |E| ≤ 1.5 (derived, ρ'' ≤ 0.7); the
    * stochastic error of ρ is ≈ 1.5e−3 per standard deviation at N = 4·10⁴, R = 16 (derived from var
-   * μ_n ≈ 1/(2NR) on a ring).
-   * Tolerance 1e−2 ≈ 5 standard deviations.
+   * μ_n ≈ 1/(2NR) on a ring). Tolerance 1e−2 ≈ 5 standard deviations.
    */
   @Test
   void cleanChainDensityMatchesTheClosedFormAwayFromTheBandEdges() {
     int size = 40_000;
-    HamiltonianBuilder b = aRealisation("anderson-1d").with("t", 1.0).size(size).boundary(Boundary.PERIODIC).build();
+    HamiltonianBuilder b =
+        aRealisation("anderson-1d").with("t", 1.0).size(size).boundary(Boundary.PERIODIC).build();
     CsrHermitianMatrix h = new CsrHermitianMatrix();
     h.assemble(b);
     ChebyshevScale scale = KpmKernel.scale(h);
@@ -142,22 +163,25 @@ class KpmKernelTest {
     assertThat(scale.halfWidth()).isCloseTo(2.0 / (1 - KpmKernel.EPSILON), within(1e-12));
     int moments = 128;
     double[] mu = new double[moments];
-    KpmKernel.stochasticMoments(h, scale, moments, 16, new SplittableRandom(2026), new KpmWorkspace(), mu);
+    KpmKernel.stochasticMoments(
+        h, scale, moments, 16, new SplittableRandom(2026), new KpmWorkspace(), mu);
     double[] g = new double[moments];
     KpmKernel.jacksonKernel(moments, g);
     for (double e = -1.5; e <= 1.5 + 1e-9; e += 0.25) {
       double analytic = 1.0 / (Math.PI * Math.sqrt(4.0 - e * e));
-      assertThat(KpmKernel.density(mu, g, moments, scale, e)).as("rho(%s)", e).isCloseTo(analytic, within(1e-2));
+      assertThat(KpmKernel.density(mu, g, moments, scale, e))
+          .as("rho(%s)", e)
+          .isCloseTo(analytic, within(1e-2));
     }
     // the odd moments of a bipartite chain vanish exactly in the mean; the estimate stays small
     assertThat(Math.abs(mu[1])).isLessThan(5.0 / Math.sqrt(2.0 * size * 16));
   }
 
   /**
-   * Jackson kernel: g_0 = 1 and 0 &lt; g_n ≤ 1 decreasing (Weiße et al. 2006, eq. 71 and Sec. II.C.3);
-   * the Jackson-smoothed step Σ c_n T_n(x) approaches θ(x_F − x) away from the step: within 1e−3 at
-   * |x − x_F| ≥ 10π/M (derived from the kernel's Gaussian-like decay with width π/M), and equals 1/2
-   * within 0.05 at x = x_F (symmetric broadening).
+   * Jackson kernel: g_0 = 1 and 0 &lt; g_n ≤ 1 decreasing (Weiße et al. 2006, eq. 71 and Sec.
+   * II.C.3); the Jackson-smoothed step Σ c_n T_n(x) approaches θ(x_F − x) away from the step:
+   * within 1e−3 at |x − x_F| ≥ 10π/M (derived from the kernel's Gaussian-like decay with width
+   * π/M), and equals 1/2 within 0.05 at x = x_F (symmetric broadening).
    */
   @Test
   void jacksonStepApproachesTheStepFunction() {
@@ -189,8 +213,8 @@ class KpmKernelTest {
   }
 
   /**
-   * applySeries with c = e_3 gives T_3(H̃)x = 4H̃³x − 3H̃x (derived from T_3(x) = 4x³ − 3x), and with
-   * c = (c_0, c_1) the affine c_0 x + c_1 H̃x; round-off only.
+   * applySeries with c = e_3 gives T_3(H̃)x = 4H̃³x − 3H̃x (derived from T_3(x) = 4x³ − 3x), and
+   * with c = (c_0, c_1) the affine c_0 x + c_1 H̃x; round-off only.
    */
   @Test
   void seriesApplicationMatchesExplicitPolynomials() {

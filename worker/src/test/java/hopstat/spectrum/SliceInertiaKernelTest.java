@@ -29,12 +29,19 @@ class SliceInertiaKernelTest {
 
   @ParameterizedTest(name = "{0} m={1} W={2} E={3} {4}")
   @CsvSource({
-      "qwz, -1.0, 0.0, 0.0, NATIVE", "qwz, 1.0, 2.5, 0.31, NATIVE", "qwz, 3.0, 1.0, -0.7, JAVA",
-      "haldane, 0.2, 1.5, 0.05, NATIVE", "haldane, 0.0, 0.0, 0.13, JAVA"})
-  void hamiltonianCountsMatchEigenvalues(String model, double m, double w, double energy, LinalgKind kind) {
+    "qwz, -1.0, 0.0, 0.0, NATIVE",
+    "qwz, 1.0, 2.5, 0.31, NATIVE",
+    "qwz, 3.0, 1.0, -0.7, JAVA",
+    "haldane, 0.2, 1.5, 0.05, NATIVE",
+    "haldane, 0.0, 0.0, 0.13, JAVA"
+  })
+  void hamiltonianCountsMatchEigenvalues(
+      String model, double m, double w, double energy, LinalgKind kind) {
     Sample s = sample(model, m, w, 7);
     Linalg la = LinalgFactory.create(kind);
-    InertiaResult in = SliceInertiaKernel.hamiltonianInertia(s.terms, s.lattice, energy, new SliceInertiaWorkspace(la));
+    InertiaResult in =
+        SliceInertiaKernel.hamiltonianInertia(
+            s.terms, s.lattice, energy, new SliceInertiaWorkspace(la));
     double[] ev = eigenvalues(dense(s.terms));
     int below = 0;
     for (double e : ev) {
@@ -48,14 +55,26 @@ class SliceInertiaKernelTest {
 
   @ParameterizedTest(name = "{0} m={1} W={2} kappa={3} shift={4} {5}")
   @CsvSource({
-      "qwz, -1.0, 0.0, 0.1, 0.0, NATIVE", "qwz, 1.0, 3.0, 0.3, 0.0, NATIVE", "qwz, 1.0, 3.0, 0.3, 0.21, JAVA",
-      "qwz, 3.0, 1.0, 0.05, -0.4, NATIVE", "haldane, 0.2, 1.0, 0.2, 0.0, NATIVE", "haldane, 0.2, 0.0, 0.2, 0.03, JAVA"})
-  void localizerCountsMatchEigenvalues(String model, double m, double w, double kappa, double shift, LinalgKind kind) {
+    "qwz, -1.0, 0.0, 0.1, 0.0, NATIVE", "qwz, 1.0, 3.0, 0.3, 0.0, NATIVE",
+        "qwz, 1.0, 3.0, 0.3, 0.21, JAVA",
+    "qwz, 3.0, 1.0, 0.05, -0.4, NATIVE", "haldane, 0.2, 1.0, 0.2, 0.0, NATIVE",
+        "haldane, 0.2, 0.0, 0.2, 0.03, JAVA"
+  })
+  void localizerCountsMatchEigenvalues(
+      String model, double m, double w, double kappa, double shift, LinalgKind kind) {
     Sample s = sample(model, m, w, 11);
     double x0 = centre(s.lattice, 0);
     double y0 = centre(s.lattice, 1);
-    InertiaResult in = SliceInertiaKernel.localizerInertia(s.terms, s.lattice, 0.0, kappa, x0, y0, shift,
-        new SliceInertiaWorkspace(LinalgFactory.create(kind)));
+    InertiaResult in =
+        SliceInertiaKernel.localizerInertia(
+            s.terms,
+            s.lattice,
+            0.0,
+            kappa,
+            x0,
+            y0,
+            shift,
+            new SliceInertiaWorkspace(LinalgFactory.create(kind)));
     ZMatrixRMaj h = dense(s.terms);
     int n = h.numRows;
     ZMatrixRMaj loc = new ZMatrixRMaj(2 * n, 2 * n);
@@ -84,9 +103,10 @@ class SliceInertiaKernelTest {
 
   static Sample sample(String name, double m, double w, long seed) {
     Model model = name.equals("qwz") ? new QwzModel() : new HaldaneModel();
-    Map<String, Double> p = name.equals("qwz")
-        ? Map.of("m", m, "t", 1.0)
-        : Map.of("t1", 1.0, "t2", 0.15, "phi", Math.PI / 2, "M", m);
+    Map<String, Double> p =
+        name.equals("qwz")
+            ? Map.of("m", m, "t", 1.0)
+            : Map.of("t1", 1.0, "t2", 0.15, "phi", Math.PI / 2, "M", m);
     Lattice lattice = model.lattice(name.equals("qwz") ? 6 : 4, Boundary.OPEN);
     HamiltonianBuilder b = new HamiltonianBuilder();
     b.reset(lattice.orbitals());

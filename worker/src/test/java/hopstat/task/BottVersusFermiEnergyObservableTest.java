@@ -13,13 +13,22 @@ import org.junit.jupiter.api.Test;
 
 class BottVersusFermiEnergyObservableTest {
 
-  private final RealisationWorkspace workspace = new RealisationWorkspace(LinalgFactory.preferred());
+  private final RealisationWorkspace workspace =
+      new RealisationWorkspace(LinalgFactory.preferred());
 
-  private static RealisationTask task(double fermiEnergy, List<String> observables, Map<String, Double> extra) {
+  private static RealisationTask task(
+      double fermiEnergy, List<String> observables, Map<String, Double> extra) {
     Map<String, Double> p = new java.util.HashMap<>(Map.of("m", -1.0, "t", 1.0));
     p.putAll(extra);
-    PointSpec point = new PointSpec("qwz", new ParameterValues(p), 8, Boundary.PERIODIC, fermiEnergy,
-        List.of(new DisorderTerm("onsite-box", 1.0, Map.of())), observables);
+    PointSpec point =
+        new PointSpec(
+            "qwz",
+            new ParameterValues(p),
+            8,
+            Boundary.PERIODIC,
+            fermiEnergy,
+            List.of(new DisorderTerm("onsite-box", 1.0, Map.of())),
+            observables);
     return new RealisationTask("p0-r0", 0, 0, SeedOps.realisationSeed(9, 0, 0), point);
   }
 
@@ -31,8 +40,10 @@ class BottVersusFermiEnergyObservableTest {
    */
   @Test
   void scanAgreesWithTheSingleFermiEnergyIndex() {
-    Map<String, Double> scan = Map.of("fermiEnergyCount", 3.0, "fermiEnergyMin", -10.0, "fermiEnergyMax", 10.0);
-    RealisationResult r = RealisationRunner.run(task(0.0, List.of("bott-vs-ef", "bott"), scan), workspace);
+    Map<String, Double> scan =
+        Map.of("fermiEnergyCount", 3.0, "fermiEnergyMin", -10.0, "fermiEnergyMax", 10.0);
+    RealisationResult r =
+        RealisationRunner.run(task(0.0, List.of("bott-vs-ef", "bott"), scan), workspace);
     assertThat(r.outcome()).as(String.valueOf(r.failure())).isEqualTo(Outcome.DONE);
     assertThat(r.values().get("bott@E0")).isCloseTo(0.0, offset(1e-12));
     assertThat(r.values().get("bott@E1")).isCloseTo(1.0, offset(1e-6));
@@ -44,7 +55,8 @@ class BottVersusFermiEnergyObservableTest {
 
   @Test
   void missingScanParametersAreReported() {
-    RealisationResult r = RealisationRunner.run(task(0.0, List.of("bott-vs-ef"), Map.of()), workspace);
+    RealisationResult r =
+        RealisationRunner.run(task(0.0, List.of("bott-vs-ef"), Map.of()), workspace);
     assertThat(r.outcome()).isEqualTo(Outcome.FAILED);
     assertThat(r.failure()).contains("parameters.fermiEnergyCount");
   }

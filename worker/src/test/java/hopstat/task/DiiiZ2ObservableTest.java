@@ -24,12 +24,14 @@ import org.junit.jupiter.api.Test;
 /** The class-DIII branch of {@code z2} on diii-wire, run through the worker boundary. */
 class DiiiZ2ObservableTest {
 
-  private static final RealisationWorkspace WORKSPACE = new RealisationWorkspace(LinalgFactory.create(LinalgKind.JAVA));
+  private static final RealisationWorkspace WORKSPACE =
+      new RealisationWorkspace(LinalgFactory.create(LinalgKind.JAVA));
   private static final long JOB_SEED = 2024;
 
   /** Test-data builder for a diii-wire realisation task. */
   private static final class TaskBuilder {
-    private final Map<String, Double> parameters = new LinkedHashMap<>(Map.of("t", 1.0, "delta", 1.0, "lambda", 0.0));
+    private final Map<String, Double> parameters =
+        new LinkedHashMap<>(Map.of("t", 1.0, "delta", 1.0, "lambda", 0.0));
     private final List<DisorderTerm> disorder = new ArrayList<>();
     private final List<String> observables = new ArrayList<>();
     private int size = 20;
@@ -71,8 +73,18 @@ class DiiiZ2ObservableTest {
     }
 
     RealisationResult run() {
-      PointSpec point = new PointSpec(DiiiWireModel.NAME, new ParameterValues(parameters), size, boundary, 0.0, disorder, observables);
-      return RealisationRunner.run(new RealisationTask(RealisationTask.idOf(0, realisation), 0, realisation, seed(), point), WORKSPACE);
+      PointSpec point =
+          new PointSpec(
+              DiiiWireModel.NAME,
+              new ParameterValues(parameters),
+              size,
+              boundary,
+              0.0,
+              disorder,
+              observables);
+      return RealisationRunner.run(
+          new RealisationTask(RealisationTask.idOf(0, realisation), 0, realisation, seed(), point),
+          WORKSPACE);
     }
   }
 
@@ -90,12 +102,27 @@ class DiiiZ2ObservableTest {
     // Kitaev (2001) per spin block, Qi-Hughes-Zhang (2010) for the Kramers pair: weak disorder
     // (W = 1) keeps the clean answer, z2 = 1 iff |μ| < 2|t|, with S_z broken (λ = 0.5 < Δ).
     for (int r = 0; r < 3; r++) {
-      RealisationResult inside = aTask().with("mu", 0.5).with("lambda", 0.5).with("delta", 0.8)
-          .disorder("onsite-box", 1.0, Map.of()).observe("z2").observe("gap").realisation(r).run();
+      RealisationResult inside =
+          aTask()
+              .with("mu", 0.5)
+              .with("lambda", 0.5)
+              .with("delta", 0.8)
+              .disorder("onsite-box", 1.0, Map.of())
+              .observe("z2")
+              .observe("gap")
+              .realisation(r)
+              .run();
       assertThat(z2(inside)).isEqualTo(1.0);
       assertThat(inside.values()).containsKey("gap");
-      RealisationResult outside = aTask().with("mu", 3.2).with("lambda", 0.5).with("delta", 0.8)
-          .disorder("onsite-box", 1.0, Map.of()).observe("z2").realisation(r).run();
+      RealisationResult outside =
+          aTask()
+              .with("mu", 3.2)
+              .with("lambda", 0.5)
+              .with("delta", 0.8)
+              .disorder("onsite-box", 1.0, Map.of())
+              .observe("z2")
+              .realisation(r)
+              .run();
       assertThat(z2(outside)).isEqualTo(0.0);
     }
   }
@@ -104,21 +131,38 @@ class DiiiZ2ObservableTest {
   void breakingTimeReversalFallsBackToTheClassDMajoranaNumber() {
     // Periodic table (Kitaev 2009; Schnyder et al. 2008): a random Zeeman field leaves class D,
     // d = 1, Z2 = the Majorana number (Kitaev 2001). In the DIII-topological phase the two spin
-    // blocks are both non-trivial, so Q = (−1)(−1) = +1: without T the Kramers pair of end Majoranas
+    // blocks are both non-trivial, so Q = (−1)(−1) = +1: without T the Kramers pair of end
+    // Majoranas
     // is not protected and z2 = 0 (derived). The runner's value equals MajoranaKernel's on the same
     // realisation.
     Model model = ModelCatalog.find(DiiiWireModel.NAME).orElseThrow();
     Observable z2 = ObservableCatalog.find("z2").orElseThrow();
-    assertThat(SymmetryCheckOps.effectiveClass(model, List.of(new DisorderTerm("zeeman-box", 0.2, Map.of())))).isEqualTo(SymmetryClass.D);
+    assertThat(
+            SymmetryCheckOps.effectiveClass(
+                model, List.of(new DisorderTerm("zeeman-box", 0.2, Map.of()))))
+        .isEqualTo(SymmetryClass.D);
     assertThat(z2.whyNotApplicable(model, Boundary.PERIODIC, SymmetryClass.D)).isEmpty();
     MajoranaWorkspace ws = new MajoranaWorkspace();
     for (int r = 0; r < 3; r++) {
-      TaskBuilder task = aTask().with("mu", 0.5).disorder("zeeman-box", 0.2, Map.of()).observe("z2").realisation(r);
+      TaskBuilder task =
+          aTask()
+              .with("mu", 0.5)
+              .disorder("zeeman-box", 0.2, Map.of())
+              .observe("z2")
+              .realisation(r);
       double value = z2(task.run());
       assertThat(value).isEqualTo(0.0);
-      TestRealisation same = TestRealisation.aRealisation(DiiiWireModel.NAME).with("mu", 0.5).with("t", 1.0).with("delta", 1.0)
-          .with("lambda", 0.0).size(20).seed(task.seed()).disorder("zeeman-box", 0.2);
-      int q = MajoranaKernel.majoranaNumber((MajoranaForm) model, same.lattice(), same.build(), ws).q();
+      TestRealisation same =
+          TestRealisation.aRealisation(DiiiWireModel.NAME)
+              .with("mu", 0.5)
+              .with("t", 1.0)
+              .with("delta", 1.0)
+              .with("lambda", 0.0)
+              .size(20)
+              .seed(task.seed())
+              .disorder("zeeman-box", 0.2);
+      int q =
+          MajoranaKernel.majoranaNumber((MajoranaForm) model, same.lattice(), same.build(), ws).q();
       assertThat(q).isEqualTo(1);
     }
     // Without the Zeeman field the same point is DIII-non-trivial.
@@ -130,7 +174,8 @@ class DiiiZ2ObservableTest {
     Model model = ModelCatalog.find(DiiiWireModel.NAME).orElseThrow();
     Observable z2 = ObservableCatalog.find("z2").orElseThrow();
     assertThat(z2.whyNotApplicable(model, Boundary.PERIODIC, SymmetryClass.DIII)).isEmpty();
-    assertThat(z2.whyNotApplicable(model, Boundary.OPEN, SymmetryClass.DIII)).hasValueSatisfying(m -> assertThat(m).contains("periodic"));
+    assertThat(z2.whyNotApplicable(model, Boundary.OPEN, SymmetryClass.DIII))
+        .hasValueSatisfying(m -> assertThat(m).contains("periodic"));
     // A DIII effective class on a model without declared T and S (hypothetical) is refused.
     Model noOperators = ModelCatalog.find("pwave-wire").orElseThrow();
     assertThat(z2.whyNotApplicable(noOperators, Boundary.PERIODIC, SymmetryClass.DIII))
@@ -141,8 +186,13 @@ class DiiiZ2ObservableTest {
     assertThat(closed.failure()).contains("gap");
     // orbitals = independent puts unrelated draws on Nambu orbitals: the per-realisation check
     // catches the broken T/C that onsite-box claims to keep.
-    RealisationResult independent = aTask().with("mu", 0.5).size(6).disorder("onsite-box", 1.0, Map.of("orbitals", "independent"))
-        .observe("z2").run();
+    RealisationResult independent =
+        aTask()
+            .with("mu", 0.5)
+            .size(6)
+            .disorder("onsite-box", 1.0, Map.of("orbitals", "independent"))
+            .observe("z2")
+            .run();
     assertThat(independent.outcome()).isEqualTo(Outcome.FAILED);
     assertThat(independent.failure()).contains("violated");
   }

@@ -5,8 +5,8 @@ import static org.assertj.core.data.Offset.offset;
 
 import hopstat.disorder.DisorderTerm;
 import hopstat.lattice.Boundary;
-import hopstat.linalg.LinalgFactory;
 import hopstat.lattice.Lattice;
+import hopstat.linalg.LinalgFactory;
 import hopstat.model.Model;
 import hopstat.model.ModelCatalog;
 import hopstat.model.ParameterValues;
@@ -19,14 +19,30 @@ import org.junit.jupiter.api.Test;
 /** The localisation observables through the worker boundary, on the Anderson model. */
 class LocalisationObservablesTest {
 
-  private final RealisationWorkspace workspace = new RealisationWorkspace(LinalgFactory.preferred());
+  private final RealisationWorkspace workspace =
+      new RealisationWorkspace(LinalgFactory.preferred());
 
-  private static RealisationTask task(String model, int l, Boundary boundary, double w, Map<String, Double> parameters, int realisation, String... observables) {
+  private static RealisationTask task(
+      String model,
+      int l,
+      Boundary boundary,
+      double w,
+      Map<String, Double> parameters,
+      int realisation,
+      String... observables) {
     Map<String, Double> p = new HashMap<>(parameters);
     p.putIfAbsent("t", 1.0);
-    List<DisorderTerm> disorder = w > 0 ? List.of(new DisorderTerm("onsite-box", w, Map.of())) : List.of();
-    PointSpec point = new PointSpec(model, new ParameterValues(p), l, boundary, 0.0, disorder, List.of(observables));
-    return new RealisationTask(RealisationTask.idOf(0, realisation), 0, realisation, SeedOps.realisationSeed(42, 0, realisation), point);
+    List<DisorderTerm> disorder =
+        w > 0 ? List.of(new DisorderTerm("onsite-box", w, Map.of())) : List.of();
+    PointSpec point =
+        new PointSpec(
+            model, new ParameterValues(p), l, boundary, 0.0, disorder, List.of(observables));
+    return new RealisationTask(
+        RealisationTask.idOf(0, realisation),
+        0,
+        realisation,
+        SeedOps.realisationSeed(42, 0, realisation),
+        point);
   }
 
   /**
@@ -36,7 +52,15 @@ class LocalisationObservablesTest {
    */
   @Test
   void chainLyapunovThroughTheRunner() {
-    RealisationTask t = task("anderson-1d", 10, Boundary.OPEN, 1.5, Map.of("energy", 0.0, "lyapunovError", 0.02), 0, "lyapunov");
+    RealisationTask t =
+        task(
+            "anderson-1d",
+            10,
+            Boundary.OPEN,
+            1.5,
+            Map.of("energy", 0.0, "lyapunovError", 0.02),
+            0,
+            "lyapunov");
     RealisationResult r = RealisationRunner.run(t, workspace);
     assertThat(r.outcome()).as(String.valueOf(r.failure())).isEqualTo(Outcome.DONE);
     double gamma = r.values().get("lyapunov");
@@ -50,12 +74,20 @@ class LocalisationObservablesTest {
   }
 
   /**
-   * Clean periodic strip M = 4 at E = 5 through the model's slice form: γ_min = arccosh(1.5),
-   * Λ = 1/(4γ) (derived, see TransferMatrixKernelTest).
+   * Clean periodic strip M = 4 at E = 5 through the model's slice form: γ_min = arccosh(1.5), Λ =
+   * 1/(4γ) (derived, see TransferMatrixKernelTest).
    */
   @Test
   void cleanStripThroughTheModelsSliceForm() {
-    RealisationTask t = task("anderson-2d", 4, Boundary.PERIODIC, 0.0, Map.of("energy", 5.0, "lyapunovError", 1e-6), 0, "lyapunov");
+    RealisationTask t =
+        task(
+            "anderson-2d",
+            4,
+            Boundary.PERIODIC,
+            0.0,
+            Map.of("energy", 5.0, "lyapunovError", 1e-6),
+            0,
+            "lyapunov");
     RealisationResult r = RealisationRunner.run(t, workspace);
     assertThat(r.outcome()).as(String.valueOf(r.failure())).isEqualTo(Outcome.DONE);
     double gamma = Math.log(1.5 + Math.sqrt(1.25));
@@ -66,7 +98,15 @@ class LocalisationObservablesTest {
   /** Clean bar inside the band: γ = 0, the run hits the length guard and the realisation FAILS. */
   @Test
   void cleanBarInsideTheBandFailsAsNotConverged() {
-    RealisationTask t = task("anderson-3d", 2, Boundary.OPEN, 0.0, Map.of("energy", 0.5, "lyapunovMaxLength", 20_000.0), 0, "lyapunov");
+    RealisationTask t =
+        task(
+            "anderson-3d",
+            2,
+            Boundary.OPEN,
+            0.0,
+            Map.of("energy", 0.5, "lyapunovMaxLength", 20_000.0),
+            0,
+            "lyapunov");
     RealisationResult r = RealisationRunner.run(t, workspace);
     assertThat(r.outcome()).isEqualTo(Outcome.FAILED);
     assertThat(r.failure()).startsWith("not converged");
@@ -74,12 +114,24 @@ class LocalisationObservablesTest {
 
   @Test
   void lyapunovNeedsAnEnergyAndASliceModel() {
-    RealisationResult r = RealisationRunner.run(task("anderson-2d", 4, Boundary.OPEN, 1.0, Map.of(), 0, "lyapunov"), workspace);
+    RealisationResult r =
+        RealisationRunner.run(
+            task("anderson-2d", 4, Boundary.OPEN, 1.0, Map.of(), 0, "lyapunov"), workspace);
     assertThat(r.outcome()).isEqualTo(Outcome.FAILED);
     assertThat(r.failure()).contains("parameters.energy");
     Observable o = ObservableCatalog.find("lyapunov").orElseThrow();
-    assertThat(o.whyNotApplicable(ModelCatalog.find("majorana-cluster").orElseThrow(), Boundary.OPEN, SymmetryClass.D)).isPresent();
-    assertThat(o.whyNotApplicable(ModelCatalog.find("anderson-3d").orElseThrow(), Boundary.PERIODIC, SymmetryClass.AI)).isEmpty();
+    assertThat(
+            o.whyNotApplicable(
+                ModelCatalog.find("majorana-cluster").orElseThrow(),
+                Boundary.OPEN,
+                SymmetryClass.D))
+        .isPresent();
+    assertThat(
+            o.whyNotApplicable(
+                ModelCatalog.find("anderson-3d").orElseThrow(),
+                Boundary.PERIODIC,
+                SymmetryClass.AI))
+        .isEmpty();
   }
 
   /**
@@ -92,8 +144,16 @@ class LocalisationObservablesTest {
   void stronglyDisorderedChainIsPoissonAndLocalised() {
     double sum = 0;
     for (int k = 0; k < 3; k++) {
-      RealisationTask t = task("anderson-1d", 800, Boundary.OPEN, 1000.0,
-          Map.of("windows", 4.0, "windowMin", -400.0, "windowMax", 400.0), k, "level-ratio", "ipr");
+      RealisationTask t =
+          task(
+              "anderson-1d",
+              800,
+              Boundary.OPEN,
+              1000.0,
+              Map.of("windows", 4.0, "windowMin", -400.0, "windowMax", 400.0),
+              k,
+              "level-ratio",
+              "ipr");
       RealisationResult r = RealisationRunner.run(t, workspace);
       assertThat(r.outcome()).as(String.valueOf(r.failure())).isEqualTo(Outcome.DONE);
       sum += r.values().get("level-ratio");
@@ -113,7 +173,15 @@ class LocalisationObservablesTest {
   @Test
   void openCleanChainStandingWavesHaveTheClosedFormIpr() {
     int n = 40;
-    RealisationTask t = task("anderson-1d", n, Boundary.OPEN, 0.0, Map.of("windows", 3.0, "windowMin", -1.5, "windowMax", 1.5), 0, "ipr");
+    RealisationTask t =
+        task(
+            "anderson-1d",
+            n,
+            Boundary.OPEN,
+            0.0,
+            Map.of("windows", 3.0, "windowMin", -1.5, "windowMax", 1.5),
+            0,
+            "ipr");
     RealisationResult r = RealisationRunner.run(t, workspace);
     assertThat(r.outcome()).as(String.valueOf(r.failure())).isEqualTo(Outcome.DONE);
     for (int w = 0; w < 3; w++) {
@@ -122,8 +190,8 @@ class LocalisationObservablesTest {
   }
 
   /**
-   * The window eigenvectors are the same (up to phase, so compare |ψ_i|²) whether they are
-   * computed on their own or sliced out of the full set another observable asked for.
+   * The window eigenvectors are the same (up to phase, so compare |ψ_i|²) whether they are computed
+   * on their own or sliced out of the full set another observable asked for.
    */
   @Test
   void windowEigenvectorsAgreeOnBothPaths() {
@@ -135,16 +203,30 @@ class LocalisationObservablesTest {
       workspace.builder.reset(lattice.orbitals());
       model.addClean(t.point().parameters(), lattice, workspace.builder);
       java.util.random.RandomGenerator random = SeedOps.generator(t.seed());
-      new hopstat.disorder.OnsiteBoxDisorder().apply(t.point().disorder().get(0), model, t.point().parameters(), lattice, random, workspace.builder);
-      RealisationContext c = new RealisationContext(workspace, model, lattice, t.point(), pass == 1, random);
+      new hopstat.disorder.OnsiteBoxDisorder()
+          .apply(
+              t.point().disorder().get(0),
+              model,
+              t.point().parameters(),
+              lattice,
+              random,
+              workspace.builder);
+      RealisationContext c =
+          new RealisationContext(workspace, model, lattice, t.point(), pass == 1, random);
       got[pass] = c.eigenvectorsInWindow(-1.0, 1.0).copy();
-      assertThat(got[pass].numCols).isEqualTo(c.firstIndexAtOrAbove(1.0) - c.firstIndexAtOrAbove(-1.0)).isPositive();
+      assertThat(got[pass].numCols)
+          .isEqualTo(c.firstIndexAtOrAbove(1.0) - c.firstIndexAtOrAbove(-1.0))
+          .isPositive();
     }
     assertThat(got[1].numCols).isEqualTo(got[0].numCols);
     for (int j = 0; j < got[0].numCols; j++) {
       for (int i = 0; i < got[0].numRows; i++) {
-        double a = got[0].getReal(i, j) * got[0].getReal(i, j) + got[0].getImag(i, j) * got[0].getImag(i, j);
-        double b = got[1].getReal(i, j) * got[1].getReal(i, j) + got[1].getImag(i, j) * got[1].getImag(i, j);
+        double a =
+            got[0].getReal(i, j) * got[0].getReal(i, j)
+                + got[0].getImag(i, j) * got[0].getImag(i, j);
+        double b =
+            got[1].getReal(i, j) * got[1].getReal(i, j)
+                + got[1].getImag(i, j) * got[1].getImag(i, j);
         assertThat(b).isCloseTo(a, offset(1e-10));
       }
     }
@@ -152,7 +234,10 @@ class LocalisationObservablesTest {
 
   @Test
   void badWindowCountIsReported() {
-    RealisationResult r = RealisationRunner.run(task("anderson-1d", 20, Boundary.OPEN, 1.0, Map.of("windows", 40.0), 0, "level-ratio"), workspace);
+    RealisationResult r =
+        RealisationRunner.run(
+            task("anderson-1d", 20, Boundary.OPEN, 1.0, Map.of("windows", 40.0), 0, "level-ratio"),
+            workspace);
     assertThat(r.outcome()).isEqualTo(Outcome.FAILED);
     assertThat(r.failure()).contains("parameters.windows");
   }

@@ -64,10 +64,17 @@ class OrbitalPositionTest {
       hoppings.add(new Term(v, 0, 0, Amplitude.of(T2 * Math.cos(PHI), -T2 * Math.sin(PHI))));
       hoppings.add(new Term(v, 1, 1, Amplitude.of(T2 * Math.cos(PHI), T2 * Math.sin(PHI))));
     }
-    return new CustomModel(new CustomModelDefinition(2, List.of(List.of(1.0, 0.0), List.of(0.5, Math.sqrt(3) / 2)),
-        List.of(new Orbital("A", List.of(0.0, 0.0)), new Orbital("B", List.of(b, b))),
-        List.of(new Onsite(0, Amplitude.of(MASS, 0.0)), new Onsite(1, Amplitude.of(-MASS, 0.0))),
-        hoppings, List.of(), SymmetryClass.A, List.of()));
+    return new CustomModel(
+        new CustomModelDefinition(
+            2,
+            List.of(List.of(1.0, 0.0), List.of(0.5, Math.sqrt(3) / 2)),
+            List.of(new Orbital("A", List.of(0.0, 0.0)), new Orbital("B", List.of(b, b))),
+            List.of(
+                new Onsite(0, Amplitude.of(MASS, 0.0)), new Onsite(1, Amplitude.of(-MASS, 0.0))),
+            hoppings,
+            List.of(),
+            SymmetryClass.A,
+            List.of()));
   }
 
   private static ZMatrixRMaj dense(Model model, Lattice lattice, ParameterValues p) {
@@ -108,7 +115,8 @@ class OrbitalPositionTest {
     Lattice lattice = custom.lattice(size, Boundary.PERIODIC);
     for (int d = 0; d < 2; d++) {
       for (int i = 0; i < lattice.orbitals(); i++) {
-        assertThat(lattice.orbitalPosition(d, i)).isCloseTo(reference.orbitalPosition(d, i), within(1e-15));
+        assertThat(lattice.orbitalPosition(d, i))
+            .isCloseTo(reference.orbitalPosition(d, i), within(1e-15));
       }
     }
     ZMatrixRMaj h = dense(custom, lattice, new ParameterValues(Map.of()));
@@ -118,7 +126,8 @@ class OrbitalPositionTest {
     }
     ZMatrixRMaj psi = lowestHalf(h);
     BottIndexResult bott = BottIndexKernel.compute(lattice, psi, new BottWorkspace(LINALG));
-    BottIndexResult bottRef = BottIndexKernel.compute(reference, lowestHalf(hRef), new BottWorkspace(LINALG));
+    BottIndexResult bottRef =
+        BottIndexKernel.compute(reference, lowestHalf(hRef), new BottWorkspace(LINALG));
     assertThat(bott.bott()).isCloseTo(bottRef.bott(), within(1e-9)).isCloseTo(-1.0, within(1e-6));
 
     CustomModel flat = customHaldane(false);
@@ -142,7 +151,9 @@ class OrbitalPositionTest {
     Model builtIn = ModelCatalog.find("haldane").orElseThrow();
     Lattice reference = builtIn.lattice(size, Boundary.OPEN);
     ChernMarkerWorkspace wsRef = new ChernMarkerWorkspace(LINALG);
-    ChernMarkerResult ref = ChernMarkerKernel.compute(reference, lowestHalf(dense(builtIn, reference, haldaneParameters())), wsRef);
+    ChernMarkerResult ref =
+        ChernMarkerKernel.compute(
+            reference, lowestHalf(dense(builtIn, reference, haldaneParameters())), wsRef);
 
     CustomModel custom = customHaldane(true);
     Lattice lattice = custom.lattice(size, Boundary.OPEN);
@@ -150,8 +161,13 @@ class OrbitalPositionTest {
     ChernMarkerWorkspace ws = new ChernMarkerWorkspace(LINALG);
     ChernMarkerResult withOffsets = ChernMarkerKernel.compute(lattice, psi, ws);
     for (int c = 0; c < lattice.sites(); c++) {
-      double expected = 0.5 * (ChernMarkerKernel.siteMarker(wsRef, 2 * c) + ChernMarkerKernel.siteMarker(wsRef, 2 * c + 1));
-      assertThat(ChernMarkerKernel.siteMarker(ws, c)).as("cell %d", c).isCloseTo(expected, within(1e-9));
+      double expected =
+          0.5
+              * (ChernMarkerKernel.siteMarker(wsRef, 2 * c)
+                  + ChernMarkerKernel.siteMarker(wsRef, 2 * c + 1));
+      assertThat(ChernMarkerKernel.siteMarker(ws, c))
+          .as("cell %d", c)
+          .isCloseTo(expected, within(1e-9));
     }
 
     Lattice flatLattice = customHaldane(false).lattice(size, Boundary.OPEN);
@@ -159,29 +175,56 @@ class OrbitalPositionTest {
     ChernMarkerResult flat = ChernMarkerKernel.compute(flatLattice, psi, wsFlat);
     double largestChange = 0;
     for (int c = 0; c < lattice.sites(); c++) {
-      largestChange = Math.max(largestChange, Math.abs(ChernMarkerKernel.siteMarker(ws, c) - ChernMarkerKernel.siteMarker(wsFlat, c)));
+      largestChange =
+          Math.max(
+              largestChange,
+              Math.abs(
+                  ChernMarkerKernel.siteMarker(ws, c) - ChernMarkerKernel.siteMarker(wsFlat, c)));
     }
     assertThat(largestChange).as("local markers move with the offsets").isGreaterThan(1e-3);
     assertThat(ref.bulkAverage()).isCloseTo(-1.0, within(0.1));
-    assertThat(withOffsets.bulkAverage()).isCloseTo(-1.0, within(0.1)).isCloseTo(ref.bulkAverage(), within(1e-9));
+    assertThat(withOffsets.bulkAverage())
+        .isCloseTo(-1.0, within(0.1))
+        .isCloseTo(ref.bulkAverage(), within(1e-9));
     assertThat(flat.bulkAverage()).isCloseTo(-1.0, within(0.1));
   }
 
-  /** A custom SSH chain, H[A_j][B_j] = v, H[A_{j+1}][B_j] = w, with B at fractional position 1/2. */
+  /**
+   * A custom SSH chain, H[A_j][B_j] = v, H[A_{j+1}][B_j] = w, with B at fractional position 1/2.
+   */
   private static CustomModelDefinition sshChain(double bPosition) {
-    SymmetryOperator s = SymmetryOperator.local(Symmetry.CHIRAL, new double[][] {{1, 0}, {0, -1}}, new double[2][2]);
-    return new CustomModelDefinition(1, List.of(List.of(1.0)),
-        List.of(new Orbital("A", List.of(0.0)), new Orbital("B", List.of(bPosition))), List.of(),
-        List.of(new Term(List.of(0), 1, 0, new Amplitude("v", 1.0, 0.0)), new Term(List.of(1), 1, 0, new Amplitude("w", 1.0, 0.0))),
-        List.of(), SymmetryClass.BDI, List.of(s));
+    SymmetryOperator s =
+        SymmetryOperator.local(Symmetry.CHIRAL, new double[][] {{1, 0}, {0, -1}}, new double[2][2]);
+    return new CustomModelDefinition(
+        1,
+        List.of(List.of(1.0)),
+        List.of(new Orbital("A", List.of(0.0)), new Orbital("B", List.of(bPosition))),
+        List.of(),
+        List.of(
+            new Term(List.of(0), 1, 0, new Amplitude("v", 1.0, 0.0)),
+            new Term(List.of(1), 1, 0, new Amplitude("w", 1.0, 0.0))),
+        List.of(),
+        SymmetryClass.BDI,
+        List.of(s));
   }
 
-  private static Map<String, Double> runChain(CustomModelDefinition chain, double v, double w, int realisation) {
-    PointSpec point = new PointSpec("custom", new ParameterValues(Map.of("v", v, "w", w)), 40, Boundary.OPEN, 0.0,
-        List.of(new DisorderTerm("bond-phase", 2.0 * Math.PI, Map.of())), List.of("winding", "winding-localizer"), chain);
+  private static Map<String, Double> runChain(
+      CustomModelDefinition chain, double v, double w, int realisation) {
+    PointSpec point =
+        new PointSpec(
+            "custom",
+            new ParameterValues(Map.of("v", v, "w", w)),
+            40,
+            Boundary.OPEN,
+            0.0,
+            List.of(new DisorderTerm("bond-phase", 2.0 * Math.PI, Map.of())),
+            List.of("winding", "winding-localizer"),
+            chain);
     long seed = SeedOps.realisationSeed(3, 0, realisation);
-    RealisationResult r = RealisationRunner.run(new RealisationTask(RealisationTask.idOf(0, realisation), 0, realisation, seed, point),
-        new RealisationWorkspace(LINALG));
+    RealisationResult r =
+        RealisationRunner.run(
+            new RealisationTask(RealisationTask.idOf(0, realisation), 0, realisation, seed, point),
+            new RealisationWorkspace(LINALG));
     assertThat(r.outcome()).as("outcome (%s)", r.failure()).isEqualTo(Outcome.DONE);
     return r.values();
   }
@@ -191,7 +234,8 @@ class OrbitalPositionTest {
    * PRL 113, 046802 (2014); odd localizer, Loring &amp; Schulz-Baldes, arXiv:1701.07455) use the
    * unit-cell coordinate by definition, so moving B inside the cell changes neither (same
    * realisation with random bond phases, a class-AIII chain, to round-off); with B at 1/2 through X
-   * the value would shift by −1/2 (derived, RealSpaceWindingKernel Javadoc), which this test would catch.
+   * the value would shift by −1/2 (derived, RealSpaceWindingKernel Javadoc), which this test would
+   * catch.
    */
   @Test
   void windingIgnoresTheIntraCellPositionAndPositionsAreOffset() {
@@ -207,8 +251,12 @@ class OrbitalPositionTest {
       for (int r = 0; r < 2; r++) {
         Map<String, Double> middle = runChain(sshChain(0.5), 1.0, w, r);
         Map<String, Double> origin = runChain(sshChain(0.0), 1.0, w, r);
-        assertThat(middle.get("winding")).isCloseTo(origin.get("winding"), within(1e-12)).isCloseTo(w > 1 ? 1.0 : 0.0, within(0.05));
-        assertThat(middle.get("winding-localizer")).isEqualTo(origin.get("winding-localizer")).isEqualTo(w > 1 ? 1.0 : 0.0);
+        assertThat(middle.get("winding"))
+            .isCloseTo(origin.get("winding"), within(1e-12))
+            .isCloseTo(w > 1 ? 1.0 : 0.0, within(0.05));
+        assertThat(middle.get("winding-localizer"))
+            .isEqualTo(origin.get("winding-localizer"))
+            .isEqualTo(w > 1 ? 1.0 : 0.0);
       }
     }
   }

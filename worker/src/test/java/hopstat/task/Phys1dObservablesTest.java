@@ -24,7 +24,8 @@ import org.junit.jupiter.api.Test;
 /** The d = 0, 1 observables run through the worker boundary, as a job would run them. */
 class Phys1dObservablesTest {
 
-  private static final RealisationWorkspace WORKSPACE = new RealisationWorkspace(LinalgFactory.create(LinalgKind.JAVA));
+  private static final RealisationWorkspace WORKSPACE =
+      new RealisationWorkspace(LinalgFactory.create(LinalgKind.JAVA));
 
   /** Test-data builder for a realisation task. */
   private static final class TaskBuilder {
@@ -82,9 +83,19 @@ class Phys1dObservablesTest {
     }
 
     RealisationResult run() {
-      PointSpec point = new PointSpec(model, new ParameterValues(parameters), size, boundary, fermiEnergy, disorder, observables);
+      PointSpec point =
+          new PointSpec(
+              model,
+              new ParameterValues(parameters),
+              size,
+              boundary,
+              fermiEnergy,
+              disorder,
+              observables);
       long seed = SeedOps.realisationSeed(2024, 0, realisation);
-      return RealisationRunner.run(new RealisationTask(RealisationTask.idOf(0, realisation), 0, realisation, seed, point), WORKSPACE);
+      return RealisationRunner.run(
+          new RealisationTask(RealisationTask.idOf(0, realisation), 0, realisation, seed, point),
+          WORKSPACE);
     }
   }
 
@@ -101,11 +112,17 @@ class Phys1dObservablesTest {
   void cleanSshWindingIsOneIffIntracellBelowIntercell() {
     // Bloch winding of v + w e^{ik} (derived; Su, Schrieffer, Heeger 1979 model; real-space form
     // Mondragon-Shem et al., PRL 113, 046802 (2014)): 1 iff |v| < |w|, else 0, either sign of w.
-    // Localisation length ≤ 1/ln(1/0.6) ≈ 2 cells against 15 cells from window to edge: error ≪ 1e-3.
+    // Localisation length ≤ 1/ln(1/0.6) ≈ 2 cells against 15 cells from window to edge: error ≪
+    // 1e-3.
     for (double w : new double[] {1.0, -1.0}) {
       for (double v : new double[] {0.0, 0.5, -0.6, 1.6, 3.0}) {
-        double nu = value(aTask("ssh").with("v", v).with("w", w).size(60).observe("winding").run(), "winding");
-        assertThat(nu).as("v=%s w=%s", v, w).isCloseTo(Math.abs(v) < Math.abs(w) ? 1.0 : 0.0, within(1e-3));
+        double nu =
+            value(
+                aTask("ssh").with("v", v).with("w", w).size(60).observe("winding").run(),
+                "winding");
+        assertThat(nu)
+            .as("v=%s w=%s", v, w)
+            .isCloseTo(Math.abs(v) < Math.abs(w) ? 1.0 : 0.0, within(1e-3));
       }
     }
   }
@@ -122,9 +139,20 @@ class Phys1dObservablesTest {
     for (double shift : new double[] {0.5, -0.5}) {
       double w = critical * Math.exp(shift);
       for (int r = 0; r < 4; r++) {
-        double nu = value(aTask("ssh").with("v", 1.0).with("w", w).size(80)
-            .disorder("bond-box", 1.6, Map.of("bonds", "intracell")).observe("winding").realisation(r).run(), "winding");
-        assertThat(nu).as("w=%s realisation %d", w, r).isCloseTo(shift > 0 ? 1.0 : 0.0, within(0.1));
+        double nu =
+            value(
+                aTask("ssh")
+                    .with("v", 1.0)
+                    .with("w", w)
+                    .size(80)
+                    .disorder("bond-box", 1.6, Map.of("bonds", "intracell"))
+                    .observe("winding")
+                    .realisation(r)
+                    .run(),
+                "winding");
+        assertThat(nu)
+            .as("w=%s realisation %d", w, r)
+            .isCloseTo(shift > 0 ? 1.0 : 0.0, within(0.1));
       }
     }
   }
@@ -139,19 +167,54 @@ class Phys1dObservablesTest {
   @Test
   void z2AndParityRunThroughTheWorker() {
     // Kitaev (2001): clean wire topological iff |μ| < 2|t|; Pfeuty (1970): ordered iff |h| < |J|.
-    assertThat(value(aTask("pwave-wire").with("mu", 1.0).with("delta", 0.4).periodic().size(20).observe("z2").observe("gap").run(), "z2")).isEqualTo(1.0);
-    assertThat(value(aTask("pwave-wire").with("mu", 3.0).periodic().size(20).observe("z2").run(), "z2")).isEqualTo(0.0);
-    assertThat(value(aTask("ising-chain").with("h", 0.5).periodic().size(20).observe("z2").run(), "z2")).isEqualTo(1.0);
-    assertThat(value(aTask("ising-chain").with("h", 1.5).periodic().size(20).observe("z2").run(), "z2")).isEqualTo(0.0);
+    assertThat(
+            value(
+                aTask("pwave-wire")
+                    .with("mu", 1.0)
+                    .with("delta", 0.4)
+                    .periodic()
+                    .size(20)
+                    .observe("z2")
+                    .observe("gap")
+                    .run(),
+                "z2"))
+        .isEqualTo(1.0);
+    assertThat(
+            value(
+                aTask("pwave-wire").with("mu", 3.0).periodic().size(20).observe("z2").run(), "z2"))
+        .isEqualTo(0.0);
+    assertThat(
+            value(
+                aTask("ising-chain").with("h", 0.5).periodic().size(20).observe("z2").run(), "z2"))
+        .isEqualTo(1.0);
+    assertThat(
+            value(
+                aTask("ising-chain").with("h", 1.5).periodic().size(20).observe("z2").run(), "z2"))
+        .isEqualTo(0.0);
     // Derived: mu ≫ W fills every mode, parity = L mod 2.
-    assertThat(value(aTask("majorana-cluster").with("mu", 4.0).size(7).disorder("majorana-gauss", 0.1, Map.of()).observe("parity").run(), "parity"))
+    assertThat(
+            value(
+                aTask("majorana-cluster")
+                    .with("mu", 4.0)
+                    .size(7)
+                    .disorder("majorana-gauss", 0.1, Map.of())
+                    .observe("parity")
+                    .run(),
+                "parity"))
         .isEqualTo(1.0);
   }
 
   @Test
   void z2FailsWhenAPfaffianVanishes() {
     // Derived: at μ = −2t the periodic ring has a zero mode at k = 0, so Pf(A_periodic) = 0.
-    RealisationResult r = aTask("pwave-wire").with("mu", -2.0).with("delta", 0.5).periodic().size(10).observe("z2").run();
+    RealisationResult r =
+        aTask("pwave-wire")
+            .with("mu", -2.0)
+            .with("delta", 0.5)
+            .periodic()
+            .size(10)
+            .observe("z2")
+            .run();
     assertThat(r.outcome()).isEqualTo(Outcome.FAILED);
   }
 
@@ -177,27 +240,36 @@ class Phys1dObservablesTest {
     Observable z2 = ObservableCatalog.find("z2").orElseThrow();
     Observable parity = ObservableCatalog.find("parity").orElseThrow();
 
-    assertThat(winding.whyNotApplicable(ssh, Boundary.OPEN, effectiveClass(ssh, "bond-box"))).isEmpty();
+    assertThat(winding.whyNotApplicable(ssh, Boundary.OPEN, effectiveClass(ssh, "bond-box")))
+        .isEmpty();
     assertThat(effectiveClass(ssh, "bond-box")).isEqualTo(SymmetryClass.BDI);
     assertThat(winding.whyNotApplicable(ssh, Boundary.PERIODIC, SymmetryClass.BDI)).isPresent();
     // A scalar onsite potential breaks the sublattice symmetry: BDI -> AI, no winding.
     assertThat(effectiveClass(ssh, "onsite-box")).isEqualTo(SymmetryClass.AI);
-    assertThat(winding.whyNotApplicable(ssh, Boundary.OPEN, effectiveClass(ssh, "onsite-box"))).isPresent();
+    assertThat(winding.whyNotApplicable(ssh, Boundary.OPEN, effectiveClass(ssh, "onsite-box")))
+        .isPresent();
     assertThat(winding.whyNotApplicable(wire, Boundary.OPEN, SymmetryClass.BDI)).isPresent();
 
-    assertThat(z2.whyNotApplicable(wire, Boundary.PERIODIC, effectiveClass(wire, "onsite-box", "pairing-box"))).isEmpty();
+    assertThat(
+            z2.whyNotApplicable(
+                wire, Boundary.PERIODIC, effectiveClass(wire, "onsite-box", "pairing-box")))
+        .isEmpty();
     assertThat(z2.whyNotApplicable(wire, Boundary.OPEN, SymmetryClass.BDI)).isPresent();
     assertThat(z2.whyNotApplicable(ssh, Boundary.PERIODIC, SymmetryClass.BDI)).isPresent();
     assertThat(z2.whyNotApplicable(cluster, Boundary.PERIODIC, SymmetryClass.D)).isPresent();
 
-    assertThat(parity.whyNotApplicable(cluster, Boundary.OPEN, effectiveClass(cluster, "majorana-gauss"))).isEmpty();
+    assertThat(
+            parity.whyNotApplicable(
+                cluster, Boundary.OPEN, effectiveClass(cluster, "majorana-gauss")))
+        .isEmpty();
     assertThat(effectiveClass(cluster, "majorana-gauss")).isEqualTo(SymmetryClass.D);
     assertThat(parity.whyNotApplicable(wire, Boundary.OPEN, SymmetryClass.BDI)).isPresent();
 
     assertThat(DisorderCatalog.find("field-box").orElseThrow().whyNotApplicable(wire)).isPresent();
     assertThat(DisorderCatalog.find("pairing-box").orElseThrow().whyNotApplicable(wire)).isEmpty();
     assertThat(DisorderCatalog.find("bond-box").orElseThrow().whyNotApplicable(ssh)).isEmpty();
-    assertThat(DisorderCatalog.find("majorana-gauss").orElseThrow().whyNotApplicable(wire)).isPresent();
+    assertThat(DisorderCatalog.find("majorana-gauss").orElseThrow().whyNotApplicable(wire))
+        .isPresent();
   }
 
   @Test

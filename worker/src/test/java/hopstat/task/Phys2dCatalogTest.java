@@ -26,7 +26,9 @@ class Phys2dCatalogTest {
   @Test
   void modelsAreRegisteredWithTheirClasses() {
     assertThat(ModelCatalog.find("haldane")).map(Model::symmetryClass).contains(SymmetryClass.A);
-    assertThat(ModelCatalog.find("flux-square")).map(Model::symmetryClass).contains(SymmetryClass.A);
+    assertThat(ModelCatalog.find("flux-square"))
+        .map(Model::symmetryClass)
+        .contains(SymmetryClass.A);
     assertThat(ModelCatalog.find("pip-square")).map(Model::symmetryClass).contains(SymmetryClass.D);
     assertThat(ModelCatalog.find("bhz")).map(Model::symmetryClass).contains(SymmetryClass.AII);
   }

@@ -10,7 +10,10 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
-/** Test-data builder for grid points of the two-dimensional models: {@code aPoint("qwz").with("m", -1).size(14).open()}. */
+/**
+ * Test-data builder for grid points of the two-dimensional models: {@code aPoint("qwz").with("m",
+ * -1).size(14).open()}.
+ */
 public final class Points2d {
 
   private final String model;
@@ -66,12 +69,14 @@ public final class Points2d {
   }
 
   public PointSpec build() {
-    return new PointSpec(model, new ParameterValues(parameters), size, boundary, fermiEnergy, disorder, observables);
+    return new PointSpec(
+        model, new ParameterValues(parameters), size, boundary, fermiEnergy, disorder, observables);
   }
 
   /** Runs one realisation with this seed on the native backend and returns the result. */
   public RealisationResult run(long seed) {
-    return RealisationRunner.run(new RealisationTask("t", 0, 0, seed, build()), Workspaces.shared());
+    return RealisationRunner.run(
+        new RealisationTask("t", 0, 0, seed, build()), Workspaces.shared());
   }
 
   /** Runs one realisation and returns its values; fails the test if the realisation FAILED. */
@@ -86,7 +91,8 @@ public final class Points2d {
   /** One shared workspace per test thread (tests run single-threaded per class). */
   static final class Workspaces {
     private static final ThreadLocal<RealisationWorkspace> WORKSPACE =
-        ThreadLocal.withInitial(() -> new RealisationWorkspace(LinalgFactory.create(LinalgKind.NATIVE)));
+        ThreadLocal.withInitial(
+            () -> new RealisationWorkspace(LinalgFactory.create(LinalgKind.NATIVE)));
 
     private Workspaces() {}
 

@@ -11,7 +11,10 @@ import hopstat.model.ModelCatalog;
 import java.util.random.RandomGenerator;
 import org.ejml.data.ZMatrixRMaj;
 
-/** Test helper: rebuilds a realisation's Hamiltonian exactly as {@link RealisationRunner} does and answers dense questions about it. */
+/**
+ * Test helper: rebuilds a realisation's Hamiltonian exactly as {@link RealisationRunner} does and
+ * answers dense questions about it.
+ */
 final class RealisationContextProbe {
 
   private final Lattice lattice;
@@ -30,7 +33,9 @@ final class RealisationContextProbe {
     model.addClean(point.parameters(), lattice, b);
     RandomGenerator random = SeedOps.generator(seed);
     for (DisorderTerm term : point.disorder()) {
-      DisorderCatalog.find(term.type()).orElseThrow().apply(term, model, point.parameters(), lattice, random, b);
+      DisorderCatalog.find(term.type())
+          .orElseThrow()
+          .apply(term, model, point.parameters(), lattice, random, b);
     }
     return new RealisationContextProbe(lattice, b);
   }

@@ -15,11 +15,13 @@ class SeedOpsTest {
    */
   @Test
   void derivationIsPinned() {
-    assertThat(SeedOps.realisationSeed(20261201L, 0, 0)).isEqualTo(SeedOps.realisationSeed(20261201L, 0, 0));
+    assertThat(SeedOps.realisationSeed(20261201L, 0, 0))
+        .isEqualTo(SeedOps.realisationSeed(20261201L, 0, 0));
     assertThat(SeedOps.generator(SeedOps.realisationSeed(1L, 2, 3)).nextLong())
         .isEqualTo(SeedOps.generator(SeedOps.realisationSeed(1L, 2, 3)).nextLong());
     assertThat(SeedOps.mix64(0L)).isEqualTo(0L);
-    // SplitMix64 finaliser of 1 (Steele, Lea, Flood, OOPSLA 2014; value from this implementation, pinned).
+    // SplitMix64 finaliser of 1 (Steele, Lea, Flood, OOPSLA 2014; value from this implementation,
+    // pinned).
     assertThat(SeedOps.mix64(1L)).isEqualTo(PINNED_MIX_OF_ONE);
     assertThat(SeedOps.realisationSeed(12345L, 3, 17)).isEqualTo(PINNED_SEED);
   }

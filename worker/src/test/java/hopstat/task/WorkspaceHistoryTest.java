@@ -20,14 +20,23 @@ class WorkspaceHistoryTest {
   @ParameterizedTest
   @EnumSource(LinalgKind.class)
   void valuesAreIndependentOfEarlierRealisations(LinalgKind kind) {
-    PointSpec clean = aPoint("qwz").with("m", 1).with("t", 1).size(12).observing("gap", "bott").build();
+    PointSpec clean =
+        aPoint("qwz").with("m", 1).with("t", 1).size(12).observing("gap", "bott").build();
     RealisationTask task = new RealisationTask("p0-r0", 0, 0, 42L, clean);
-    RealisationResult fresh = RealisationRunner.run(task, new RealisationWorkspace(LinalgFactory.create(kind)));
+    RealisationResult fresh =
+        RealisationRunner.run(task, new RealisationWorkspace(LinalgFactory.create(kind)));
 
     RealisationWorkspace used = new RealisationWorkspace(LinalgFactory.create(kind));
     for (int i = 0; i < 4; i++) {
       // Other sizes and disordered samples whose occupied counts differ from the clean one's.
-      PointSpec other = aPoint("qwz").with("m", 1).with("t", 1).size(10 + i).boxDisorder(5.0, Map.of()).observing("gap", "bott").build();
+      PointSpec other =
+          aPoint("qwz")
+              .with("m", 1)
+              .with("t", 1)
+              .size(10 + i)
+              .boxDisorder(5.0, Map.of())
+              .observing("gap", "bott")
+              .build();
       RealisationRunner.run(new RealisationTask("p1-r" + i, 1, i, 1000L + i, other), used);
     }
     RealisationResult after = RealisationRunner.run(task, used);

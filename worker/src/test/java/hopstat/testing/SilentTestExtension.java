@@ -14,7 +14,8 @@ import org.junit.jupiter.api.extension.ExtensionContext;
  */
 public final class SilentTestExtension implements BeforeEachCallback, AfterEachCallback {
 
-  private static final ExtensionContext.Namespace NS = ExtensionContext.Namespace.create(SilentTestExtension.class);
+  private static final ExtensionContext.Namespace NS =
+      ExtensionContext.Namespace.create(SilentTestExtension.class);
 
   @Override
   public void beforeEach(ExtensionContext context) {
@@ -33,9 +34,11 @@ public final class SilentTestExtension implements BeforeEachCallback, AfterEachC
     ExtensionContext.Store store = context.getStore(NS);
     System.setOut(store.get("out", PrintStream.class));
     System.setErr(store.get("err", PrintStream.class));
-    String text = store.get("captured", ByteArrayOutputStream.class).toString(StandardCharsets.UTF_8);
+    String text =
+        store.get("captured", ByteArrayOutputStream.class).toString(StandardCharsets.UTF_8);
     if (!text.isEmpty()) {
-      throw new AssertionError("tests must be silent, but this one wrote to stdout/stderr:\n" + text);
+      throw new AssertionError(
+          "tests must be silent, but this one wrote to stdout/stderr:\n" + text);
     }
   }
 }

@@ -6,7 +6,8 @@ import org.jfree.chart.JFreeChart;
 /**
  * One figure of a report.
  *
- * @param name file stem under {@code figures/}, unique within a report (letters, digits, '-', '_', '.')
+ * @param name file stem under {@code figures/}, unique within a report (letters, digits, '-', '_',
+ *     '.')
  * @param caption one or two sentences saying what is plotted, with error-bar meaning
  * @param chart the chart
  */

@@ -1,7 +1,7 @@
 package hopstat.report.figure;
 
-import hopstat.report.StudyReport;
 import hopstat.record.RealisationRecord;
+import hopstat.report.StudyReport;
 import hopstat.statistics.BoundaryEstimate;
 import hopstat.statistics.BoundaryKind;
 import hopstat.statistics.MobilityCurve;
@@ -37,8 +37,8 @@ import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.DatasetRenderingOrder;
 import org.jfree.chart.plot.IntervalMarker;
-import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.PlotOrientation;
+import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYBarRenderer;
 import org.jfree.chart.renderer.xy.XYBlockRenderer;
@@ -66,10 +66,15 @@ public final class FigureOps {
   public static final int WIDTH = 760;
 
   public static final int HEIGHT = 480;
+
   /** At most this many curves per line plot (one per L or per combination of the other axes). */
   public static final int MAX_SERIES = 8;
-  /** At most this many mobility figures (one per estimator, quantity, axis and other-axis values). */
+
+  /**
+   * At most this many mobility figures (one per estimator, quantity, axis and other-axis values).
+   */
   public static final int MAX_MOBILITY_FIGURES = 8;
+
   /** Histograms are drawn at most at this many grid points (those nearest the boundaries). */
   public static final int MAX_HISTOGRAM_POINTS = 4;
 
@@ -81,8 +86,8 @@ public final class FigureOps {
    * All figures, in order: per quantity and per grid axis with at least three values, the mean
    * against that axis; for two-axis grids, heat maps of each mean and of P(modal value) with the
    * boundary estimates overlaid; histograms at the points nearest the boundary estimates; then the
-   * mobility curves (one figure per estimator, quantity, axis and other-axis values, at most
-   * {@link #MAX_MOBILITY_FIGURES}) with the edges and gap windows overlaid.
+   * mobility curves (one figure per estimator, quantity, axis and other-axis values, at most {@link
+   * #MAX_MOBILITY_FIGURES}) with the edges and gap windows overlaid.
    */
   public static List<Figure> figures(StudyReport report) {
     List<Figure> figures = new ArrayList<>();
@@ -94,7 +99,9 @@ public final class FigureOps {
         }
       }
     }
-    if (axes.size() == 2 && distinct(report, axes.get(0)).size() >= 2 && distinct(report, axes.get(1)).size() >= 2) {
+    if (axes.size() == 2
+        && distinct(report, axes.get(0)).size() >= 2
+        && distinct(report, axes.get(1)).size() >= 2) {
       for (Quantity q : report.layout().quantities()) {
         figures.add(heatMap(report, q, false));
         if (q.integerValued()) {
@@ -114,12 +121,17 @@ public final class FigureOps {
     return figures;
   }
 
-  /** One figure per group of mobility curves sharing method, quantity, axis and other-axis values. */
+  /**
+   * One figure per group of mobility curves sharing method, quantity, axis and other-axis values.
+   */
   static List<Figure> mobilityFigures(StudyReport r) {
     MobilitySummary m = r.summary().mobility();
     Map<List<Object>, List<MobilityCurve>> groups = new LinkedHashMap<>();
     for (MobilityCurve c : m.curves()) {
-      groups.computeIfAbsent(List.of(c.method(), c.quantity(), c.axis(), c.fixed()), k -> new ArrayList<>()).add(c);
+      groups
+          .computeIfAbsent(
+              List.of(c.method(), c.quantity(), c.axis(), c.fixed()), k -> new ArrayList<>())
+          .add(c);
     }
     List<Figure> out = new ArrayList<>();
     int index = 0;
@@ -136,7 +148,8 @@ public final class FigureOps {
     MobilityCurve first = curves.get(0);
     YIntervalSeriesCollection data = new YIntervalSeriesCollection();
     for (MobilityCurve c : curves) {
-      YIntervalSeries s = new YIntervalSeries(Double.isNaN(c.size()) ? "one size" : "L = " + format(c.size()));
+      YIntervalSeries s =
+          new YIntervalSeries(Double.isNaN(c.size()) ? "one size" : "L = " + format(c.size()));
       for (MobilityCurve.Point p : c.points()) {
         double low = Double.isNaN(p.interval().low()) ? p.mean() : p.interval().low();
         double high = Double.isNaN(p.interval().high()) ? p.mean() : p.interval().high();
@@ -149,54 +162,101 @@ public final class FigureOps {
     renderer.setDefaultLinesVisible(true);
     renderer.setDefaultShapesVisible(true);
     renderer.setCapLength(6);
-    String xLabel = first.axis().equals(MobilityOps.LEVEL_RATIO_AXIS) ? "window centre E (units of t)" : r.axisLabel(first.axis());
+    String xLabel =
+        first.axis().equals(MobilityOps.LEVEL_RATIO_AXIS)
+            ? "window centre E (units of t)"
+            : r.axisLabel(first.axis());
     NumberAxis x = new NumberAxis(xLabel);
     x.setAutoRangeIncludesZero(false);
-    String yLabel = switch (first.method()) {
-      case TRANSFER_MATRIX -> "Λ = 1/(γM)";
-      case LEVEL_RATIO -> "⟨r⟩";
-      case INVARIANT_PLATEAU -> "fraction quantised at " + format(first.plateauValue());
-    };
+    String yLabel =
+        switch (first.method()) {
+          case TRANSFER_MATRIX -> "Λ = 1/(γM)";
+          case LEVEL_RATIO -> "⟨r⟩";
+          case INVARIANT_PLATEAU -> "fraction quantised at " + format(first.plateauValue());
+        };
     NumberAxis y = new NumberAxis(yLabel);
     y.setAutoRangeIncludesZero(false);
     XYPlot plot = new XYPlot(data, x, y, renderer);
     MobilitySummary m = r.summary().mobility();
     for (MobilityGap g : m.gaps()) {
-      if (g.method() == first.method() && g.quantity().equals(first.quantity()) && g.axis().equals(first.axis()) && g.fixed().equals(first.fixed())
+      if (g.method() == first.method()
+          && g.quantity().equals(first.quantity())
+          && g.axis().equals(first.axis())
+          && g.fixed().equals(first.fixed())
           && !Double.isNaN(g.lower())) {
-        IntervalMarker band = new IntervalMarker(g.lower(), g.upper(), new Color(120, 170, 230, 50));
+        IntervalMarker band =
+            new IntervalMarker(g.lower(), g.upper(), new Color(120, 170, 230, 50));
         plot.addDomainMarker(band);
       }
     }
     for (MobilityEdge e : m.edges()) {
-      if (e.method() == first.method() && e.quantity().equals(first.quantity()) && e.axis().equals(first.axis()) && e.fixed().equals(first.fixed())) {
-        ValueMarker v = new ValueMarker(e.estimate(), new Color(200, 60, 60), new BasicStroke(1.5f));
+      if (e.method() == first.method()
+          && e.quantity().equals(first.quantity())
+          && e.axis().equals(first.axis())
+          && e.fixed().equals(first.fixed())) {
+        ValueMarker v =
+            new ValueMarker(e.estimate(), new Color(200, 60, 60), new BasicStroke(1.5f));
         plot.addDomainMarker(v);
         if (!Double.isNaN(e.interval().low())) {
-          plot.addDomainMarker(new IntervalMarker(e.interval().low(), e.interval().high(), new Color(200, 60, 60, 40)));
+          plot.addDomainMarker(
+              new IntervalMarker(
+                  e.interval().low(), e.interval().high(), new Color(200, 60, 60, 40)));
         }
       }
     }
     if (first.method() == MobilityMethod.LEVEL_RATIO) {
-      plot.addRangeMarker(new ValueMarker(MobilityOps.POISSON_RATIO, Color.GRAY, new BasicStroke(1f)));
+      plot.addRangeMarker(
+          new ValueMarker(MobilityOps.POISSON_RATIO, Color.GRAY, new BasicStroke(1f)));
       if (!Double.isNaN(m.wignerDysonRatio())) {
         plot.addRangeMarker(new ValueMarker(m.wignerDysonRatio(), Color.GRAY, new BasicStroke(1f)));
       }
     } else if (first.method() == MobilityMethod.INVARIANT_PLATEAU) {
-      plot.addRangeMarker(new ValueMarker(MobilityOps.QUANTISED_FRACTION, Color.GRAY, new BasicStroke(1f)));
+      plot.addRangeMarker(
+          new ValueMarker(MobilityOps.QUANTISED_FRACTION, Color.GRAY, new BasicStroke(1f)));
     }
-    String at = first.fixed().isEmpty() ? "" : " at " + first.fixed().toString().replaceAll("[{}]", "");
-    JFreeChart chart = new JFreeChart(first.method().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ') + ": " + first.quantity() + at,
-        JFreeChart.DEFAULT_TITLE_FONT, plot, true);
+    String at =
+        first.fixed().isEmpty() ? "" : " at " + first.fixed().toString().replaceAll("[{}]", "");
+    JFreeChart chart =
+        new JFreeChart(
+            first.method().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ')
+                + ": "
+                + first.quantity()
+                + at,
+            JFreeChart.DEFAULT_TITLE_FONT,
+            plot,
+            true);
     style(chart);
-    String bars = first.method() == MobilityMethod.INVARIANT_PLATEAU ? "95 % Wilson interval of the fraction"
-        : "95 % percentile-bootstrap interval of the mean";
-    String caption = "Mobility estimator " + first.method().name() + " (" + first.quantity() + ") against " + xLabel + ", one curve per size. Error bars: "
-        + bars + " (disorder-sampling error only). Red lines: edges (crossings) with shaded bootstrap intervals; blue band: the window around the "
-        + "reference energy classed localised (quantised)" + (first.method() == MobilityMethod.LEVEL_RATIO ? "; grey lines: Poisson and Wigner-Dyson ⟨r⟩"
-        : first.method() == MobilityMethod.INVARIANT_PLATEAU ? "; grey line: the quantised-fraction threshold " + MobilityOps.QUANTISED_FRACTION : "") + ".";
-    return new Figure("mobility-" + index + "-" + first.method().name().toLowerCase(java.util.Locale.ROOT) + "-" + first.quantity().replaceAll("[^A-Za-z0-9_.-]", "_"),
-        caption, chart);
+    String bars =
+        first.method() == MobilityMethod.INVARIANT_PLATEAU
+            ? "95 % Wilson interval of the fraction"
+            : "95 % percentile-bootstrap interval of the mean";
+    String caption =
+        "Mobility estimator "
+            + first.method().name()
+            + " ("
+            + first.quantity()
+            + ") against "
+            + xLabel
+            + ", one curve per size. Error bars: "
+            + bars
+            + " (disorder-sampling error only). Red lines: edges (crossings) with shaded bootstrap intervals; blue band: the window around the "
+            + "reference energy classed localised (quantised)"
+            + (first.method() == MobilityMethod.LEVEL_RATIO
+                ? "; grey lines: Poisson and Wigner-Dyson ⟨r⟩"
+                : first.method() == MobilityMethod.INVARIANT_PLATEAU
+                    ? "; grey line: the quantised-fraction threshold "
+                        + MobilityOps.QUANTISED_FRACTION
+                    : "")
+            + ".";
+    return new Figure(
+        "mobility-"
+            + index
+            + "-"
+            + first.method().name().toLowerCase(java.util.Locale.ROOT)
+            + "-"
+            + first.quantity().replaceAll("[^A-Za-z0-9_.-]", "_"),
+        caption,
+        chart);
   }
 
   /** PNG bytes of a figure. */
@@ -204,7 +264,8 @@ public final class FigureOps {
     BufferedImage image = new BufferedImage(WIDTH, HEIGHT, BufferedImage.TYPE_INT_RGB);
     Graphics2D g = image.createGraphics();
     g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
-    g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+    g.setRenderingHint(
+        RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
     figure.chart().draw(g, new Rectangle2D.Double(0, 0, WIDTH, HEIGHT));
     g.dispose();
     ByteArrayOutputStream out = new ByteArrayOutputStream();
@@ -234,11 +295,12 @@ public final class FigureOps {
   }
 
   private static String quantityLabel(Quantity q) {
-    String unit = switch (q.unit()) {
-      case "1", "" -> "";
-      case "t", "energy" -> " (units of t)";
-      default -> " (" + q.unit() + ")";
-    };
+    String unit =
+        switch (q.unit()) {
+          case "1", "" -> "";
+          case "t", "energy" -> " (units of t)";
+          default -> " (" + q.unit() + ")";
+        };
     return q.name() + unit;
   }
 
@@ -255,7 +317,10 @@ public final class FigureOps {
     StringBuilder b = new StringBuilder();
     for (String g : r.layout().gridNames()) {
       if (!g.equals(axis)) {
-        b.append(b.length() > 0 ? ", " : "").append(g).append(" = ").append(format(coordinates.get(g)));
+        b.append(b.length() > 0 ? ", " : "")
+            .append(g)
+            .append(" = ")
+            .append(format(coordinates.get(g)));
       }
     }
     return b.length() == 0 ? "all" : b.toString();
@@ -293,7 +358,9 @@ public final class FigureOps {
       double mean = s.mean().mean();
       double low = Double.isNaN(s.mean().ciLow()) ? mean : s.mean().ciLow();
       double high = Double.isNaN(s.mean().ciHigh()) ? mean : s.mean().ciHigh();
-      series.computeIfAbsent(key, YIntervalSeries::new).add(p.coordinates().get(axis), mean, low, high);
+      series
+          .computeIfAbsent(key, YIntervalSeries::new)
+          .add(p.coordinates().get(axis), mean, low, high);
     }
     YIntervalSeriesCollection data = new YIntervalSeriesCollection();
     series.values().forEach(data::addSeries);
@@ -307,11 +374,17 @@ public final class FigureOps {
     NumberAxis y = new NumberAxis("mean " + quantityLabel(q));
     y.setAutoRangeIncludesZero(false);
     XYPlot plot = new XYPlot(data, x, y, renderer);
-    JFreeChart chart = new JFreeChart(q.name() + " vs " + axis, JFreeChart.DEFAULT_TITLE_FONT, plot, true);
+    JFreeChart chart =
+        new JFreeChart(q.name() + " vs " + axis, JFreeChart.DEFAULT_TITLE_FONT, plot, true);
     style(chart);
-    String caption = "Mean of " + q.name() + " over realisations against " + axis + ", one curve per value of the other grid axes"
-        + (series.size() >= MAX_SERIES ? " (first " + MAX_SERIES + " shown)" : "")
-        + ". Error bars: 95 % Student-t interval of the mean (disorder-sampling error only).";
+    String caption =
+        "Mean of "
+            + q.name()
+            + " over realisations against "
+            + axis
+            + ", one curve per value of the other grid axes"
+            + (series.size() >= MAX_SERIES ? " (first " + MAX_SERIES + " shown)" : "")
+            + ". Error bars: 95 % Student-t interval of the mean (disorder-sampling error only).";
     return new Figure("mean-" + q.name() + "-vs-" + axis, caption, chart);
   }
 
@@ -323,7 +396,8 @@ public final class FigureOps {
     double max = Double.NEGATIVE_INFINITY;
     for (PointSummary p : r.summary().points()) {
       QuantitySummary s = find(p, q.name());
-      double z = s == null ? Double.NaN : modalFraction ? s.integer().modalFraction() : s.mean().mean();
+      double z =
+          s == null ? Double.NaN : modalFraction ? s.integer().modalFraction() : s.mean().mean();
       cells.add(new double[] {p.coordinates().get(xAxis), p.coordinates().get(yAxis), z});
       if (!Double.isNaN(z)) {
         min = Math.min(min, z);
@@ -372,7 +446,8 @@ public final class FigureOps {
       plot.setDatasetRenderingOrder(DatasetRenderingOrder.FORWARD);
     }
     String what = modalFraction ? "P(modal value) of " + q.name() : "mean " + quantityLabel(q);
-    JFreeChart chart = new JFreeChart(what, JFreeChart.DEFAULT_TITLE_FONT, plot, overlay.getSeriesCount() > 0);
+    JFreeChart chart =
+        new JFreeChart(what, JFreeChart.DEFAULT_TITLE_FONT, plot, overlay.getSeriesCount() > 0);
     NumberAxis legendAxis = new NumberAxis(modalFraction ? "P(modal)" : "mean " + q.name());
     legendAxis.setRange(min, max > min ? max : min + 1);
     PaintScaleLegend legend = new PaintScaleLegend(scale, legendAxis);
@@ -381,10 +456,15 @@ public final class FigureOps {
     legend.setStripWidth(14);
     chart.addSubtitle(legend);
     style(chart);
-    String caption = (modalFraction
-        ? "Fraction of realisations at each grid point whose rounded " + q.name() + " equals that point's modal value"
-        : "Mean of " + q.name() + " at each grid point")
-        + (overlay.getSeriesCount() > 0 ? "; marks: estimated boundaries (half-integer crossings and variance peaks) with 95 % bootstrap intervals as bars." : ".");
+    String caption =
+        (modalFraction
+                ? "Fraction of realisations at each grid point whose rounded "
+                    + q.name()
+                    + " equals that point's modal value"
+                : "Mean of " + q.name() + " at each grid point")
+            + (overlay.getSeriesCount() > 0
+                ? "; marks: estimated boundaries (half-integer crossings and variance peaks) with 95 % bootstrap intervals as bars."
+                : ".");
     return new Figure((modalFraction ? "pmodal-" : "heat-") + q.name(), caption, chart);
   }
 
@@ -400,7 +480,8 @@ public final class FigureOps {
     return Double.isInfinite(best) ? 1 : best;
   }
 
-  private static XYIntervalSeriesCollection boundaryOverlay(StudyReport r, String quantity, String xAxis, String yAxis) {
+  private static XYIntervalSeriesCollection boundaryOverlay(
+      StudyReport r, String quantity, String xAxis, String yAxis) {
     XYIntervalSeries crossings = new XYIntervalSeries("half-integer crossing");
     XYIntervalSeries peaks = new XYIntervalSeries("variance peak");
     for (BoundaryEstimate b : r.summary().boundaries()) {
@@ -444,10 +525,15 @@ public final class FigureOps {
   }
 
   private static Figure histogram(StudyReport r, Quantity q, int point) {
-    double[] x = r.records().stream()
-        .filter(rec -> rec.result().pointIndex() == point && rec.result().outcome() == Outcome.DONE && rec.result().values().containsKey(q.name()))
-        .mapToDouble((RealisationRecord rec) -> rec.result().values().get(q.name()))
-        .toArray();
+    double[] x =
+        r.records().stream()
+            .filter(
+                rec ->
+                    rec.result().pointIndex() == point
+                        && rec.result().outcome() == Outcome.DONE
+                        && rec.result().values().containsKey(q.name()))
+            .mapToDouble((RealisationRecord rec) -> rec.result().values().get(q.name()))
+            .toArray();
     if (x.length == 0) {
       return null;
     }
@@ -474,8 +560,16 @@ public final class FigureOps {
     HistogramDataset data = new HistogramDataset();
     String where = others(r, r.layout().points().get(point).coordinates(), "");
     data.addSeries(q.name(), x, bins, min, max);
-    JFreeChart chart = ChartFactory.createHistogram(q.name() + " at " + where, quantityLabel(q), "realisations", data, PlotOrientation.VERTICAL, false, false,
-        false);
+    JFreeChart chart =
+        ChartFactory.createHistogram(
+            q.name() + " at " + where,
+            quantityLabel(q),
+            "realisations",
+            data,
+            PlotOrientation.VERTICAL,
+            false,
+            false,
+            false);
     XYPlot plot = (XYPlot) chart.getPlot();
     if (plot.getRenderer() instanceof XYBarRenderer bar) {
       bar.setShadowVisible(false);
@@ -483,8 +577,19 @@ public final class FigureOps {
       bar.setSeriesPaint(0, new Color(59, 82, 139));
     }
     style(chart);
-    String caption = "Histogram of " + q.name() + " over the " + x.length + " DONE realisations at grid point " + point + " (" + where + ")"
-        + (q.integerValued() ? "; bins of width 0.1 centred on integers, so non-quantised samples stand apart." : "; 20 equal bins.");
+    String caption =
+        "Histogram of "
+            + q.name()
+            + " over the "
+            + x.length
+            + " DONE realisations at grid point "
+            + point
+            + " ("
+            + where
+            + ")"
+            + (q.integerValued()
+                ? "; bins of width 0.1 centred on integers, so non-quantised samples stand apart."
+                : "; 20 equal bins.");
     return new Figure("hist-" + q.name() + "-p" + point, caption, chart);
   }
 }

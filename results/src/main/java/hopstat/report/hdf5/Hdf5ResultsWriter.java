@@ -40,8 +40,8 @@ import java.util.function.ToDoubleFunction;
  *     ci95_low, ci95_high, exists_fraction (float64), nearest_point (int32)
  * </pre>
  *
- * Every dataset is one-dimensional. jHDF cannot write empty datasets, so a group whose table has
- * no rows carries the attribute {@code rows = 0} and no datasets. Formats only.
+ * Every dataset is one-dimensional. jHDF cannot write empty datasets, so a group whose table has no
+ * rows carries the attribute {@code rows = 0} and no datasets. Formats only.
  */
 public final class Hdf5ResultsWriter {
 
@@ -113,21 +113,35 @@ public final class Hdf5ResultsWriter {
     g.putDataset("wall_seconds", wall);
     WritableGroup coordinates = g.putGroup("coordinates");
     for (String axis : report.layout().gridNames()) {
-      coordinates.putDataset(axis, column(records, r -> {
-        Double v = r.grid().get(axis);
-        return v == null ? Double.NaN : v;
-      }));
+      coordinates.putDataset(
+          axis,
+          column(
+              records,
+              r -> {
+                Double v = r.grid().get(axis);
+                return v == null ? Double.NaN : v;
+              }));
     }
     WritableGroup values = g.putGroup("values");
     for (Quantity q : report.layout().quantities()) {
-      values.putDataset(q.name(), column(records, r -> {
-        Double v = r.result().outcome() == Outcome.DONE ? r.result().values().get(q.name()) : null;
-        return v == null ? Double.NaN : v;
-      })).putAttribute("unit", q.unit());
+      values
+          .putDataset(
+              q.name(),
+              column(
+                  records,
+                  r -> {
+                    Double v =
+                        r.result().outcome() == Outcome.DONE
+                            ? r.result().values().get(q.name())
+                            : null;
+                    return v == null ? Double.NaN : v;
+                  }))
+          .putAttribute("unit", q.unit());
     }
   }
 
-  private static double[] column(List<RealisationRecord> records, ToDoubleFunction<RealisationRecord> f) {
+  private static double[] column(
+      List<RealisationRecord> records, ToDoubleFunction<RealisationRecord> f) {
     double[] x = new double[records.size()];
     for (int i = 0; i < x.length; i++) {
       x[i] = f.applyAsDouble(records.get(i));
@@ -202,11 +216,16 @@ public final class Hdf5ResultsWriter {
       put(g, rows, "modal_fraction", r -> r.integer().modalFraction());
       put(g, rows, "modal_wilson_low", r -> r.integer().modalWilsonLow());
       put(g, rows, "modal_wilson_high", r -> r.integer().modalWilsonHigh());
-      g.putDataset("non_quantised", rows.stream().mapToInt(r -> r.integer().nonQuantised()).toArray());
+      g.putDataset(
+          "non_quantised", rows.stream().mapToInt(r -> r.integer().nonQuantised()).toArray());
     }
   }
 
-  private static void put(WritableGroup g, List<QuantitySummary> rows, String name, ToDoubleFunction<QuantitySummary> f) {
+  private static void put(
+      WritableGroup g,
+      List<QuantitySummary> rows,
+      String name,
+      ToDoubleFunction<QuantitySummary> f) {
     g.putDataset(name, rows.stream().mapToDouble(f).toArray());
   }
 
@@ -225,7 +244,8 @@ public final class Hdf5ResultsWriter {
     g.putDataset("estimate", b.stream().mapToDouble(BoundaryEstimate::estimate).toArray());
     g.putDataset("ci95_low", b.stream().mapToDouble(x -> x.interval().low()).toArray());
     g.putDataset("ci95_high", b.stream().mapToDouble(x -> x.interval().high()).toArray());
-    g.putDataset("exists_fraction", b.stream().mapToDouble(BoundaryEstimate::existsFraction).toArray());
+    g.putDataset(
+        "exists_fraction", b.stream().mapToDouble(BoundaryEstimate::existsFraction).toArray());
     g.putDataset("nearest_point", b.stream().mapToInt(BoundaryEstimate::nearestPoint).toArray());
   }
 

@@ -45,28 +45,32 @@ import org.slf4j.LoggerFactory;
  * The service's HTTP API and dashboard on the JDK's built-in server. Every request passes, in
  * order: the Host check (on a loopback bind the Host header must name the loopback address, which
  * stops DNS-rebinding pages), the token check when a token is configured (401 before anything is
- * read or changed), the Origin check and JSON content type on POST (a cross-site form cannot
- * post), the body limit (413), then strict path parsing: job ids must match {@link JobIds#isValid}
- * and any other path is refused, so no request names a file outside the root.
+ * read or changed), the Origin check and JSON content type on POST (a cross-site form cannot post),
+ * the body limit (413), then strict path parsing: job ids must match {@link JobIds#isValid} and any
+ * other path is refused, so no request names a file outside the root.
  */
 public final class HttpApi implements AutoCloseable {
 
   /** Largest request body (bytes). */
   public static final int MAX_BODY_BYTES = 1 << 20;
+
   /** Cookie the dashboard uses to carry the token after {@code /?token=...}. */
   public static final String TOKEN_COOKIE = "hopstat-token";
+
   /** Oversized bodies are drained up to this many bytes before the 413 (see readBody). */
   static final long MAX_DRAIN_BYTES = 8L << 20;
+
   /** HTTP worker threads. */
   static final int HTTP_THREADS = 8;
 
   private static final Logger LOG = LoggerFactory.getLogger(HttpApi.class);
   private static final ObjectMapper JSON = new ObjectMapper();
-  private static final Map<String, String[]> STATIC = Map.of(
-      "/", new String[] {"dashboard.html", "text/html; charset=utf-8"},
-      "/index.html", new String[] {"dashboard.html", "text/html; charset=utf-8"},
-      "/dashboard.js", new String[] {"dashboard.js", "text/javascript; charset=utf-8"},
-      "/dashboard.css", new String[] {"dashboard.css", "text/css; charset=utf-8"});
+  private static final Map<String, String[]> STATIC =
+      Map.of(
+          "/", new String[] {"dashboard.html", "text/html; charset=utf-8"},
+          "/index.html", new String[] {"dashboard.html", "text/html; charset=utf-8"},
+          "/dashboard.js", new String[] {"dashboard.js", "text/javascript; charset=utf-8"},
+          "/dashboard.css", new String[] {"dashboard.css", "text/css; charset=utf-8"});
   private static final Set<String> ACTIONS = Set.of("cancel", "pause", "resume");
 
   private final BatchService service;
@@ -82,14 +86,20 @@ public final class HttpApi implements AutoCloseable {
     this.tokenHash = spec.hasToken() ? sha256(spec.token()) : null;
     this.server = HttpServer.create(new InetSocketAddress(spec.bind(), spec.port()), 64);
     AtomicInteger n = new AtomicInteger();
-    this.executor = Executors.newFixedThreadPool(HTTP_THREADS, r -> {
-      Thread t = new Thread(r, "hopstat-serve-http-" + n.incrementAndGet());
-      t.setDaemon(true);
-      return t;
-    });
+    this.executor =
+        Executors.newFixedThreadPool(
+            HTTP_THREADS,
+            r -> {
+              Thread t = new Thread(r, "hopstat-serve-http-" + n.incrementAndGet());
+              t.setDaemon(true);
+              return t;
+            });
     server.setExecutor(executor);
     server.createContext("/", this::handle);
-    String host = spec.bind() instanceof Inet6Address ? "[" + spec.bind().getHostAddress() + "]" : spec.bind().getHostAddress();
+    String host =
+        spec.bind() instanceof Inet6Address
+            ? "[" + spec.bind().getHostAddress() + "]"
+            : spec.bind().getHostAddress();
     this.uri = URI.create("http://" + host + ":" + server.getAddress().getPort() + "/");
   }
 
@@ -114,7 +124,8 @@ public final class HttpApi implements AutoCloseable {
       } catch (IllegalStateException e) {
         send(x, 409, error("conflict", e.getMessage()));
       } catch (Exception e) { // the HTTP boundary: one bad request must not take the server down
-        LOG.error("{} {} failed: {}", x.getRequestMethod(), x.getRequestURI().getRawPath(), e.toString());
+        LOG.error(
+            "{} {} failed: {}", x.getRequestMethod(), x.getRequestURI().getRawPath(), e.toString());
         send(x, 500, error("internal", e.getClass().getSimpleName() + ": " + e.getMessage()));
       }
     }
@@ -125,12 +136,22 @@ public final class HttpApi implements AutoCloseable {
     String rawPath = x.getRequestURI().getRawPath();
     Headers h = x.getRequestHeaders();
     if (spec.bind().isLoopbackAddress() && !isLoopbackHost(h.getFirst("Host"))) {
-      send(x, 403, error("forbidden", "the Host header must name the loopback address this service listens on"));
+      send(
+          x,
+          403,
+          error(
+              "forbidden",
+              "the Host header must name the loopback address this service listens on"));
       return;
     }
     if (tokenHash != null && !hasToken(x)) {
       x.getResponseHeaders().set("WWW-Authenticate", "Bearer realm=\"hopstat\"");
-      send(x, 401, error("unauthorized", "this service needs its token: header 'Authorization: Bearer TOKEN'"));
+      send(
+          x,
+          401,
+          error(
+              "unauthorized",
+              "this service needs its token: header 'Authorization: Bearer TOKEN'"));
       return;
     }
     if (method.equals("POST")) {
@@ -141,7 +162,12 @@ public final class HttpApi implements AutoCloseable {
       }
       String type = h.getFirst("Content-Type");
       if (type == null || !type.toLowerCase(Locale.ROOT).startsWith("application/json")) {
-        send(x, 415, error("unsupported-media-type", "POST bodies must be sent as Content-Type: application/json"));
+        send(
+            x,
+            415,
+            error(
+                "unsupported-media-type",
+                "POST bodies must be sent as Content-Type: application/json"));
         return;
       }
     }
@@ -150,16 +176,28 @@ public final class HttpApi implements AutoCloseable {
       return;
     }
     if (method.equals("GET") && STATIC.containsKey(rawPath)) {
-      if (rawPath.equals("/") && tokenHash != null && queryParam(x, "token").filter(t -> t.matches("[A-Za-z0-9._~+/=-]+")).isPresent()) {
-        // the token arrived in the URL (checked above): keep it in a cookie and drop it from the address bar
-        x.getResponseHeaders().add("Set-Cookie", TOKEN_COOKIE + "=" + queryParam(x, "token").get() + "; Path=/; HttpOnly; SameSite=Strict");
+      if (rawPath.equals("/")
+          && tokenHash != null
+          && queryParam(x, "token").filter(t -> t.matches("[A-Za-z0-9._~+/=-]+")).isPresent()) {
+        // the token arrived in the URL (checked above): keep it in a cookie and drop it from the
+        // address bar
+        x.getResponseHeaders()
+            .add(
+                "Set-Cookie",
+                TOKEN_COOKIE
+                    + "="
+                    + queryParam(x, "token").get()
+                    + "; Path=/; HttpOnly; SameSite=Strict");
         x.getResponseHeaders().set("Location", "/");
         send(x, 303, new byte[0], "text/plain");
         return;
       }
       String[] res = STATIC.get(rawPath);
       byte[] bytes = resource(res[0]);
-      x.getResponseHeaders().set("Content-Security-Policy", "default-src 'self'; img-src 'self' data:; frame-ancestors 'none'");
+      x.getResponseHeaders()
+          .set(
+              "Content-Security-Policy",
+              "default-src 'self'; img-src 'self' data:; frame-ancestors 'none'");
       send(x, 200, bytes, res[1]);
       return;
     }
@@ -227,11 +265,12 @@ public final class HttpApi implements AutoCloseable {
         return;
       }
       readBody(x); // bounded; an action takes no body
-      JobRecord after = switch (leaf) {
-        case "cancel" -> service.cancel(id);
-        case "pause" -> service.pause(id);
-        default -> service.resume(id);
-      };
+      JobRecord after =
+          switch (leaf) {
+            case "cancel" -> service.cancel(id);
+            case "pause" -> service.pause(id);
+            default -> service.resume(id);
+          };
       ObjectNode o = JSON.createObjectNode();
       o.put("format", 1);
       o.set("job", JobStore.toJson(after));
@@ -243,15 +282,37 @@ public final class HttpApi implements AutoCloseable {
       return;
     }
     switch (leaf) {
-      case "summary.csv" -> sendText(x, service.summaryText(id, "csv").orElseThrow(), "text/csv; charset=utf-8", job.get());
-      case "summary.json" -> sendText(x, service.summaryText(id, "json").orElseThrow(), "application/json; charset=utf-8", job.get());
+      case "summary.csv" ->
+          sendText(
+              x,
+              service.summaryText(id, "csv").orElseThrow(),
+              "text/csv; charset=utf-8",
+              job.get());
+      case "summary.json" ->
+          sendText(
+              x,
+              service.summaryText(id, "json").orElseThrow(),
+              "application/json; charset=utf-8",
+              job.get());
       case "report" -> {
         Path report = service.runDir(id).resolve("report.html");
         if (Files.isRegularFile(report)) {
-          x.getResponseHeaders().set("Content-Security-Policy", "default-src 'self' 'unsafe-inline' data:; frame-ancestors 'none'");
+          x.getResponseHeaders()
+              .set(
+                  "Content-Security-Policy",
+                  "default-src 'self' 'unsafe-inline' data:; frame-ancestors 'none'");
           send(x, 200, Files.readAllBytes(report), "text/html; charset=utf-8");
         } else {
-          send(x, 404, error("not-found", "job " + id + " has no report.html (run `hopstat report` on " + service.runDir(id) + ")"));
+          send(
+              x,
+              404,
+              error(
+                  "not-found",
+                  "job "
+                      + id
+                      + " has no report.html (run `hopstat report` on "
+                      + service.runDir(id)
+                      + ")"));
         }
       }
       default -> send(x, 404, error("not-found", "no such resource"));
@@ -274,8 +335,13 @@ public final class HttpApi implements AutoCloseable {
     }
     String text;
     try {
-      text = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT)
-          .decode(ByteBuffer.wrap(body)).toString();
+      text =
+          StandardCharsets.UTF_8
+              .newDecoder()
+              .onMalformedInput(CodingErrorAction.REPORT)
+              .onUnmappableCharacter(CodingErrorAction.REPORT)
+              .decode(ByteBuffer.wrap(body))
+              .toString();
     } catch (CharacterCodingException e) {
       throw new InvalidInputException("", null, "the spec is not UTF-8 text");
     }
@@ -304,9 +370,13 @@ public final class HttpApi implements AutoCloseable {
         }
         if (n > MAX_BODY_BYTES) {
           if (discard(in, MAX_DRAIN_BYTES) > 0) {
-            x.getResponseHeaders().set("Connection", "close"); // body left unread: the connection cannot be reused
+            x.getResponseHeaders()
+                .set("Connection", "close"); // body left unread: the connection cannot be reused
           }
-          send(x, 413, error("too-large", "request bodies are limited to " + MAX_BODY_BYTES + " bytes"));
+          send(
+              x,
+              413,
+              error("too-large", "request bodies are limited to " + MAX_BODY_BYTES + " bytes"));
           return null;
         }
       }
@@ -319,7 +389,10 @@ public final class HttpApi implements AutoCloseable {
           if (discard(in, MAX_DRAIN_BYTES - out.size()) > 0) {
             x.getResponseHeaders().set("Connection", "close");
           }
-          send(x, 413, error("too-large", "request bodies are limited to " + MAX_BODY_BYTES + " bytes"));
+          send(
+              x,
+              413,
+              error("too-large", "request bodies are limited to " + MAX_BODY_BYTES + " bytes"));
           return null;
         }
       }
@@ -327,7 +400,10 @@ public final class HttpApi implements AutoCloseable {
     }
   }
 
-  /** Reads and drops up to {@code max} bytes; returns 0 if the body ended, else a positive number (more is left). */
+  /**
+   * Reads and drops up to {@code max} bytes; returns 0 if the body ended, else a positive number
+   * (more is left).
+   */
   private static int discard(InputStream in, long max) throws IOException {
     byte[] buf = new byte[8192];
     long total = 0;
@@ -350,7 +426,9 @@ public final class HttpApi implements AutoCloseable {
   private boolean hasToken(HttpExchange x) {
     Headers h = x.getRequestHeaders();
     String auth = h.getFirst("Authorization");
-    if (auth != null && auth.startsWith("Bearer ") && matches(auth.substring("Bearer ".length()).trim())) {
+    if (auth != null
+        && auth.startsWith("Bearer ")
+        && matches(auth.substring("Bearer ".length()).trim())) {
       return true;
     }
     for (String cookies : h.getOrDefault("Cookie", List.of())) {
@@ -368,7 +446,10 @@ public final class HttpApi implements AutoCloseable {
     return false;
   }
 
-  /** Constant-time: both sides are hashed to 32 bytes first, so neither content nor length leaks through timing. */
+  /**
+   * Constant-time: both sides are hashed to 32 bytes first, so neither content nor length leaks
+   * through timing.
+   */
   private boolean matches(String presented) {
     return MessageDigest.isEqual(sha256(presented.getBytes(StandardCharsets.UTF_8)), tokenHash);
   }
@@ -378,10 +459,15 @@ public final class HttpApi implements AutoCloseable {
       return false;
     }
     int port = server.getAddress().getPort();
-    return host.equals("127.0.0.1:" + port) || host.equals("localhost:" + port) || host.equals("[::1]:" + port);
+    return host.equals("127.0.0.1:" + port)
+        || host.equals("localhost:" + port)
+        || host.equals("[::1]:" + port);
   }
 
-  /** Only {@code /} followed by segments of {@code [A-Za-z0-9._-]} that are not {@code .} or {@code ..}. */
+  /**
+   * Only {@code /} followed by segments of {@code [A-Za-z0-9._-]} that are not {@code .} or {@code
+   * ..}.
+   */
   static boolean isCleanPath(String rawPath) {
     if (rawPath == null || !rawPath.startsWith("/")) {
       return false;
@@ -407,7 +493,9 @@ public final class HttpApi implements AutoCloseable {
       String k = eq < 0 ? kv : kv.substring(0, eq);
       if (k.equals(name)) {
         try {
-          return Optional.of(java.net.URLDecoder.decode(eq < 0 ? "" : kv.substring(eq + 1), StandardCharsets.UTF_8));
+          return Optional.of(
+              java.net.URLDecoder.decode(
+                  eq < 0 ? "" : kv.substring(eq + 1), StandardCharsets.UTF_8));
         } catch (IllegalArgumentException e) {
           throw new InvalidInputException(name, kv.substring(eq + 1), "malformed query parameter");
         }
@@ -425,7 +513,8 @@ public final class HttpApi implements AutoCloseable {
     }
   }
 
-  private void sendText(HttpExchange x, String text, String type, JobRecord job) throws IOException {
+  private void sendText(HttpExchange x, String text, String type, JobRecord job)
+      throws IOException {
     x.getResponseHeaders().set("X-Hopstat-Job-State", job.state().name());
     send(x, 200, text.getBytes(StandardCharsets.UTF_8), type);
   }
@@ -441,7 +530,8 @@ public final class HttpApi implements AutoCloseable {
     send(x, status, JSON.writeValueAsBytes(body), "application/json; charset=utf-8");
   }
 
-  private static void send(HttpExchange x, int status, byte[] body, String type) throws IOException {
+  private static void send(HttpExchange x, int status, byte[] body, String type)
+      throws IOException {
     Headers r = x.getResponseHeaders();
     r.set("Content-Type", type);
     r.set("Cache-Control", "no-store");

@@ -28,15 +28,15 @@ import org.slf4j.LoggerFactory;
 /**
  * The submission inbox {@code ROOT/inbox/}, scanned every poll interval.
  *
- * <p>The rule: the service takes only regular files whose name ends in {@code .json} and does
- * not start with a dot. Write a spec elsewhere in the same file system, or as a dot-file in the
- * inbox ({@code inbox/.demo.json.part}), and rename it to its final name when complete; a rename is
- * atomic, so the service never sees half a file. An optional priority goes in the name:
- * {@code NAME@P.json} with an integer P (default 0; larger runs first).
+ * <p>The rule: the service takes only regular files whose name ends in {@code .json} and does not
+ * start with a dot. Write a spec elsewhere in the same file system, or as a dot-file in the inbox
+ * ({@code inbox/.demo.json.part}), and rename it to its final name when complete; a rename is
+ * atomic, so the service never sees half a file. An optional priority goes in the name: {@code
+ * NAME@P.json} with an integer P (default 0; larger runs first).
  *
- * <p>A valid spec becomes a QUEUED job and its file moves to {@code ROOT/jobs/<id>/source.json}.
- * An invalid one moves to {@code ROOT/rejected/NAME} with {@code NAME.error.txt} beside it holding
- * the CLI's error lines. Files are taken oldest first (modification time, then name).
+ * <p>A valid spec becomes a QUEUED job and its file moves to {@code ROOT/jobs/<id>/source.json}. An
+ * invalid one moves to {@code ROOT/rejected/NAME} with {@code NAME.error.txt} beside it holding the
+ * CLI's error lines. Files are taken oldest first (modification time, then name).
  */
 public final class Inbox implements AutoCloseable {
 
@@ -55,11 +55,13 @@ public final class Inbox implements AutoCloseable {
     this.service = service;
     this.inbox = root.resolve("inbox");
     this.rejected = root.resolve("rejected");
-    this.timer = Executors.newSingleThreadScheduledExecutor(r -> {
-      Thread t = new Thread(r, "hopstat-serve-inbox");
-      t.setDaemon(true);
-      return t;
-    });
+    this.timer =
+        Executors.newSingleThreadScheduledExecutor(
+            r -> {
+              Thread t = new Thread(r, "hopstat-serve-inbox");
+              t.setDaemon(true);
+              return t;
+            });
   }
 
   /** Creates the inbox and rejected directories and starts scanning. */
@@ -85,19 +87,22 @@ public final class Inbox implements AutoCloseable {
     try (Stream<Path> s = Files.list(inbox)) {
       for (Path p : (Iterable<Path>) s::iterator) {
         String name = p.getFileName().toString();
-        if (!name.startsWith(".") && name.endsWith(".json") && Files.isRegularFile(p, LinkOption.NOFOLLOW_LINKS)) {
+        if (!name.startsWith(".")
+            && name.endsWith(".json")
+            && Files.isRegularFile(p, LinkOption.NOFOLLOW_LINKS)) {
           files.add(p);
         }
       }
     }
-    files.sort((a, b) -> {
-      try {
-        int c = Files.getLastModifiedTime(a).compareTo(Files.getLastModifiedTime(b));
-        return c != 0 ? c : a.getFileName().toString().compareTo(b.getFileName().toString());
-      } catch (IOException e) {
-        return a.getFileName().toString().compareTo(b.getFileName().toString());
-      }
-    });
+    files.sort(
+        (a, b) -> {
+          try {
+            int c = Files.getLastModifiedTime(a).compareTo(Files.getLastModifiedTime(b));
+            return c != 0 ? c : a.getFileName().toString().compareTo(b.getFileName().toString());
+          } catch (IOException e) {
+            return a.getFileName().toString().compareTo(b.getFileName().toString());
+          }
+        });
     int n = 0;
     for (Path p : files) {
       if (take(p)) {
@@ -112,7 +117,8 @@ public final class Inbox implements AutoCloseable {
     try {
       Matcher m = NAME.matcher(name);
       if (!m.matches()) {
-        throw new InvalidInputException("inbox file name", name, "must be NAME.json or NAME@PRIORITY.json");
+        throw new InvalidInputException(
+            "inbox file name", name, "must be NAME.json or NAME@PRIORITY.json");
       }
       int priority = 0;
       if (m.group(2) != null) {
@@ -136,12 +142,17 @@ public final class Inbox implements AutoCloseable {
   private static String readSpec(Path file) throws IOException {
     long size = Files.size(file);
     if (size > MAX_SPEC_BYTES) {
-      throw new InvalidInputException("SPEC", size + " bytes", "a spec file may hold at most " + MAX_SPEC_BYTES + " bytes");
+      throw new InvalidInputException(
+          "SPEC", size + " bytes", "a spec file may hold at most " + MAX_SPEC_BYTES + " bytes");
     }
     byte[] bytes = Files.readAllBytes(file);
     try {
-      return StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT)
-          .decode(ByteBuffer.wrap(bytes)).toString();
+      return StandardCharsets.UTF_8
+          .newDecoder()
+          .onMalformedInput(CodingErrorAction.REPORT)
+          .onUnmappableCharacter(CodingErrorAction.REPORT)
+          .decode(ByteBuffer.wrap(bytes))
+          .toString();
     } catch (CharacterCodingException e) {
       throw new InvalidInputException("SPEC", null, "the spec file is not UTF-8 text");
     }
@@ -150,11 +161,15 @@ public final class Inbox implements AutoCloseable {
   private void reject(Path file, InvalidInputException e) throws IOException {
     String name = file.getFileName().toString();
     String target = name;
-    for (int k = 2; Files.exists(rejected.resolve(target)) || Files.exists(rejected.resolve(target + ".error.txt")); k++) {
+    for (int k = 2;
+        Files.exists(rejected.resolve(target))
+            || Files.exists(rejected.resolve(target + ".error.txt"));
+        k++) {
       target = name.substring(0, name.length() - ".json".length()) + "-" + k + ".json";
     }
     String text = String.join("\n", InputErrors.lines(e)) + "\n";
-    RunDirectory.writeAtomically(rejected.resolve(target + ".error.txt"), text.getBytes(StandardCharsets.UTF_8));
+    RunDirectory.writeAtomically(
+        rejected.resolve(target + ".error.txt"), text.getBytes(StandardCharsets.UTF_8));
     Files.move(file, rejected.resolve(target), StandardCopyOption.ATOMIC_MOVE);
     LOG.warn("rejected inbox file {}: {}", name, e.getMessage());
   }

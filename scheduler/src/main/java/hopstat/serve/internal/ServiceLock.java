@@ -13,8 +13,8 @@ import java.nio.file.StandardOpenOption;
 import java.time.Instant;
 
 /**
- * One service per root: an OS lock on {@code ROOT/service.lock}, whose text names the owner. The
- * OS drops the lock when the process dies however it dies, so a crash never leaves the root locked.
+ * One service per root: an OS lock on {@code ROOT/service.lock}, whose text names the owner. The OS
+ * drops the lock when the process dies however it dies, so a crash never leaves the root locked.
  */
 public final class ServiceLock implements AutoCloseable {
 
@@ -30,11 +30,14 @@ public final class ServiceLock implements AutoCloseable {
   }
 
   /**
-   * @throws RunDirectoryException if another live service (in this or another process) holds the root
+   * @throws RunDirectoryException if another live service (in this or another process) holds the
+   *     root
    */
   public static ServiceLock acquire(Path root) throws IOException {
     Path file = root.resolve(FILE);
-    FileChannel channel = FileChannel.open(file, StandardOpenOption.CREATE, StandardOpenOption.READ, StandardOpenOption.WRITE);
+    FileChannel channel =
+        FileChannel.open(
+            file, StandardOpenOption.CREATE, StandardOpenOption.READ, StandardOpenOption.WRITE);
     FileLock lock;
     try {
       lock = channel.tryLock();
@@ -44,8 +47,12 @@ public final class ServiceLock implements AutoCloseable {
     if (lock == null) {
       String owner = new String(Files.readAllBytes(file), StandardCharsets.UTF_8).trim();
       channel.close();
-      throw new RunDirectoryException("a hopstat service already runs on " + root + " (" + (owner.isEmpty() ? "owner unknown" : owner)
-          + "); submit to it (inbox/ or its HTTP API) or stop it first");
+      throw new RunDirectoryException(
+          "a hopstat service already runs on "
+              + root
+              + " ("
+              + (owner.isEmpty() ? "owner unknown" : owner)
+              + "); submit to it (inbox/ or its HTTP API) or stop it first");
     }
     String me = "pid " + ProcessHandle.current().pid() + " since " + Instant.now() + "\n";
     channel.truncate(0);

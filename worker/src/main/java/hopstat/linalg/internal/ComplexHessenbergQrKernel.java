@@ -5,10 +5,10 @@ import org.ejml.data.ZMatrixRMaj;
 /**
  * Eigenvalues of a general complex matrix: Householder reduction to upper Hessenberg form, then
  * single-shift complex QR iteration with Wilkinson shifts and deflation (Golub &amp; Van Loan,
- * "Matrix Computations", 4th ed. 2013, §7.4–7.5; the exceptional shifts every
- * {@link #EXCEPTIONAL_SHIFT_PERIOD} iterations follow the 3/4·|h<sub>k,k−1</sub>| rule of LAPACK
- * {@code zlahqr}). Only the active diagonal block is updated, since no Schur vectors or Schur form
- * are needed.
+ * "Matrix Computations", 4th ed. 2013, §7.4–7.5; the exceptional shifts every {@link
+ * #EXCEPTIONAL_SHIFT_PERIOD} iterations follow the 3/4·|h<sub>k,k−1</sub>| rule of LAPACK {@code
+ * zlahqr}). Only the active diagonal block is updated, since no Schur vectors or Schur form are
+ * needed.
  *
  * <p>No balancing is done; the intended inputs (near-unitary Bott matrices) are well scaled. Cost:
  * (10/3)n³ real flops for the reduction plus O(n²) per QR sweep, typically a few sweeps per
@@ -48,14 +48,17 @@ final class ComplexHessenbergQrKernel {
   }
 
   /** H ← P H P with Householder P = I − 2vv^H zeroing column k below the subdiagonal. */
-  private static void reduceToHessenberg(int n, double[] hr, double[] hi, double[] vr, double[] vi) {
+  private static void reduceToHessenberg(
+      int n, double[] hr, double[] hi, double[] vr, double[] vi) {
     for (int k = 0; k < n - 2; k++) {
       double norm2 = 0.0;
       for (int i = k + 1; i < n; i++) {
         norm2 += hr[i * n + k] * hr[i * n + k] + hi[i * n + k] * hi[i * n + k];
       }
-      double tail = norm2 - (hr[(k + 1) * n + k] * hr[(k + 1) * n + k]
-          + hi[(k + 1) * n + k] * hi[(k + 1) * n + k]);
+      double tail =
+          norm2
+              - (hr[(k + 1) * n + k] * hr[(k + 1) * n + k]
+                  + hi[(k + 1) * n + k] * hi[(k + 1) * n + k]);
       if (tail == 0.0) {
         continue;
       }
@@ -134,8 +137,11 @@ final class ComplexHessenbergQrKernel {
       while (lo > 0) {
         int d = lo * n + lo - 1;
         double sub = Math.abs(hr[d]) + Math.abs(hi[d]);
-        double diag = Math.abs(hr[lo * n + lo]) + Math.abs(hi[lo * n + lo])
-            + Math.abs(hr[(lo - 1) * n + lo - 1]) + Math.abs(hi[(lo - 1) * n + lo - 1]);
+        double diag =
+            Math.abs(hr[lo * n + lo])
+                + Math.abs(hi[lo * n + lo])
+                + Math.abs(hr[(lo - 1) * n + lo - 1])
+                + Math.abs(hi[(lo - 1) * n + lo - 1]);
         if (sub <= EPS * diag || sub < Double.MIN_NORMAL) {
           hr[d] = 0.0;
           hi[d] = 0.0;
@@ -203,8 +209,17 @@ final class ComplexHessenbergQrKernel {
   }
 
   /** One explicit shifted QR step on the block lo..hiIdx: H − μI = QR, H ← RQ + μI. */
-  private static void qrSweep(int n, int lo, int end, double muR, double muI,
-      double[] hr, double[] hi, double[] cs, double[] snr, double[] sni) {
+  private static void qrSweep(
+      int n,
+      int lo,
+      int end,
+      double muR,
+      double muI,
+      double[] hr,
+      double[] hi,
+      double[] cs,
+      double[] snr,
+      double[] sni) {
     for (int k = lo; k <= end; k++) {
       hr[k * n + k] -= muR;
       hi[k * n + k] -= muI;

@@ -2,8 +2,8 @@ package hopstat.linalg.internal;
 
 /**
  * Scratch for {@link ComplexHessenbergQrKernel}: the working matrix (split real and imaginary
- * parts, row-major) and Householder/Givens scratch. Grows to the largest n seen, never shrinks.
- * One per worker thread.
+ * parts, row-major) and Householder/Givens scratch. Grows to the largest n seen, never shrinks. One
+ * per worker thread.
  */
 final class ComplexHessenbergQrWorkspace {
 

@@ -1,14 +1,17 @@
 package hopstat.linalg.internal;
 
-/** Inertia of the 1×1 and 2×2 Hermitian pivot blocks of an LDLᴴ factorisation (derived: eigenvalue signs of a 2×2 Hermitian block from its determinant and trace). */
+/**
+ * Inertia of the 1×1 and 2×2 Hermitian pivot blocks of an LDLᴴ factorisation (derived: eigenvalue
+ * signs of a 2×2 Hermitian block from its determinant and trace).
+ */
 final class InertiaOps {
 
   private InertiaOps() {}
 
   /**
    * Adds the inertia of the 2×2 Hermitian block [[a, b], [b̄, c]] to counts = {positive, negative,
-   * zero}: det &lt; 0 gives one of each; det &gt; 0 two with the sign of the trace; det = 0 one zero
-   * and one with the sign of the trace (two zeros if a = c = 0).
+   * zero}: det &lt; 0 gives one of each; det &gt; 0 two with the sign of the trace; det = 0 one
+   * zero and one with the sign of the trace (two zeros if a = c = 0).
    */
   static void addBlock(double a, double bRe, double bIm, double c, int[] counts) {
     double det = a * c - (bRe * bRe + bIm * bIm);

@@ -7,8 +7,8 @@ import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
 import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
 
 /**
- * Pure-Java Hermitian eigensolver on EJML's real symmetric QR algorithm, through the real
- * embedding of A = A<sub>r</sub> + i A<sub>i</sub>:
+ * Pure-Java Hermitian eigensolver on EJML's real symmetric QR algorithm, through the real embedding
+ * of A = A<sub>r</sub> + i A<sub>i</sub>:
  *
  * <pre>
  *   M = [ A_r  −A_i ]     (2n × 2n, real symmetric because A_rᵀ = A_r and A_iᵀ = −A_i)
@@ -16,8 +16,8 @@ import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
  * </pre>
  *
  * (derived) If [x; y] is a real eigenvector of M with eigenvalue λ then x + iy is an eigenvector of
- * A with the same λ; [−y; x] is then a second, orthogonal eigenvector of M, so every eigenvalue of A
- * appears twice in M. Eigenvalues are taken as the mean of each sorted pair.
+ * A with the same λ; [−y; x] is then a second, orthogonal eigenvector of M, so every eigenvalue of
+ * A appears twice in M. Eigenvalues are taken as the mean of each sorted pair.
  *
  * <p><b>Vectors and degeneracy.</b> The sorted spectrum of M is cut into clusters between pairs
  * whose gap exceeds {@link #CLUSTER_TOLERANCE}·‖A‖₂. A cluster of k complex eigenvalues has a
@@ -26,8 +26,8 @@ import org.ejml.interfaces.decomposition.EigenDecomposition_F64;
  * that space, Σⱼ |⟨w, cⱼ⟩|² = 2). Pivoted complex Gram–Schmidt (largest residual first,
  * re-orthogonalised once) therefore always finds a pivot of squared norm ≥ 1/k; a pivot below
  * {@link #MIN_PIVOT_FRACTION}/k means the pairing broke down numerically and the call returns
- * false. The tolerance √ε balances two errors of order ε·‖A‖/gap (cross-cluster orthogonality)
- * and gap (mixing of nearly degenerate vectors inside a cluster); with gaps much larger than √ε·‖A‖
+ * false. The tolerance √ε balances two errors of order ε·‖A‖/gap (cross-cluster orthogonality) and
+ * gap (mixing of nearly degenerate vectors inside a cluster); with gaps much larger than √ε·‖A‖
  * both are at rounding level.
  *
  * <p>Only the lower triangle of {@code a} is read, and the imaginary parts of its diagonal are
@@ -50,10 +50,13 @@ final class JavaHermitianEigenSolver implements HermitianEigenSolver {
   private int withVectorsSize = -1;
   private double[] sorted = new double[0];
   private int[] order = new int[0];
+
   /** Cluster candidates then, in place, their residuals: 2k rows of n complex, interleaved. */
   private double[] candidates = new double[0];
+
   /** Accepted orthonormal vectors of the current cluster: k rows of n complex, interleaved. */
   private double[] basis = new double[0];
+
   private boolean[] used = new boolean[0];
 
   @Override
@@ -91,7 +94,8 @@ final class JavaHermitianEigenSolver implements HermitianEigenSolver {
     if (n == 0) {
       return true;
     }
-    withVectors = DecompositionFactory_DDRM.eig(2 * n, true, true); // fresh per call: see eigenvalues()
+    withVectors =
+        DecompositionFactory_DDRM.eig(2 * n, true, true); // fresh per call: see eigenvalues()
     withVectorsSize = n;
     if (!decompose(withVectors, a, n)) {
       return false;

@@ -10,8 +10,8 @@ import org.ejml.data.ZMatrixRMaj;
  * <p>Right-looking, unblocked, on a full (both triangles) row-major copy so that symmetric row and
  * column interchanges are plain swaps; interchanges are applied to whole rows, including the
  * columns of L already computed, so the result is P A Pᵀ = L D Lᴴ with one permutation P. Cost
- * about 2n³/3 complex multiply–adds (twice LAPACK's, which updates one triangle): the fallback,
- * not the hot path. Workspace grows, never shrinks; not thread-safe.
+ * about 2n³/3 complex multiply–adds (twice LAPACK's, which updates one triangle): the fallback, not
+ * the hot path. Workspace grows, never shrinks; not thread-safe.
  */
 final class JavaHermitianLdltSolver implements HermitianLdltSolver {
 
@@ -21,12 +21,16 @@ final class JavaHermitianLdltSolver implements HermitianLdltSolver {
   private int n = -1;
   private boolean solvable;
   private final int[] counts = new int[3];
+
   /** Factored matrix: L below the diagonal (unit diagonal implied), D on the diagonal blocks. */
   private double[] f = new double[2];
+
   /** (P b)_i = b[perm[i]]. */
   private int[] perm = new int[1];
+
   /** 1 or 2: the size of the pivot block starting at k (0 for the second row of a 2×2 block). */
   private int[] blockSize = new int[1];
+
   private double[] column = new double[2];
 
   @Override
@@ -114,7 +118,8 @@ final class JavaHermitianLdltSolver implements HermitianLdltSolver {
         k++;
       } else {
         int bi = 2 * ((k + 1) * size + k);
-        InertiaOps.addBlock(f[2 * (k * size + k)], f[bi], -f[bi + 1], f[2 * ((k + 1) * size + k + 1)], counts);
+        InertiaOps.addBlock(
+            f[2 * (k * size + k)], f[bi], -f[bi + 1], f[2 * ((k + 1) * size + k + 1)], counts);
         eliminate2(k, size);
         blockSize[k] = 2;
         blockSize[k + 1] = 0;
@@ -270,10 +275,12 @@ final class JavaHermitianLdltSolver implements HermitianLdltSolver {
   @Override
   public void solve(ZMatrixRMaj b) {
     if (n < 0 || !solvable) {
-      throw new IllegalStateException("solve needs a successful factorisation of a non-singular matrix");
+      throw new IllegalStateException(
+          "solve needs a successful factorisation of a non-singular matrix");
     }
     if (b.numRows != n) {
-      throw new IllegalStateException("right-hand side has " + b.numRows + " rows, the factored matrix " + n);
+      throw new IllegalStateException(
+          "right-hand side has " + b.numRows + " rows, the factored matrix " + n);
     }
     int m = b.numCols;
     if (column.length < 2 * n) {

@@ -2,7 +2,10 @@ package hopstat.linalg.internal;
 
 import hopstat.linalg.HermitianLdltSolver;
 
-/** Constructors of the {@link HermitianLdltSolver} implementations, for {@code HermitianLdltFactory}. */
+/**
+ * Constructors of the {@link HermitianLdltSolver} implementations, for {@code
+ * HermitianLdltFactory}.
+ */
 public final class LdltSolvers {
 
   private LdltSolvers() {}

@@ -48,8 +48,8 @@ final class NativeComplexProducts implements ComplexProducts {
   }
 
   /** c (m×n) = op(a) · op(b) with inner dimension k; a and b keep their stored shapes. */
-  private void gemm(int transA, int transB, ZMatrixRMaj a, ZMatrixRMaj b, ZMatrixRMaj c,
-      int m, int n, int k) {
+  private void gemm(
+      int transA, int transB, ZMatrixRMaj a, ZMatrixRMaj b, ZMatrixRMaj c, int m, int n, int k) {
     c.reshape(m, n);
     if (m == 0 || n == 0) {
       return;
@@ -67,8 +67,21 @@ final class NativeComplexProducts implements ComplexProducts {
     left.put(a.data, 0, lenA);
     right.put(b.data, 0, lenB);
     // Row-major leading dimensions are the stored column counts.
-    cblas_zgemm(CblasRowMajor, transA, transB, m, n, k, one, left, a.numCols, right, b.numCols,
-        zero, result, n);
+    cblas_zgemm(
+        CblasRowMajor,
+        transA,
+        transB,
+        m,
+        n,
+        k,
+        one,
+        left,
+        a.numCols,
+        right,
+        b.numCols,
+        zero,
+        result,
+        n);
     result.get(c.data, 0, lenC);
   }
 }

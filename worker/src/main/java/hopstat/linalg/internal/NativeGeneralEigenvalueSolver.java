@@ -52,10 +52,23 @@ final class NativeGeneralEigenvalueSolver implements GeneralEigenvalueSolver {
     matrix.put(a.data, 0, (int) nn);
     int info =
         LAPACKE_zgeev_work(
-            LAPACK_COL_MAJOR, JOB_NONE, JOB_NONE, n, matrix, n, eigenvalues, unused, 1, unused, 1,
-            work, lwork, rwork);
+            LAPACK_COL_MAJOR,
+            JOB_NONE,
+            JOB_NONE,
+            n,
+            matrix,
+            n,
+            eigenvalues,
+            unused,
+            1,
+            unused,
+            1,
+            work,
+            lwork,
+            rwork);
     if (info < 0) {
-      throw new IllegalStateException("zgeev rejected argument " + (-info) + " (programming error)");
+      throw new IllegalStateException(
+          "zgeev rejected argument " + (-info) + " (programming error)");
     }
     if (info > 0) {
       return false;
@@ -80,8 +93,20 @@ final class NativeGeneralEigenvalueSolver implements GeneralEigenvalueSolver {
     rwork = NativeBufferOps.ensure(rwork, 2L * n);
     int info =
         LAPACKE_zgeev_work(
-            LAPACK_COL_MAJOR, JOB_NONE, JOB_NONE, n, matrix, n, eigenvalues, unused, 1, unused, 1,
-            opt, -1, rwork);
+            LAPACK_COL_MAJOR,
+            JOB_NONE,
+            JOB_NONE,
+            n,
+            matrix,
+            n,
+            eigenvalues,
+            unused,
+            1,
+            unused,
+            1,
+            opt,
+            -1,
+            rwork);
     if (info != 0) {
       throw new IllegalStateException("zgeev workspace query failed, info = " + info);
     }

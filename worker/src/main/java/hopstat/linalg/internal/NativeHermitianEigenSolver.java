@@ -21,11 +21,11 @@ import org.ejml.data.ZMatrixRMaj;
  *
  * <p><b>Index ranges.</b> {@link #eigenpairs} computes all n eigenvalues and all n vectors with
  * {@code RANGE='A'} and copies the wanted columns. Alternatives considered: {@code RANGE='I'}
- * returns only the eigenvalues in the index range (all n are required here, so a second
- * reduction — the O(n³) part — would be needed), and for a partial index range {@code zheevr}
- * leaves MRRR for bisection plus inverse iteration ({@code dstebz}/{@code zstein}), whose cost
- * grows with the square of cluster sizes in degenerate spectra. One {@code RANGE='A'} call does a
- * single reduction; the extra cost is the back-transformation of unwanted vectors.
+ * returns only the eigenvalues in the index range (all n are required here, so a second reduction —
+ * the O(n³) part — would be needed), and for a partial index range {@code zheevr} leaves MRRR for
+ * bisection plus inverse iteration ({@code dstebz}/{@code zstein}), whose cost grows with the
+ * square of cluster sizes in degenerate spectra. One {@code RANGE='A'} call does a single
+ * reduction; the extra cost is the back-transformation of unwanted vectors.
  *
  * <p><b>Workspace.</b> Native buffers (matrix, eigenvalues, vectors, LAPACK work arrays) and one
  * heap scratch array grow to the largest n seen and never shrink; a warm call allocates nothing
@@ -55,6 +55,7 @@ final class NativeHermitianEigenSolver implements HermitianEigenSolver {
   private int lwork;
   private int lrwork;
   private int liwork;
+
   /** Heap copy of the wanted columns, for the conjugating transpose into the caller's matrix. */
   private double[] columns;
 
@@ -141,9 +142,29 @@ final class NativeHermitianEigenSolver implements HermitianEigenSolver {
     // eigenvalues-only solver never allocates the n×n vector buffer.
     int info =
         LAPACKE_zheevr_work(
-            LAPACK_COL_MAJOR, JOBZ_VECTORS, RANGE_ALL, UPLO_UPPER, n, matrix, n, 0.0, 0.0, 0, 0,
-            0.0, found, eigenvalues, eigenvalues, n, support, optWork, -1, optRwork, -1,
-            optIwork, -1);
+            LAPACK_COL_MAJOR,
+            JOBZ_VECTORS,
+            RANGE_ALL,
+            UPLO_UPPER,
+            n,
+            matrix,
+            n,
+            0.0,
+            0.0,
+            0,
+            0,
+            0.0,
+            found,
+            eigenvalues,
+            eigenvalues,
+            n,
+            support,
+            optWork,
+            -1,
+            optRwork,
+            -1,
+            optIwork,
+            -1);
     if (info != 0) {
       throw new IllegalStateException("zheevr workspace query failed, info = " + info);
     }
@@ -164,10 +185,32 @@ final class NativeHermitianEigenSolver implements HermitianEigenSolver {
     int ldz = jobz == JOBZ_VECTORS ? n : 1;
     int info =
         LAPACKE_zheevr_work(
-            LAPACK_COL_MAJOR, jobz, RANGE_ALL, UPLO_UPPER, n, matrix, n, 0.0, 0.0, 0, 0, 0.0,
-            found, eigenvalues, z, ldz, support, work, lwork, rwork, lrwork, iwork, liwork);
+            LAPACK_COL_MAJOR,
+            jobz,
+            RANGE_ALL,
+            UPLO_UPPER,
+            n,
+            matrix,
+            n,
+            0.0,
+            0.0,
+            0,
+            0,
+            0.0,
+            found,
+            eigenvalues,
+            z,
+            ldz,
+            support,
+            work,
+            lwork,
+            rwork,
+            lrwork,
+            iwork,
+            liwork);
     if (info < 0) {
-      throw new IllegalStateException("zheevr rejected argument " + (-info) + " (programming error)");
+      throw new IllegalStateException(
+          "zheevr rejected argument " + (-info) + " (programming error)");
     }
     return info == 0;
   }

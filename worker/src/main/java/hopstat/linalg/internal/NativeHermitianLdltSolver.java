@@ -16,12 +16,12 @@ import org.ejml.data.ZMatrixRMaj;
  * <p><b>Storage.</b> As in {@link NativeHermitianEigenSolver}: EJML's row-major array read
  * column-major is Aᵀ = conj(A) (A Hermitian), whose upper triangle holds A's lower triangle, so we
  * factor conj(A) with {@code UPLO='U'}. conj(A) has the inertia of A. For solves, conj(A) Y =
- * conj(B) gives Y = conj(A⁻¹B): right-hand sides are conjugated (and transposed to column-major)
- * on the way in and conjugated on the way out.
+ * conj(B) gives Y = conj(A⁻¹B): right-hand sides are conjugated (and transposed to column-major) on
+ * the way in and conjugated on the way out.
  *
  * <p><b>Inertia from D</b> ({@code zhetrf} documentation, UPLO='U'): {@code ipiv[k] > 0} marks a
- * 1×1 block D(k,k); {@code ipiv[k] = ipiv[k+1] < 0} a 2×2 block on rows k, k+1 (0-based), stored
- * in the upper triangle. {@code info > 0} means D(info, info) is exactly zero.
+ * 1×1 block D(k,k); {@code ipiv[k] = ipiv[k+1] < 0} a 2×2 block on rows k, k+1 (0-based), stored in
+ * the upper triangle. {@code info > 0} means D(info, info) is exactly zero.
  *
  * <p>Workspace: native matrix, pivots, LAPACK work array and right-hand-side buffer, grow-only. Not
  * thread-safe. Cost: n³/3 complex multiply–adds per factorisation, n² m per solve with m columns.
@@ -66,9 +66,11 @@ final class NativeHermitianLdltSolver implements HermitianLdltSolver {
       queryWorkspace(size);
     }
     matrix.put(a.data, 0, (int) nn);
-    int info = LAPACKE_zhetrf_work(LAPACK_COL_MAJOR, UPLO_UPPER, size, matrix, size, pivots, work, lwork);
+    int info =
+        LAPACKE_zhetrf_work(LAPACK_COL_MAJOR, UPLO_UPPER, size, matrix, size, pivots, work, lwork);
     if (info < 0) {
-      throw new IllegalStateException("zhetrf rejected argument " + (-info) + " (programming error)");
+      throw new IllegalStateException(
+          "zhetrf rejected argument " + (-info) + " (programming error)");
     }
     if (pivotCopy.length < size) {
       pivotCopy = new int[size];
@@ -101,7 +103,8 @@ final class NativeHermitianLdltSolver implements HermitianLdltSolver {
   // which round differently (see NativeGeneralEigenvalueSolver#queryWorkspace).
   private void queryWorkspace(int size) {
     DoublePointer opt = new DoublePointer(2);
-    int info = LAPACKE_zhetrf_work(LAPACK_COL_MAJOR, UPLO_UPPER, size, matrix, size, pivots, opt, -1);
+    int info =
+        LAPACKE_zhetrf_work(LAPACK_COL_MAJOR, UPLO_UPPER, size, matrix, size, pivots, opt, -1);
     if (info != 0) {
       throw new IllegalStateException("zhetrf workspace query failed, info = " + info);
     }
@@ -130,10 +133,12 @@ final class NativeHermitianLdltSolver implements HermitianLdltSolver {
   @Override
   public void solve(ZMatrixRMaj b) {
     if (n < 0 || !solvable) {
-      throw new IllegalStateException("solve needs a successful factorisation of a non-singular matrix");
+      throw new IllegalStateException(
+          "solve needs a successful factorisation of a non-singular matrix");
     }
     if (b.numRows != n) {
-      throw new IllegalStateException("right-hand side has " + b.numRows + " rows, the factored matrix " + n);
+      throw new IllegalStateException(
+          "right-hand side has " + b.numRows + " rows, the factored matrix " + n);
     }
     int m = b.numCols;
     if (n == 0 || m == 0) {
@@ -153,7 +158,9 @@ final class NativeHermitianLdltSolver implements HermitianLdltSolver {
     }
     rhs = NativeBufferOps.ensure(rhs, len);
     rhs.put(rhsCopy, 0, len);
-    int info = LAPACKE_zhetrs2_work(LAPACK_COL_MAJOR, UPLO_UPPER, n, m, matrix, n, pivots, rhs, n, solveWork);
+    int info =
+        LAPACKE_zhetrs2_work(
+            LAPACK_COL_MAJOR, UPLO_UPPER, n, m, matrix, n, pivots, rhs, n, solveWork);
     if (info != 0) {
       throw new IllegalStateException("zhetrs2 failed, info = " + info + " (programming error)");
     }

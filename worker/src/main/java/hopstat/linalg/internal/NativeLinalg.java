@@ -8,8 +8,8 @@ import hopstat.linalg.LinalgKind;
 
 /**
  * Native OpenBLAS/LAPACK backend (bytedeco presets), pinned to one BLAS thread. Stateless and
- * thread-safe; solvers it creates are not. Obtain through {@code LinalgFactory}; the factory
- * checks that the library loaded before handing this out.
+ * thread-safe; solvers it creates are not. Obtain through {@code LinalgFactory}; the factory checks
+ * that the library loaded before handing this out.
  */
 public final class NativeLinalg implements Linalg {
 
