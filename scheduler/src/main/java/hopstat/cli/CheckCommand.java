@@ -16,9 +16,13 @@ import hopstat.task.RealisationRunner;
 import hopstat.task.RealisationWorkspace;
 import java.io.PrintStream;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import java.util.TreeMap;
+import java.util.TreeSet;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -104,10 +108,10 @@ final class CheckCommand implements Callable<Integer> {
           plan.plannedTasks());
     }
     Map<Integer, GridPoint> bySize = new TreeMap<>();
-    Map<Integer, Long> pointsBySize = new TreeMap<>();
+    Map<Integer, List<GridPoint>> allBySize = new TreeMap<>();
     for (GridPoint p : plan.points()) {
       bySize.putIfAbsent(p.point().linearSize(), p);
-      pointsBySize.merge(p.point().linearSize(), 1L, Long::sum);
+      allBySize.computeIfAbsent(p.point().linearSize(), k -> new ArrayList<>()).add(p);
     }
     for (Map.Entry<Integer, GridPoint> e : bySize.entrySet()) {
       RealisationCost c = RealisationCost.of(e.getValue().point());
@@ -130,21 +134,30 @@ final class CheckCommand implements Callable<Integer> {
       Linalg la = LinalgFactory.create(kind);
       RealisationWorkspace workspace = new RealisationWorkspace(la);
       double totalSeconds = 0;
-      for (Map.Entry<Integer, GridPoint> e : bySize.entrySet()) {
-        int p = e.getValue().index();
-        RealisationRunner.run(plan.task(p, 0), workspace);
+      for (Map.Entry<Integer, List<GridPoint>> e : allBySize.entrySet()) {
+        List<GridPoint> points = e.getValue();
+        // the cost can depend strongly on the point (e.g. lyapunov's length grows as gamma -> 0),
+        // so time the first, middle and last point of this size, not only the first
+        Set<Integer> sampled = new TreeSet<>();
+        sampled.add(points.get(0).index());
+        sampled.add(points.get(points.size() / 2).index());
+        sampled.add(points.get(points.size() - 1).index());
+        RealisationRunner.run(plan.task(points.get(0).index(), 0), workspace);
         double sum = 0;
-        for (int r = 1; r <= TIMED_REALISATIONS; r++) {
-          RealisationResult result = RealisationRunner.run(plan.task(p, r), workspace);
-          sum += result.wallSeconds();
+        for (int p : sampled) {
+          for (int r = 1; r <= TIMED_REALISATIONS; r++) {
+            RealisationResult result = RealisationRunner.run(plan.task(p, r), workspace);
+            sum += result.wallSeconds();
+          }
         }
-        double perRealisation = sum / TIMED_REALISATIONS;
-        totalSeconds += perRealisation * pointsBySize.get(e.getKey()) * spec.realisations();
+        double perRealisation = sum / (TIMED_REALISATIONS * sampled.size());
+        totalSeconds += perRealisation * points.size() * spec.realisations();
         out.printf(
             Locale.ROOT,
-            "timing      L = %d: %.4f s per realisation (%s, one thread)%n",
+            "timing      L = %d: %.4f s per realisation (mean over %d grid point(s); %s, one thread)%n",
             e.getKey(),
             perRealisation,
+            sampled.size(),
             la.describe());
       }
       out.printf(
