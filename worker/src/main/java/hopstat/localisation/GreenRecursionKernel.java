@@ -145,37 +145,42 @@ public final class GreenRecursionKernel {
         ws.coupling.zero();
         source.next(ws.onSlice, ws.coupling);
         // Z = (E − H_n) P − T_{n−1} Q for the frame [P; Q] of pairs (ψ_n, ψ_{n−1})
-        ws.products.mult(ws.onSlice, ws.frameTop, ws.z);
-        ws.products.mult(ws.previousCoupling, ws.frameBottom, ws.scratch);
-        double[] z = ws.z.data;
-        double[] p = ws.frameTop.data;
-        double[] tq = ws.scratch.data;
-        int len = 2 * k * k;
-        for (int i = 0; i < len; i++) {
-          z[i] = energy * p[i] - z[i] - tq[i];
-        }
+        formZ(energy, ws.onSlice, ws.previousCoupling, ws.frameTop, ws.frameBottom, ws.z);
         // B† = [T_n; −Z†]; ker B = {(ψ_{n+1}, c) : T_n† ψ_{n+1} = Z c} = last K columns of B†'s
         // full Q
         stack(ws.coupling, ws.z, true, ws.stacked);
-        ComplexHouseholderOps.factor(ws.stacked, ws.reflectors);
-        ComplexHouseholderOps.formQ(ws.reflectors, k, ws.kernel);
-        // new pairs (ψ_{n+1}, ψ_n) = [X; P C], orthonormalised: [X; P C] = F' R
+        ComplexHouseholderOps.factor(ws.stacked, ws.reflectors, ws.row);
+        ComplexHouseholderOps.formQ(ws.reflectors, k, ws.kernel, ws.row);
         split(ws.kernel, ws.x, ws.c);
-        ws.products.mult(ws.frameTop, ws.c, ws.scratch);
-        stack(ws.x, ws.scratch, false, ws.stacked);
-        ComplexHouseholderOps.factor(ws.stacked, ws.reflectors);
-        ComplexHouseholderOps.formQ(ws.reflectors, 0, ws.kernel);
-        split(ws.kernel, ws.frameTop, ws.frameBottom);
-        // A_n = C R⁻¹ maps new-frame coordinates to old ones; M ← M A_n
-        if (!solveRight(ws.c, ws.stacked, ws.a)) {
-          broken = true;
-          break outer;
-        }
-        if (first) {
-          ws.product.setTo(ws.a);
+        // new pairs (ψ_{n+1}, ψ_n) = [X; P C]: X becomes the top, P C the bottom
+        ws.products.mult(ws.frameTop, ws.c, ws.frameBottom);
+        ZMatrixRMaj swap = ws.frameTop;
+        ws.frameTop = ws.x;
+        ws.x = swap;
+        ZMatrixRMaj factor;
+        if (step == BLOCK_SLICES - 1) {
+          // block end: orthonormalise, [X; P C] = F' R, and A_n = C R⁻¹
+          stack(ws.frameTop, ws.frameBottom, false, ws.stacked);
+          ComplexHouseholderOps.factor(ws.stacked, ws.reflectors, ws.row);
+          ComplexHouseholderOps.formQ(ws.reflectors, 0, ws.kernel, ws.row);
+          split(ws.kernel, ws.frameTop, ws.frameBottom);
+          if (!solveRight(ws.c, ws.stacked, ws.a)) {
+            broken = true;
+            break outer;
+          }
+          factor = ws.a;
         } else {
-          ws.products.mult(ws.product, ws.a, ws.scratch);
-          ws.product.setTo(ws.scratch);
+          // inside a block the frame [X; P C] is kept as it is: A_n = C
+          factor = ws.c;
+        }
+        // M ← M A_n
+        if (first) {
+          ws.product.setTo(factor);
+        } else {
+          ws.products.mult(ws.product, factor, ws.scratch);
+          swap = ws.product;
+          ws.product = ws.scratch;
+          ws.scratch = swap;
         }
         double norm = frobenius(ws.product);
         if (!(norm > DECOUPLED) || !Double.isFinite(norm)) {
@@ -184,7 +189,9 @@ public final class GreenRecursionKernel {
         }
         scale(ws.product, 1.0 / norm);
         blockLog += Math.log(norm);
-        ws.previousCoupling.setTo(ws.coupling);
+        swap = ws.previousCoupling;
+        ws.previousCoupling = ws.coupling;
+        ws.coupling = swap;
         first = false;
       }
       slices += BLOCK_SLICES;
@@ -227,9 +234,49 @@ public final class GreenRecursionKernel {
       double u = (i + 1) * 0.6180339887498949;
       s[i] = (u - Math.floor(u)) - 0.5;
     }
-    ComplexHouseholderOps.factor(ws.stacked, ws.reflectors);
-    ComplexHouseholderOps.formQ(ws.reflectors, 0, ws.kernel);
+    ComplexHouseholderOps.factor(ws.stacked, ws.reflectors, ws.row);
+    ComplexHouseholderOps.formQ(ws.reflectors, 0, ws.kernel, ws.row);
     split(ws.kernel, ws.frameTop, ws.frameBottom);
+  }
+
+  /**
+   * z ← (E − H) P − T Q, row by row; zero entries of H and T (nearest-neighbour slices are sparse)
+   * are skipped.
+   */
+  private static void formZ(
+      double energy, ZMatrixRMaj h, ZMatrixRMaj t, ZMatrixRMaj p, ZMatrixRMaj q, ZMatrixRMaj z) {
+    int k = h.numRows;
+    int rowLen = 2 * k;
+    double[] hd = h.data;
+    double[] td = t.data;
+    double[] pd = p.data;
+    double[] qd = q.data;
+    double[] zd = z.data;
+    for (int i = 0; i < k; i++) {
+      int zi = i * rowLen;
+      for (int j = 0; j < rowLen; j++) {
+        zd[zi + j] = energy * pd[zi + j];
+      }
+      for (int l = 0; l < k; l++) {
+        int il = zi + 2 * l;
+        subtractRow(hd[il], hd[il + 1], pd, l * rowLen, zd, zi, rowLen);
+        subtractRow(td[il], td[il + 1], qd, l * rowLen, zd, zi, rowLen);
+      }
+    }
+  }
+
+  /** out[outOff ..] −= (ar + i·ai) · in[inOff ..] over len doubles (len/2 complex); skips a = 0. */
+  private static void subtractRow(
+      double ar, double ai, double[] in, int inOff, double[] out, int outOff, int len) {
+    if (ar == 0 && ai == 0) {
+      return;
+    }
+    for (int j = 0; j < len; j += 2) {
+      double xr = in[inOff + j];
+      double xi = in[inOff + j + 1];
+      out[outOff + j] -= ar * xr - ai * xi;
+      out[outOff + j + 1] -= ar * xi + ai * xr;
+    }
   }
 
   /** out (2K × K) ← [top; bottom] or, if {@code negConjBottom}, [top; −bottom†]. */

@@ -41,6 +41,7 @@ public final class GreenRecursionWorkspace {
   ZMatrixRMaj stacked = new ZMatrixRMaj(2, 1);
   ZMatrixRMaj reflectors = new ZMatrixRMaj(2, 1);
   ZMatrixRMaj kernel = new ZMatrixRMaj(2, 1);
+  double[] row = new double[2];
   ComplexProducts products;
   private ComplexProducts productsLarge;
   private ComplexProducts productsSmall;
@@ -86,6 +87,9 @@ public final class GreenRecursionWorkspace {
     }
     for (ZMatrixRMaj m : new ZMatrixRMaj[] {stacked, reflectors, kernel}) {
       m.reshape(2 * k, k);
+    }
+    if (row.length < 2 * k) {
+      row = new double[2 * k];
     }
     identity.zero();
     for (int i = 0; i < k; i++) {
