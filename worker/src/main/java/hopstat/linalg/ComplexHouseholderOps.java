@@ -160,7 +160,9 @@ public final class ComplexHouseholderOps {
   /**
    * Columns j ≥ {@code from} of x (row stride xCols) ← (1 − 2 v_k v_k†) times them, rows k..m−1,
    * row by row: w = v_k† x accumulated over rows in increasing order (the same sums as column by
-   * column), then x ← x − 2 v_k w. A zero v_k (H_k = 1) is skipped.
+   * column), then x ← x − 2 v_k w. A zero v_k (H_k = 1) is skipped, and so are the zero rows of v_k
+   * (a structurally zero block of A, e.g. below the diagonal of a triangular top block, stays zero
+   * and keeps its reflector rows zero).
    */
   private static void reflectColumns(
       double[] v, int vCols, int k, int m, double[] x, int xCols, int from, double[] w) {
@@ -179,6 +181,9 @@ public final class ComplexHouseholderOps {
       int ik = 2 * (i * vCols + k);
       double vr = v[ik];
       double vi = v[ik + 1];
+      if (vr == 0 && vi == 0) {
+        continue;
+      }
       int base = 2 * i * xCols;
       // conj(v) · x
       for (int j = lo; j < hi; j += 2) {
@@ -195,6 +200,9 @@ public final class ComplexHouseholderOps {
       int ik = 2 * (i * vCols + k);
       double vr = v[ik];
       double vi = v[ik + 1];
+      if (vr == 0 && vi == 0) {
+        continue;
+      }
       int base = 2 * i * xCols;
       for (int j = lo; j < hi; j += 2) {
         double sr = w[j];
