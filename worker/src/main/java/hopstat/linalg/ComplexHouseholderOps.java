@@ -3,10 +3,12 @@ package hopstat.linalg;
 import org.ejml.data.ZMatrixRMaj;
 
 /**
- * Complex Householder QR of a tall m × n matrix (m ≥ n), pure Java, allocation-free: A = Q R with Q
- * = H_0 H_1 ⋯ H_{n−1}, H_k = 1 − 2 v_k v_k† (‖v_k‖ = 1, zero above row k) and R upper triangular
- * (Golub &amp; Van Loan, Matrix Computations, 4th ed., §5.1–5.2; the phase of R_kk is chosen as
- * −x_k/|x_k| to avoid cancellation). Gives both the thin factor and any columns of the full Q, so
+ * Complex Householder QR of a tall m × n matrix (m ≥ n), pure Java (allocation-free given a row
+ * buffer): A = Q R with Q = H_0 H_1 ⋯ H_{n−1}, H_k = 1 − 2 v_k v_k† (‖v_k‖ = 1, zero above row k)
+ * and R upper triangular (Golub &amp; Van Loan, Matrix Computations, 4th ed., §5.1–5.2; the phase
+ * of R_kk is chosen as −x_k/|x_k| to avoid cancellation). The reflectors are applied row by row to
+ * all later columns at once (contiguous memory); each column's sums run over the rows in the same
+ * order as a column-by-column loop. Gives both the thin factor and any columns of the full Q, so
  * the orthogonal complement of range(A) (the null space of A†) comes out without a separate SVD.
  */
 public final class ComplexHouseholderOps {
@@ -14,7 +16,8 @@ public final class ComplexHouseholderOps {
   private ComplexHouseholderOps() {}
 
   /**
-   * Factors {@code a} in place.
+   * Factors {@code a} in place; allocates one row buffer (see {@link #factor(ZMatrixRMaj,
+   * ZMatrixRMaj, double[])} for the allocation-free form).
    *
    * @param a m × n, m ≥ n; overwritten: R in the upper n × n triangle, rows below the diagonal
    *     scratch
@@ -22,6 +25,19 @@ public final class ComplexHouseholderOps {
    *     column where the sub-column was already zero, i.e. H_k = 1)
    */
   public static void factor(ZMatrixRMaj a, ZMatrixRMaj reflectors) {
+    factor(a, reflectors, new double[2 * a.numCols]);
+  }
+
+  /**
+   * Factors {@code a} in place, allocation-free.
+   *
+   * @param a m × n, m ≥ n; overwritten: R in the upper n × n triangle, rows below the diagonal
+   *     scratch
+   * @param reflectors m × n; overwritten with the unit reflector vectors v_k in column k (a zero
+   *     column where the sub-column was already zero, i.e. H_k = 1)
+   * @param row scratch of at least 2n doubles; overwritten
+   */
+  public static void factor(ZMatrixRMaj a, ZMatrixRMaj reflectors, double[] row) {
     int m = a.numRows;
     int n = a.numCols;
     if (m < n || reflectors.numRows != m || reflectors.numCols != n) {
@@ -31,6 +47,7 @@ public final class ComplexHouseholderOps {
     if (a == reflectors) {
       throw new IllegalArgumentException("a and reflectors must differ");
     }
+    requireRow(row, n);
     double[] d = a.data;
     double[] v = reflectors.data;
     reflectors.zero();
@@ -80,21 +97,34 @@ public final class ComplexHouseholderOps {
         d[ik] = 0;
         d[ik + 1] = 0;
       }
-      for (int j = k + 1; j < n; j++) {
-        reflect(v, n, k, m, d, n, j);
-      }
+      reflectColumns(v, n, k, m, d, n, k + 1, row);
     }
   }
 
   /**
    * Writes columns {@code first}..{@code first + out.numCols − 1} of the full m × m Q = H_0 ⋯
-   * H_{n−1}.
+   * H_{n−1}; allocates one row buffer (see {@link #formQ(ZMatrixRMaj, int, ZMatrixRMaj, double[])}
+   * for the allocation-free form).
    *
    * @param reflectors from {@link #factor}; read
    * @param first first column of Q wanted, 0 ≤ first, first + out.numCols ≤ m
    * @param out m × c; overwritten
    */
   public static void formQ(ZMatrixRMaj reflectors, int first, ZMatrixRMaj out) {
+    formQ(reflectors, first, out, new double[2 * out.numCols]);
+  }
+
+  /**
+   * Writes columns {@code first}..{@code first + out.numCols − 1} of the full m × m Q = H_0 ⋯
+   * H_{n−1}, allocation-free. Column first + j starts as the unit vector e_{first+j}, which H_k
+   * leaves alone while k &gt; first + j (v_k vanishes above row k), so those products are skipped.
+   *
+   * @param reflectors from {@link #factor}; read
+   * @param first first column of Q wanted, 0 ≤ first, first + out.numCols ≤ m
+   * @param out m × c; overwritten
+   * @param row scratch of at least 2c doubles; overwritten
+   */
+  public static void formQ(ZMatrixRMaj reflectors, int first, ZMatrixRMaj out, double[] row) {
     int m = reflectors.numRows;
     int n = reflectors.numCols;
     int c = out.numCols;
@@ -109,39 +139,77 @@ public final class ComplexHouseholderOps {
               + " of "
               + m);
     }
+    requireRow(row, c);
     out.zero();
     double[] o = out.data;
     for (int j = 0; j < c; j++) {
       o[2 * ((first + j) * c + j)] = 1.0;
     }
     for (int k = n - 1; k >= 0; k--) {
-      for (int j = 0; j < c; j++) {
-        reflect(reflectors.data, n, k, m, o, c, j);
-      }
+      reflectColumns(reflectors.data, n, k, m, o, c, Math.max(0, k - first), row);
     }
   }
 
-  /** Column j of x (row stride xCols) ← (1 − 2 v_k v_k†) times it, rows k..m−1. */
-  private static void reflect(double[] v, int vCols, int k, int m, double[] x, int xCols, int j) {
-    double sr = 0;
-    double si = 0;
-    for (int i = k; i < m; i++) {
-      int ik = 2 * (i * vCols + k);
-      int ij = 2 * (i * xCols + j);
-      // conj(v) · x
-      sr += v[ik] * x[ij] + v[ik + 1] * x[ij + 1];
-      si += v[ik] * x[ij + 1] - v[ik + 1] * x[ij];
+  private static void requireRow(double[] row, int columns) {
+    if (row.length < 2 * columns) {
+      throw new IllegalArgumentException(
+          "row scratch needs " + 2 * columns + " doubles, has " + row.length);
     }
-    if (sr == 0 && si == 0) {
+  }
+
+  /**
+   * Columns j ≥ {@code from} of x (row stride xCols) ← (1 − 2 v_k v_k†) times them, rows k..m−1,
+   * row by row: w = v_k† x accumulated over rows in increasing order (the same sums as column by
+   * column), then x ← x − 2 v_k w. A zero v_k (H_k = 1) is skipped, and so are the zero rows of v_k
+   * (a structurally zero block of A, e.g. below the diagonal of a triangular top block, stays zero
+   * and keeps its reflector rows zero).
+   */
+  private static void reflectColumns(
+      double[] v, int vCols, int k, int m, double[] x, int xCols, int from, double[] w) {
+    if (from >= xCols) {
       return;
     }
-    sr *= 2;
-    si *= 2;
+    int kk = 2 * (k * vCols + k);
+    // a non-trivial reflector has v_k[k] = phase·(|x_0| + ‖x‖) ≠ 0
+    if (v[kk] == 0 && v[kk + 1] == 0) {
+      return;
+    }
+    int lo = 2 * from;
+    int hi = 2 * xCols;
+    java.util.Arrays.fill(w, lo, hi, 0.0);
     for (int i = k; i < m; i++) {
       int ik = 2 * (i * vCols + k);
-      int ij = 2 * (i * xCols + j);
-      x[ij] -= v[ik] * sr - v[ik + 1] * si;
-      x[ij + 1] -= v[ik] * si + v[ik + 1] * sr;
+      double vr = v[ik];
+      double vi = v[ik + 1];
+      if (vr == 0 && vi == 0) {
+        continue;
+      }
+      int base = 2 * i * xCols;
+      // conj(v) · x
+      for (int j = lo; j < hi; j += 2) {
+        double xr = x[base + j];
+        double xi = x[base + j + 1];
+        w[j] += vr * xr + vi * xi;
+        w[j + 1] += vr * xi - vi * xr;
+      }
+    }
+    for (int j = lo; j < hi; j++) {
+      w[j] *= 2;
+    }
+    for (int i = k; i < m; i++) {
+      int ik = 2 * (i * vCols + k);
+      double vr = v[ik];
+      double vi = v[ik + 1];
+      if (vr == 0 && vi == 0) {
+        continue;
+      }
+      int base = 2 * i * xCols;
+      for (int j = lo; j < hi; j += 2) {
+        double sr = w[j];
+        double si = w[j + 1];
+        x[base + j] -= vr * sr - vi * si;
+        x[base + j + 1] -= vr * si + vi * sr;
+      }
     }
   }
 }

@@ -17,9 +17,22 @@ import org.ejml.data.ZMatrixRMaj;
  * (E − H_n) P − T_{n−1} Q, the solution with frame coordinates c continues to every ψ_{n+1} with
  * T_n† ψ_{n+1} = Z c, i.e. (ψ_{n+1}, c) ∈ ker B, B = [T_n†, −Z] (K × 2K). A Householder QR of B† =
  * [T_n; −Z†] gives an orthonormal basis [X; C] of ker B (the last K columns of its full Q; {@link
- * hopstat.linalg.ComplexHouseholderOps}); the new pairs [X; P C] = F_{n+1} R (QR again). So
- * new-frame coordinates z map to old ones by A_n = C R⁻¹ (derived). No inverse of T_n is needed: a
- * singular T_n makes C singular, which is an infinitely fast channel (γ = ∞), not a breakdown.
+ * hopstat.linalg.ComplexHouseholderOps}); the new pairs are [X; P C]. At the end of every block of
+ * {@link #BLOCK_SLICES} slices they are orthonormalised, [X; P C] = F_{n+1} R (QR again), and
+ * new-frame coordinates z map to old ones by A_n = C R⁻¹; inside a block the frame F_{n+1} = [X; P
+ * C] is kept as it is and A_n = C (derived). No inverse of T_n is needed: a singular T_n makes C
+ * singular, which is an infinitely fast channel (γ = ∞), not a breakdown.
+ *
+ * <p><b>Why once per block suffices.</b> The unorthonormalised frame is not a power iteration: [X;
+ * P C] = diag(1, P)·[X; C] with [X; C] orthonormal and freshly computed each slice, and P the top
+ * of an orthonormal 2K × K matrix (the previous [X; C], or the frame at a block start), so ‖F‖ ≤ 1
+ * and cond(F) ≤ 1/σ_min(P) (derived) — a bound set by the previous slice alone, the same one that
+ * governs R in a scheme that orthonormalises every slice. Once per block caps any carry-over at
+ * {@link #BLOCK_SLICES} slices, as QR_INTERVAL does in {@link TransferMatrixKernel}. And because
+ * the frame is orthonormal at every block end, the product M there differs from the every-slice
+ * scheme's only by a unitary factor on the right, so ‖M‖_F, hence every block increment d_b below,
+ * is the same up to rounding (measured: γ agrees to ~1e-13 relative on the benchmark strips, K =
+ * 2–16).
  *
  * <p><b>Exponent.</b> The forward map restricted to the frame has the K largest exponents γ_1 ≥ … ≥
  * γ_K of the 2K (for Hermitian slices at real E they come in ± pairs, so these are the non-negative
@@ -64,15 +77,19 @@ import org.ejml.data.ZMatrixRMaj;
  * may come out slightly negative; the caller treats γ ≤ 0 as not converged.
  *
  * <p><b>Failure outcomes</b> (NaN exponent, not an exception): a zero or non-finite diagonal entry
- * of R, an overflow, or a one-slice factor ‖M A_n‖ ≤ {@link #DECOUPLED} (the slices decouple to
- * working precision, e.g. T = 0: γ = ∞).
+ * of R (checked at block ends), an overflow, or a one-slice factor ‖M A_n‖ ≤ {@link #DECOUPLED}
+ * (the slices decouple to working precision, e.g. T = 0: γ = ∞).
  *
  * <p><b>Randomness.</b> None drawn here: the {@link SliceSource} supplies H_n and T_n for n = 1, 2,
  * … in order, once each.
  *
- * <p><b>Cost.</b> Per slice two Householder QRs of 2K × K complex matrices and the formation of K
- * columns of Q (pure Java, O(K³)), a triangular solve and three K × K products; memory O(K²),
- * independent of the length. Not benchmarked against the previous engine.
+ * <p><b>Cost.</b> Per slice one Householder QR of the 2K × K matrix [T_n; −Z†] and the formation of
+ * K columns of its Q (pure Java, ≈ 1.7K³ + 3K³ complex multiply-adds, about 1K³ + 2K³ when T_n is
+ * upper triangular, e.g. diagonal, because zero reflector rows are skipped), Z with the zero
+ * entries of H_n and T_{n−1} skipped, and two K × K products (P C and M A_n); once per block of
+ * {@link #BLOCK_SLICES} slices a second QR with the thin Q and a triangular solve. No allocation
+ * per slice; memory O(K²), independent of the length. Measured by {@code SliceRecursionBenchmark}
+ * (design notes, 2026-12-02).
  */
 public final class GreenRecursionKernel {
 
@@ -145,37 +162,42 @@ public final class GreenRecursionKernel {
         ws.coupling.zero();
         source.next(ws.onSlice, ws.coupling);
         // Z = (E − H_n) P − T_{n−1} Q for the frame [P; Q] of pairs (ψ_n, ψ_{n−1})
-        ws.products.mult(ws.onSlice, ws.frameTop, ws.z);
-        ws.products.mult(ws.previousCoupling, ws.frameBottom, ws.scratch);
-        double[] z = ws.z.data;
-        double[] p = ws.frameTop.data;
-        double[] tq = ws.scratch.data;
-        int len = 2 * k * k;
-        for (int i = 0; i < len; i++) {
-          z[i] = energy * p[i] - z[i] - tq[i];
-        }
+        formZ(energy, ws.onSlice, ws.previousCoupling, ws.frameTop, ws.frameBottom, ws.z);
         // B† = [T_n; −Z†]; ker B = {(ψ_{n+1}, c) : T_n† ψ_{n+1} = Z c} = last K columns of B†'s
         // full Q
         stack(ws.coupling, ws.z, true, ws.stacked);
-        ComplexHouseholderOps.factor(ws.stacked, ws.reflectors);
-        ComplexHouseholderOps.formQ(ws.reflectors, k, ws.kernel);
-        // new pairs (ψ_{n+1}, ψ_n) = [X; P C], orthonormalised: [X; P C] = F' R
+        ComplexHouseholderOps.factor(ws.stacked, ws.reflectors, ws.row);
+        ComplexHouseholderOps.formQ(ws.reflectors, k, ws.kernel, ws.row);
         split(ws.kernel, ws.x, ws.c);
-        ws.products.mult(ws.frameTop, ws.c, ws.scratch);
-        stack(ws.x, ws.scratch, false, ws.stacked);
-        ComplexHouseholderOps.factor(ws.stacked, ws.reflectors);
-        ComplexHouseholderOps.formQ(ws.reflectors, 0, ws.kernel);
-        split(ws.kernel, ws.frameTop, ws.frameBottom);
-        // A_n = C R⁻¹ maps new-frame coordinates to old ones; M ← M A_n
-        if (!solveRight(ws.c, ws.stacked, ws.a)) {
-          broken = true;
-          break outer;
-        }
-        if (first) {
-          ws.product.setTo(ws.a);
+        // new pairs (ψ_{n+1}, ψ_n) = [X; P C]: X becomes the top, P C the bottom
+        ws.products.mult(ws.frameTop, ws.c, ws.frameBottom);
+        ZMatrixRMaj swap = ws.frameTop;
+        ws.frameTop = ws.x;
+        ws.x = swap;
+        ZMatrixRMaj factor;
+        if (step == BLOCK_SLICES - 1) {
+          // block end: orthonormalise, [X; P C] = F' R, and A_n = C R⁻¹
+          stack(ws.frameTop, ws.frameBottom, false, ws.stacked);
+          ComplexHouseholderOps.factor(ws.stacked, ws.reflectors, ws.row);
+          ComplexHouseholderOps.formQ(ws.reflectors, 0, ws.kernel, ws.row);
+          split(ws.kernel, ws.frameTop, ws.frameBottom);
+          if (!solveRight(ws.c, ws.stacked, ws.a)) {
+            broken = true;
+            break outer;
+          }
+          factor = ws.a;
         } else {
-          ws.products.mult(ws.product, ws.a, ws.scratch);
-          ws.product.setTo(ws.scratch);
+          // inside a block the frame [X; P C] is kept as it is: A_n = C
+          factor = ws.c;
+        }
+        // M ← M A_n
+        if (first) {
+          ws.product.setTo(factor);
+        } else {
+          ws.products.mult(ws.product, factor, ws.scratch);
+          swap = ws.product;
+          ws.product = ws.scratch;
+          ws.scratch = swap;
         }
         double norm = frobenius(ws.product);
         if (!(norm > DECOUPLED) || !Double.isFinite(norm)) {
@@ -184,7 +206,9 @@ public final class GreenRecursionKernel {
         }
         scale(ws.product, 1.0 / norm);
         blockLog += Math.log(norm);
-        ws.previousCoupling.setTo(ws.coupling);
+        swap = ws.previousCoupling;
+        ws.previousCoupling = ws.coupling;
+        ws.coupling = swap;
         first = false;
       }
       slices += BLOCK_SLICES;
@@ -227,9 +251,49 @@ public final class GreenRecursionKernel {
       double u = (i + 1) * 0.6180339887498949;
       s[i] = (u - Math.floor(u)) - 0.5;
     }
-    ComplexHouseholderOps.factor(ws.stacked, ws.reflectors);
-    ComplexHouseholderOps.formQ(ws.reflectors, 0, ws.kernel);
+    ComplexHouseholderOps.factor(ws.stacked, ws.reflectors, ws.row);
+    ComplexHouseholderOps.formQ(ws.reflectors, 0, ws.kernel, ws.row);
     split(ws.kernel, ws.frameTop, ws.frameBottom);
+  }
+
+  /**
+   * z ← (E − H) P − T Q, row by row; zero entries of H and T (nearest-neighbour slices are sparse)
+   * are skipped.
+   */
+  private static void formZ(
+      double energy, ZMatrixRMaj h, ZMatrixRMaj t, ZMatrixRMaj p, ZMatrixRMaj q, ZMatrixRMaj z) {
+    int k = h.numRows;
+    int rowLen = 2 * k;
+    double[] hd = h.data;
+    double[] td = t.data;
+    double[] pd = p.data;
+    double[] qd = q.data;
+    double[] zd = z.data;
+    for (int i = 0; i < k; i++) {
+      int zi = i * rowLen;
+      for (int j = 0; j < rowLen; j++) {
+        zd[zi + j] = energy * pd[zi + j];
+      }
+      for (int l = 0; l < k; l++) {
+        int il = zi + 2 * l;
+        subtractRow(hd[il], hd[il + 1], pd, l * rowLen, zd, zi, rowLen);
+        subtractRow(td[il], td[il + 1], qd, l * rowLen, zd, zi, rowLen);
+      }
+    }
+  }
+
+  /** out[outOff ..] −= (ar + i·ai) · in[inOff ..] over len doubles (len/2 complex); skips a = 0. */
+  private static void subtractRow(
+      double ar, double ai, double[] in, int inOff, double[] out, int outOff, int len) {
+    if (ar == 0 && ai == 0) {
+      return;
+    }
+    for (int j = 0; j < len; j += 2) {
+      double xr = in[inOff + j];
+      double xi = in[inOff + j + 1];
+      out[outOff + j] -= ar * xr - ai * xi;
+      out[outOff + j + 1] -= ar * xi + ai * xr;
+    }
   }
 
   /** out (2K × K) ← [top; bottom] or, if {@code negConjBottom}, [top; −bottom†]. */

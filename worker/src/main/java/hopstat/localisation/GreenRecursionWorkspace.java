@@ -10,8 +10,10 @@ import org.ejml.data.ZMatrixRMaj;
  * Scratch for {@link GreenRecursionKernel}: twelve K × K complex blocks (the slice's H and T, the
  * previous T, the two halves of the solution frame, Z, the kernel halves X and C, A_n, the
  * accumulated product, a buffer and the identity), three 2K × K blocks (stacked matrix, Householder
- * reflectors, Q columns) and a product engine. Memory O(K²), independent of the bar length. Grows,
- * never shrinks. One per worker thread.
+ * reflectors, Q columns), a 2K-double row buffer for the Householder steps and a product engine.
+ * The kernel swaps same-sized blocks between fields instead of copying them; every run starts by
+ * overwriting what it reads, so no state carries over between runs. Memory O(K²), independent of
+ * the bar length. Grows, never shrinks. One per worker thread.
  *
  * <p>Backend: the Householder steps are pure Java for every K. Slices of K ≤ {@link #SMALL_SLICE}
  * orbitals use the pure-Java products whatever {@code linalg} is, because each native call crosses
@@ -41,6 +43,7 @@ public final class GreenRecursionWorkspace {
   ZMatrixRMaj stacked = new ZMatrixRMaj(2, 1);
   ZMatrixRMaj reflectors = new ZMatrixRMaj(2, 1);
   ZMatrixRMaj kernel = new ZMatrixRMaj(2, 1);
+  double[] row = new double[2];
   ComplexProducts products;
   private ComplexProducts productsLarge;
   private ComplexProducts productsSmall;
@@ -86,6 +89,9 @@ public final class GreenRecursionWorkspace {
     }
     for (ZMatrixRMaj m : new ZMatrixRMaj[] {stacked, reflectors, kernel}) {
       m.reshape(2 * k, k);
+    }
+    if (row.length < 2 * k) {
+      row = new double[2 * k];
     }
     identity.zero();
     for (int i = 0; i < k; i++) {

@@ -81,4 +81,64 @@ class ComplexHouseholderOpsTest {
       }
     }
   }
+
+  /**
+   * The shape the Lyapunov recursion factors, [T; −Z†] with an upper-triangular (here diagonal plus
+   * one super-diagonal) top block: the zero rows of the reflectors are skipped, so check the same
+   * residuals as above (A = Q_thin R, Q_⊥† A = 0, Q†Q = 1 on the complement) and that the top block
+   * of the reflectors stays zero below the diagonal (derived: H_k only mixes row k with the dense
+   * lower block). The allocation-free overloads give the same bits as the allocating ones.
+   */
+  @Test
+  void triangularTopBlockKeepsItsZerosAndFactorsCorrectly() {
+    int k = 5;
+    ZMatrixRMaj a = random(2 * k, k, 77);
+    for (int i = 0; i < k; i++) {
+      for (int j = 0; j < k; j++) {
+        if (j != i && j != i + 1) {
+          a.set(i, j, 0, 0);
+        }
+      }
+    }
+    ZMatrixRMaj work = a.copy();
+    ZMatrixRMaj v = new ZMatrixRMaj(2 * k, k);
+    ComplexHouseholderOps.factor(work, v, new double[2 * k + 6]);
+    for (int i = 0; i < k; i++) {
+      for (int j = 0; j < i; j++) {
+        assertThat(v.getReal(i, j)).isZero();
+        assertThat(v.getImag(i, j)).isZero();
+      }
+    }
+    ZMatrixRMaj work2 = a.copy();
+    ZMatrixRMaj v2 = new ZMatrixRMaj(2 * k, k);
+    ComplexHouseholderOps.factor(work2, v2);
+    assertThat(work2.data).containsExactly(work.data);
+    assertThat(v2.data).containsExactly(v.data);
+    ZMatrixRMaj thin = new ZMatrixRMaj(2 * k, k);
+    ComplexHouseholderOps.formQ(v, 0, thin, new double[2 * k]);
+    ZMatrixRMaj perp = new ZMatrixRMaj(2 * k, k);
+    ComplexHouseholderOps.formQ(v, k, perp, new double[2 * k]);
+    ZMatrixRMaj perp2 = new ZMatrixRMaj(2 * k, k);
+    ComplexHouseholderOps.formQ(v, k, perp2);
+    assertThat(perp2.data).containsExactly(perp.data);
+    ZMatrixRMaj r = new ZMatrixRMaj(k, k);
+    for (int i = 0; i < k; i++) {
+      for (int j = i; j < k; j++) {
+        r.set(i, j, work.getReal(i, j), work.getImag(i, j));
+      }
+    }
+    ZMatrixRMaj qr = new ZMatrixRMaj(2 * k, k);
+    CommonOps_ZDRM.mult(thin, r, qr);
+    CommonOps_ZDRM.subtract(qr.copy(), a, qr);
+    assertThat(NormOps_ZDRM.normF(qr)).isLessThan(1e-14 * (1 + NormOps_ZDRM.normF(a)));
+    ZMatrixRMaj ph = new ZMatrixRMaj(k, 2 * k);
+    CommonOps_ZDRM.transposeConjugate(perp, ph);
+    ZMatrixRMaj pa = new ZMatrixRMaj(k, k);
+    CommonOps_ZDRM.mult(ph, a, pa);
+    assertThat(NormOps_ZDRM.normF(pa)).isLessThan(1e-14 * (1 + NormOps_ZDRM.normF(a)));
+    ZMatrixRMaj pp = new ZMatrixRMaj(k, k);
+    CommonOps_ZDRM.mult(ph, perp, pp);
+    CommonOps_ZDRM.subtract(pp.copy(), CommonOps_ZDRM.identity(k), pp);
+    assertThat(NormOps_ZDRM.normF(pp)).isLessThan(1e-14);
+  }
 }
