@@ -45,67 +45,73 @@ public final class SliceRecursionBenchmark {
             + ", "
             + slices
             + " slices, periodic transverse)");
+    // warm-up: let the JIT compile both engines before anything is timed
+    measure(model, parameters, 8, slices / 4);
     for (String size : sizes) {
-      int m = Integer.parseInt(size.trim());
-      Lattice slice = model.sliceLattice(m, Boundary.PERIODIC);
-      int k = slice.orbitals();
-      double[] hopping = new double[k * k];
-      model.interSliceHopping(parameters, slice, hopping);
-      LyapunovSpec spec = new LyapunovSpec(ENERGY, 0.0, slices);
-
-      RandomGenerator random = SeedOps.generator(SeedOps.realisationSeed(77, m, 0));
-      TransferMatrixWorkspace tmWorkspace = new TransferMatrixWorkspace();
-      long start = System.nanoTime();
-      LyapunovResult tm =
-          TransferMatrixKernel.run(
-              hopping,
-              k,
-              spec,
-              h -> {
-                model.addCleanSlice(parameters, slice, h);
-                for (int s = 0; s < k; s++) {
-                  h.addOnsite(s, W * (random.nextDouble() - 0.5));
-                }
-              },
-              tmWorkspace);
-      double tmSeconds = (System.nanoTime() - start) * 1e-9;
-
-      HamiltonianBuilder clean = new HamiltonianBuilder();
-      clean.reset(k);
-      model.addCleanSlice(parameters, slice, clean);
-      ZMatrixRMaj cleanSlice = new ZMatrixRMaj(k, k);
-      clean.toDense(cleanSlice);
-      RandomGenerator sameRandom = SeedOps.generator(SeedOps.realisationSeed(77, m, 0));
-      GreenRecursionWorkspace recWorkspace = new GreenRecursionWorkspace(LinalgFactory.preferred());
-      start = System.nanoTime();
-      LyapunovResult rec =
-          GreenRecursionKernel.run(
-              k,
-              spec,
-              (h, t) -> {
-                h.setTo(cleanSlice);
-                for (int s = 0; s < k; s++) {
-                  h.set(s, s, h.getReal(s, s) + W * (sameRandom.nextDouble() - 0.5), 0.0);
-                  for (int j = 0; j < k; j++) {
-                    t.set(s, j, hopping[j * k + s], 0.0); // T_n = H_{n+1,n} = (H_{n,n+1})^T, real
-                  }
-                }
-              },
-              recWorkspace);
-      double recSeconds = (System.nanoTime() - start) * 1e-9;
-      System.out.println(
-          String.format(
-              Locale.ROOT,
-              "%d %d %.6f %.4f %.6f %.4f %.0f %.0f %.2f",
-              m,
-              k,
-              tm.smallestPositive(),
-              tm.relativeError(),
-              rec.smallestPositive(),
-              rec.relativeError(),
-              tm.slices() / tmSeconds,
-              rec.slices() / recSeconds,
-              (recSeconds / rec.slices()) / (tmSeconds / tm.slices())));
+      System.out.println(measure(model, parameters, Integer.parseInt(size.trim()), slices));
     }
+  }
+
+  /** Runs both engines on one strip of width m and returns the result line. */
+  private static String measure(
+      AndersonModel model, ParameterValues parameters, int m, long slices) {
+    Lattice slice = model.sliceLattice(m, Boundary.PERIODIC);
+    int k = slice.orbitals();
+    double[] hopping = new double[k * k];
+    model.interSliceHopping(parameters, slice, hopping);
+    LyapunovSpec spec = new LyapunovSpec(ENERGY, 0.0, slices);
+
+    RandomGenerator random = SeedOps.generator(SeedOps.realisationSeed(77, m, 0));
+    TransferMatrixWorkspace tmWorkspace = new TransferMatrixWorkspace();
+    long start = System.nanoTime();
+    LyapunovResult tm =
+        TransferMatrixKernel.run(
+            hopping,
+            k,
+            spec,
+            h -> {
+              model.addCleanSlice(parameters, slice, h);
+              for (int s = 0; s < k; s++) {
+                h.addOnsite(s, W * (random.nextDouble() - 0.5));
+              }
+            },
+            tmWorkspace);
+    double tmSeconds = (System.nanoTime() - start) * 1e-9;
+
+    HamiltonianBuilder clean = new HamiltonianBuilder();
+    clean.reset(k);
+    model.addCleanSlice(parameters, slice, clean);
+    ZMatrixRMaj cleanSlice = new ZMatrixRMaj(k, k);
+    clean.toDense(cleanSlice);
+    RandomGenerator sameRandom = SeedOps.generator(SeedOps.realisationSeed(77, m, 0));
+    GreenRecursionWorkspace recWorkspace = new GreenRecursionWorkspace(LinalgFactory.preferred());
+    start = System.nanoTime();
+    LyapunovResult rec =
+        GreenRecursionKernel.run(
+            k,
+            spec,
+            (h, t) -> {
+              h.setTo(cleanSlice);
+              for (int s = 0; s < k; s++) {
+                h.set(s, s, h.getReal(s, s) + W * (sameRandom.nextDouble() - 0.5), 0.0);
+                for (int j = 0; j < k; j++) {
+                  t.set(s, j, hopping[j * k + s], 0.0); // T_n = H_{n+1,n} = (H_{n,n+1})^T, real
+                }
+              }
+            },
+            recWorkspace);
+    double recSeconds = (System.nanoTime() - start) * 1e-9;
+    return (String.format(
+        Locale.ROOT,
+        "%d %d %.6f %.4f %.6f %.4f %.0f %.0f %.2f",
+        m,
+        k,
+        tm.smallestPositive(),
+        tm.relativeError(),
+        rec.smallestPositive(),
+        rec.relativeError(),
+        tm.slices() / tmSeconds,
+        rec.slices() / recSeconds,
+        (recSeconds / rec.slices()) / (tmSeconds / tm.slices())));
   }
 }
